@@ -1,0 +1,1 @@
+export { toStl, STL_FACET_BYTES, STL_HEADER_BYTES, type StlMesh, type StlOptions, type StlVec3 } from './toStl.ts';

@@ -1,0 +1,20 @@
+export type { Mesh, Triangle, Vec2, Vec3 } from './mesh.ts';
+export { meshVolumeMm3 } from './meshVolumeMm3.ts';
+export { meshBounds, type MeshBounds } from './meshBounds.ts';
+export { validateMesh } from './validateMesh.ts';
+export { triangulatePolygon } from './triangulatePolygon.ts';
+export { gnomonSolid, GNOMON_DEFAULTS, type GnomonOptions, type GnomonPart, type GnomonTab, type GnomonNotch } from './gnomonSolid.ts';
+export {
+  wedgeSolid,
+  WEDGE_DEFAULTS,
+  WEDGE_MAX_TILT_DEG,
+  WEDGE_MIN_SEAT_MM,
+  WEDGE_MIN_WALL_MM,
+  WEDGE_SLAB_BELOW_DEG,
+  type WedgeOptions,
+  type WedgePart,
+  type WedgeHoles,
+  type WedgeHole,
+  type WedgeCountersink,
+  type WedgeArrow,
+} from './wedgeSolid.ts';
