@@ -1,0 +1,71 @@
+import { assertFinite, assertPositive, quote } from './checks.ts';
+
+/**
+ * The engraving writers' input, decoupled from the layout code.
+ *
+ * Coordinates are plate coordinates: millimetres, origin at the plate's
+ * lower-left corner, x to the right, y up, exactly as plate.dxf uses; the top
+ * of the stock is Z = 0 and cuts go to negative Z.
+ */
+
+/** A point `[x, y]` in mm. */
+export type Vec2 = readonly [number, number];
+
+/** What a path engraves; used for labels, grouping and the flat-mill rule. */
+export type EngraveOperation = 'marks' | 'text' | 'curves';
+
+/** One engraving stroke: a polyline traced by the tool centre. */
+export interface EngravePath {
+  readonly points: readonly Vec2[];
+  /** true: the last point joins the first (a loop). */
+  readonly closed: boolean;
+  /** Wanted groove width on the face, mm. Text glyphs carry the text's stroke width. */
+  readonly widthMm: number;
+  readonly operation: EngraveOperation;
+  /** Human label, e.g. 'hour 09' or 'numeral IX'; goes into comments. */
+  readonly label: string;
+}
+
+/** Everything to engrave on one plate. */
+export interface EngraveJob {
+  readonly paths: readonly EngravePath[];
+  readonly stock: {
+    readonly widthMm: number;
+    readonly lengthMm: number;
+    readonly thicknessMm: number;
+    readonly material: string;
+  };
+  /** Spec summary lines for header comments. */
+  readonly title: readonly string[];
+}
+
+const OPERATIONS: readonly EngraveOperation[] = ['marks', 'text', 'curves'];
+
+/**
+ * Check a job's invariants and throw an Error naming the first bad field:
+ * finite points, at least 2 points per path (3 for a loop), a positive width,
+ * a known operation, a positive stock size.
+ * Points outside the stock are not an error here (the writers report them).
+ */
+export function validateEngraveJob(job: EngraveJob): void {
+  assertPositive(job.stock.widthMm, 'stock.widthMm', 'mm');
+  assertPositive(job.stock.lengthMm, 'stock.lengthMm', 'mm');
+  assertPositive(job.stock.thicknessMm, 'stock.thicknessMm', 'mm');
+  job.paths.forEach((path, i) => {
+    const at = `paths[${i}]`;
+    const min = path.closed ? 3 : 2;
+    if (!Array.isArray(path.points) || path.points.length < min) {
+      throw new Error(
+        `${at}.points must hold at least ${min} points for a${path.closed ? ' closed' : 'n open'} path, got ${path.points?.length ?? quote(path.points)}`,
+      );
+    }
+    path.points.forEach((p, j) => {
+      assertFinite(p[0], `${at}.points[${j}][0]`);
+      assertFinite(p[1], `${at}.points[${j}][1]`);
+    });
+    assertPositive(path.widthMm, `${at}.widthMm`, 'mm');
+    if (!OPERATIONS.includes(path.operation)) {
+      throw new Error(`${at}.operation must be one of ${OPERATIONS.join(', ')}, got ${quote(path.operation)}`);
+    }
+  });
+}

@@ -1,0 +1,85 @@
+import { formatNumber } from './formatNumber.ts';
+import { ngcComment } from './ngcComment.ts';
+
+/**
+ * The intermediate record list both G-code writers build before serialising,
+ * and the one serialiser. Targets are absolute (G90), mm; only the axes given
+ * are written.
+ */
+
+/** A move target: the axes to write. */
+export interface AxisTarget {
+  readonly x?: number;
+  readonly y?: number;
+  readonly z?: number;
+}
+
+export type GcodeRecord =
+  /** A comment line `( … )`, made safe by ngcComment. */
+  | { readonly kind: 'comment'; readonly text: string }
+  /** Modal words written as they are, e.g. 'G21 G90 G17 G94'. */
+  | { readonly kind: 'modal'; readonly words: string }
+  /** G0 rapid. */
+  | { readonly kind: 'rapid'; readonly to: AxisTarget }
+  /** G1 feed; the F word is written only when it changes. */
+  | { readonly kind: 'feed'; readonly to: AxisTarget; readonly feedMmPerMin: number }
+  /** M3 (cw) / M4 (ccw, laser dynamic power) with an S word, or M5 (off). */
+  | { readonly kind: 'spindle'; readonly mode: 'cw' | 'ccw' | 'off'; readonly s?: number }
+  /** A bare S word: spindle speed, or laser power in M4 mode. */
+  | { readonly kind: 'power'; readonly s: number }
+  /** T… M6. */
+  | { readonly kind: 'toolChange'; readonly tool: number }
+  /** M2 program end. */
+  | { readonly kind: 'end' };
+
+/**
+ * Serialise records to G-code text, one block per line, '\n' line ends and a
+ * final newline. Coordinates are written with `decimals` places, F and S words
+ * with trailing zeros trimmed (formatNumber).
+ */
+export function serializeGcode(records: readonly GcodeRecord[], decimals: number): string {
+  const lines: string[] = [];
+  let feed: string | undefined;
+  const axes = (to: AxisTarget): string =>
+    (['x', 'y', 'z'] as const)
+      .filter((a) => to[a] !== undefined)
+      .map((a) => ` ${a.toUpperCase()}${formatNumber(to[a] as number, decimals)}`)
+      .join('');
+  for (const r of records) {
+    switch (r.kind) {
+      case 'comment':
+        lines.push(`(${ngcComment(r.text)})`);
+        break;
+      case 'modal':
+        lines.push(r.words);
+        break;
+      case 'rapid':
+        lines.push(`G0${axes(r.to)}`);
+        break;
+      case 'feed': {
+        const f = formatNumber(r.feedMmPerMin, decimals, true);
+        lines.push(`G1${axes(r.to)}${f === feed ? '' : ` F${f}`}`);
+        feed = f;
+        break;
+      }
+      case 'spindle':
+        if (r.mode === 'off') lines.push('M5');
+        else lines.push(`${r.s === undefined ? '' : `S${formatNumber(r.s, decimals, true)} `}${r.mode === 'cw' ? 'M3' : 'M4'}`);
+        break;
+      case 'power':
+        lines.push(`S${formatNumber(r.s, decimals, true)}`);
+        break;
+      case 'toolChange':
+        lines.push(`T${r.tool} M6`);
+        break;
+      case 'end':
+        lines.push('M2');
+        break;
+      default: {
+        const never: never = r;
+        throw new Error(`unknown G-code record ${JSON.stringify(never)}`);
+      }
+    }
+  }
+  return `${lines.join('\n')}\n`;
+}

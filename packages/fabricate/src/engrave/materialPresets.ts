@@ -1,0 +1,157 @@
+import { assertInRange, assertPositive, assertNonNegative, quote } from './checks.ts';
+
+/**
+ * Engraving presets per plate material, and the merge of spec overrides over
+ * them.
+ *
+ * Every value is a conservative starting point of the kind printed in router,
+ * bit and laser makers' feed charts for a 1/8" (3.175 mm) shank 90° V-bit on
+ * a small CNC router with a 0.5–1 kW spindle, and for a 40–60 W CO2 or a
+ * 10–20 W diode laser (common practice, memory). They are not measured here:
+ * cut a test groove on scrap and tune feeds, speeds and powers per machine.
+ */
+
+/** Materials with a preset. */
+export const MATERIAL_NAMES = ['aluminium', 'brass', 'stainless', 'acrylic', 'hardwood', 'slate'] as const;
+export type MaterialName = (typeof MATERIAL_NAMES)[number];
+
+/** The material-dependent part of the settings. */
+export interface MaterialPreset {
+  /** Spindle speed, rev/min. */
+  readonly spindleRpm: number;
+  /** Cutting feed along the path, mm/min. */
+  readonly feedMmPerMin: number;
+  /** Vertical plunge feed, mm/min. */
+  readonly plungeMmPerMin: number;
+  /** Largest depth of one pass, mm. */
+  readonly stepDownMm: number;
+  /** Laser power, percent of the machine's maximum. */
+  readonly laserPowerPct: number;
+  /** Laser scoring speed, mm/min. */
+  readonly laserSpeedMmPerMin: number;
+}
+
+/** Presets by material (common practice, memory; see the file comment). */
+export const MATERIAL_PRESETS: Readonly<Record<MaterialName, MaterialPreset>> = {
+  // 6061/5052 sheet: high rpm, light chip, shallow passes, use mist or WD-40.
+  // Bare aluminium reflects CO2/diode light: the laser values assume a
+  // marking compound (or a fibre laser at its own settings).
+  aluminium: { spindleRpm: 16000, feedMmPerMin: 400, plungeMmPerMin: 100, stepDownMm: 0.15, laserPowerPct: 100, laserSpeedMmPerMin: 600 },
+  // Free-machining brass (CZ121/C360) cuts cleanly dry, a little faster than aluminium.
+  brass: { spindleRpm: 12000, feedMmPerMin: 500, plungeMmPerMin: 120, stepDownMm: 0.15, laserPowerPct: 100, laserSpeedMmPerMin: 500 },
+  // 304/316 stainless work-hardens: slow feed, very light passes, carbide bit.
+  // Laser values again assume a marking compound.
+  stainless: { spindleRpm: 10000, feedMmPerMin: 200, plungeMmPerMin: 50, stepDownMm: 0.05, laserPowerPct: 100, laserSpeedMmPerMin: 400 },
+  // Cast acrylic (PMMA): fast enough not to melt, single-flute bit; CO2 scores it at low power.
+  acrylic: { spindleRpm: 16000, feedMmPerMin: 1000, plungeMmPerMin: 300, stepDownMm: 0.5, laserPowerPct: 30, laserSpeedMmPerMin: 3000 },
+  // Oak, beech, iroko and the like.
+  hardwood: { spindleRpm: 18000, feedMmPerMin: 1500, plungeMmPerMin: 500, stepDownMm: 1, laserPowerPct: 40, laserSpeedMmPerMin: 2000 },
+  // Natural slate: abrasive and brittle, moderate feed; a laser marks it light grey.
+  slate: { spindleRpm: 12000, feedMmPerMin: 600, plungeMmPerMin: 200, stepDownMm: 0.3, laserPowerPct: 60, laserSpeedMmPerMin: 1500 },
+};
+
+/** All settings the engraving writers use. Lengths mm, speeds mm/min. */
+export interface EngraveSettings extends MaterialPreset {
+  readonly material: MaterialName;
+  /** Height for the first and last moves and around tool changes, mm above the stock top. */
+  readonly safeZMm: number;
+  /** Height for rapids between paths, mm above the stock top (<= safeZMm). */
+  readonly clearanceZMm: number;
+  /** Included angle of the V-bit, degrees. */
+  readonly vbitAngleDeg: number;
+  /** Width of the V-bit's flat tip, mm (0 for a sharp point). */
+  readonly vbitTipMm: number;
+  /** Widest groove the V-bit can cut (its diameter), mm. */
+  readonly vbitMaxWidthMm: number;
+  /** Diameter of an optional flat end mill for wide marks, mm; undefined = V-bit only. */
+  readonly flatEndMillMm: number | undefined;
+  /** Marks at least this wide go to the flat end mill when there is one, mm (default: the mill's diameter). */
+  readonly flatMinWidthMm: number | undefined;
+  /** Depth of flat-mill grooves, mm. */
+  readonly flatDepthMm: number;
+  /** Largest step across between parallel flat-mill passes, as a fraction of the mill diameter. */
+  readonly flatStepoverFraction: number;
+  /** The S word for 100 % laser power (GRBL's $30, default 1000). */
+  readonly laserMaxS: number;
+  /** Rapid (G0) rate used for the time estimate, mm/min. */
+  readonly rapidMmPerMin: number;
+}
+
+/** Spec overrides: any setting but the material. */
+export type EngraveOverrides = { readonly [K in Exclude<keyof EngraveSettings, 'material'>]?: EngraveSettings[K] };
+
+/** Material-independent defaults (common practice, memory). */
+export const ENGRAVE_DEFAULTS = {
+  safeZMm: 5, // clears clamps and screws on a small router table
+  clearanceZMm: 1, // enough over a flat, faced plate
+  vbitAngleDeg: 90, // the most common engraving V-bit
+  vbitTipMm: 0, // sharp point
+  vbitMaxWidthMm: 3.175, // 1/8" shank 90° bit
+  flatEndMillMm: undefined,
+  flatMinWidthMm: undefined,
+  flatDepthMm: 0.3, // a shallow, paint-fillable groove
+  flatStepoverFraction: 0.5, // half the diameter: no ridges left between passes
+  laserMaxS: 1000, // GRBL default $30
+  rapidMmPerMin: 3000, // typical hobby-router G0 rate
+} as const satisfies Omit<EngraveSettings, 'material' | keyof MaterialPreset>;
+
+const SETTING_KEYS: readonly string[] = [
+  ...Object.keys(MATERIAL_PRESETS.aluminium),
+  ...Object.keys(ENGRAVE_DEFAULTS),
+].sort();
+
+/**
+ * Merge spec overrides over the material preset and the defaults, then check
+ * every value. Keys whose value is `undefined` are ignored.
+ *
+ * @param material one of MATERIAL_NAMES
+ * @param overrides any EngraveSettings field but `material`
+ * @throws Error naming the field and value: unknown material (lists the allowed
+ *   ones), unknown override key, feed/plunge/rpm/step-down <= 0, clearance above
+ *   safe height, V-bit angle outside (0, 180) deg, tip wider than the bit,
+ *   laser power outside (0, 100] %.
+ * @example resolveEngraveSettings('brass', { feedMmPerMin: 350 }).feedMmPerMin // 350
+ */
+export function resolveEngraveSettings(material: string, overrides: EngraveOverrides = {}): EngraveSettings {
+  if (!(MATERIAL_NAMES as readonly string[]).includes(material)) {
+    throw new Error(`stock.material ${quote(material)} has no engraving preset; allowed: ${MATERIAL_NAMES.join(', ')}`);
+  }
+  const given: Record<string, unknown> = {};
+  for (const [key, value] of Object.entries(overrides)) {
+    if (!SETTING_KEYS.includes(key)) {
+      throw new Error(`engrave setting ${quote(key)} is unknown; allowed: ${SETTING_KEYS.join(', ')}`);
+    }
+    if (value !== undefined) given[key] = value;
+  }
+  const s = { ...ENGRAVE_DEFAULTS, ...MATERIAL_PRESETS[material as MaterialName], ...given, material } as EngraveSettings;
+
+  assertPositive(s.spindleRpm, 'spindleRpm', 'rev/min');
+  assertPositive(s.feedMmPerMin, 'feedMmPerMin', 'mm/min');
+  assertPositive(s.plungeMmPerMin, 'plungeMmPerMin', 'mm/min');
+  assertPositive(s.stepDownMm, 'stepDownMm', 'mm');
+  assertPositive(s.safeZMm, 'safeZMm', 'mm');
+  assertPositive(s.clearanceZMm, 'clearanceZMm', 'mm');
+  if (s.clearanceZMm > s.safeZMm) {
+    throw new Error(`clearanceZMm ${s.clearanceZMm} must not exceed safeZMm ${s.safeZMm}`);
+  }
+  assertInRange(s.vbitAngleDeg, 'vbitAngleDeg', 0, 180, { hiInclusive: false, unit: 'deg' });
+  assertNonNegative(s.vbitTipMm, 'vbitTipMm', 'mm');
+  assertPositive(s.vbitMaxWidthMm, 'vbitMaxWidthMm', 'mm');
+  if (!(s.vbitMaxWidthMm > s.vbitTipMm)) {
+    throw new Error(`vbitMaxWidthMm ${s.vbitMaxWidthMm} must exceed vbitTipMm ${s.vbitTipMm}`);
+  }
+  if (s.flatEndMillMm !== undefined) assertPositive(s.flatEndMillMm, 'flatEndMillMm', 'mm');
+  if (s.flatMinWidthMm !== undefined) {
+    assertPositive(s.flatMinWidthMm, 'flatMinWidthMm', 'mm');
+    if (s.flatEndMillMm !== undefined && s.flatMinWidthMm < s.flatEndMillMm) {
+      throw new Error(`flatMinWidthMm ${s.flatMinWidthMm} must be >= flatEndMillMm ${s.flatEndMillMm} (a mill cannot cut a narrower groove)`);
+    }
+  }
+  assertPositive(s.flatDepthMm, 'flatDepthMm', 'mm');
+  assertInRange(s.flatStepoverFraction, 'flatStepoverFraction', 0, 1);
+  assertInRange(s.laserPowerPct, 'laserPowerPct', 0, 100, { unit: '%' });
+  assertPositive(s.laserSpeedMmPerMin, 'laserSpeedMmPerMin', 'mm/min');
+  assertPositive(s.laserMaxS, 'laserMaxS');
+  assertPositive(s.rapidMmPerMin, 'rapidMmPerMin', 'mm/min');
+  return s;
+}

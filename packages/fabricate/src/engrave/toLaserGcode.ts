@@ -1,0 +1,82 @@
+import type { EngraveJob, Vec2 } from './engraveInput.ts';
+import { validateEngraveJob } from './engraveInput.ts';
+import { estimateTime, type TimeEstimate } from './estimateTime.ts';
+import { formatNumber } from './formatNumber.ts';
+import { serializeGcode, type GcodeRecord } from './gcodeRecords.ts';
+import type { EngraveSettings } from './materialPresets.ts';
+import { orderPaths } from './orderPaths.ts';
+import { figureComments, stockComments } from './headerComments.ts';
+import { resolveWriterOptions, type GcodeWriterOptions } from './writerOptions.ts';
+
+/**
+ * engrave-laser.gcode: a laser program in the GRBL laser-mode dialect (GRBL
+ * 1.1 "Laser Mode" notes, $32=1; memory): `M4` dynamic power, power as S
+ * words (S = power % × laserMaxS / 100), `G1` at the laser speed with the
+ * beam on, `S0` before every `G0` travel so the beam is off during travel
+ * even on a controller that does not blank G0 itself, no Z words at all (focus
+ * is set by hand), end `S0`, `M5`, `M2`. Every path is traced once along its
+ * centre line (a score line); wide marks are not hatched.
+ *
+ * The same text is valid RS-274/NGC (S words and M4 are spindle words there)
+ * and is checked with `rs274 -g`.
+ */
+
+export interface LaserPlan {
+  /** Ordered single-pass strokes. */
+  readonly strokes: readonly { readonly points: readonly Vec2[]; readonly closed: boolean; readonly label: string; readonly sourceIndex: number }[];
+  readonly body: readonly GcodeRecord[];
+  readonly estimate: TimeEstimate;
+  readonly rapidTravelMm: { readonly inputOrder: number; readonly ordered: number; readonly lowerBound: number };
+  /** The S word written while the beam is on. */
+  readonly powerS: number;
+}
+
+/**
+ * Build the laser program's records and figures (what toLaserGcode writes).
+ * @param options decimals (default 3), optimizeOrder (default true)
+ */
+export function planLaser(job: EngraveJob, settings: EngraveSettings, options: GcodeWriterOptions = {}): LaserPlan {
+  validateEngraveJob(job);
+  const o = resolveWriterOptions(options);
+  const s = settings;
+  const powerS = (s.laserPowerPct * s.laserMaxS) / 100;
+  const strokes = job.paths.map((p, i) => ({ points: p.points, closed: p.closed, label: p.label, sourceIndex: i }));
+  const ordered = orderPaths(strokes, { optimize: o.optimizeOrder });
+  const body: GcodeRecord[] = [{ kind: 'modal', words: 'G21 G90 G17 G94' }, { kind: 'spindle', mode: 'ccw', s: 0 }];
+  ordered.paths.forEach((p, n) => {
+    body.push({ kind: 'comment', text: `stroke ${n + 1}/${ordered.paths.length}: ${job.paths[p.sourceIndex].operation} ${p.label}` });
+    body.push({ kind: 'rapid', to: { x: p.points[0][0], y: p.points[0][1] } });
+    body.push({ kind: 'power', s: powerS });
+    const trace = p.closed ? [...p.points.slice(1), p.points[0]] : p.points.slice(1);
+    for (const [x, y] of trace) body.push({ kind: 'feed', to: { x, y }, feedMmPerMin: s.laserSpeedMmPerMin });
+    body.push({ kind: 'power', s: 0 });
+  });
+  body.push({ kind: 'spindle', mode: 'off' }, { kind: 'end' });
+  const estimate = estimateTime(body, { rapidMmPerMin: s.rapidMmPerMin });
+  return { strokes: ordered.paths, body, estimate, rapidTravelMm: ordered.rapidTravelMm, powerS };
+}
+
+/**
+ * Write engrave-laser.gcode for a job.
+ *
+ * @param settings uses laserPowerPct, laserSpeedMmPerMin, laserMaxS, rapidMmPerMin
+ * @param options decimals (default 3), optimizeOrder (default true)
+ * @returns program text, '\n' line ends, byte-stable for the same input
+ * @example toLaserGcode(job, resolveEngraveSettings('acrylic'))
+ */
+export function toLaserGcode(job: EngraveJob, settings: EngraveSettings, options: GcodeWriterOptions = {}): string {
+  const o = resolveWriterOptions(options);
+  const plan = planLaser(job, settings, o);
+  const s = settings;
+  const header: GcodeRecord[] = [
+    { kind: 'comment', text: 'umbrafab engrave-laser.gcode: laser scoring program, GRBL laser mode [$32=1]' },
+    ...stockComments(job, 'laser'),
+    {
+      kind: 'comment',
+      text: `laser: M4 dynamic power, ${formatNumber(s.laserPowerPct, 3, true)} % = S${formatNumber(plan.powerS, 3, true)} of S${formatNumber(s.laserMaxS, 3, true)}, speed ${formatNumber(s.laserSpeedMmPerMin, 3, true)} mm/min, S0 during travel`,
+    },
+    { kind: 'comment', text: `${plan.strokes.length} strokes, each traced once` },
+    ...figureComments({ rapidTravelMm: plan.rapidTravelMm, estimate: plan.estimate, title: job.title, process: 'laser' }),
+  ];
+  return serializeGcode([...header, ...plan.body], o.decimals);
+}

@@ -1,0 +1,196 @@
+import { describe, expect, it } from 'vitest';
+import { expectClose } from '../../../../test/helpers/closeTo.ts';
+import { motions, runRs274, type CanonMotion } from '../../../../test/helpers/rs274.ts';
+import type { EngraveJob } from './engraveInput.ts';
+import { resolveEngraveSettings, type EngraveSettings } from './materialPresets.ts';
+import { polylineLengthMm } from './polylineLength.ts';
+import { SAMPLE_PLATE_JOB, SAMPLE_WIDE_MARK_JOB } from './sampleEngraveJobs.ts';
+import { planNgc, toNgc } from './toNgc.ts';
+import { vbitDepthMm } from './vbitDepth.ts';
+
+// Outside validator: Debian's linuxcnc-uspace `rs274 -g`, the standalone
+// RS274NGC interpreter (DESIGN.md §7). Every program below must pass it, and
+// its canonical output is what the checks read.
+
+const EPS_MM = 1e-4; // rs274 prints 4 decimals
+
+/** Runs of consecutive feed moves, split by traverses. */
+function feedRuns(ms: readonly CanonMotion[]): CanonMotion[][] {
+  const runs: CanonMotion[][] = [];
+  let run: CanonMotion[] = [];
+  for (const m of ms) {
+    if (m.kind === 'STRAIGHT_FEED') run.push(m);
+    else if (run.length > 0) {
+      runs.push(run);
+      run = [];
+    }
+  }
+  if (run.length > 0) runs.push(run);
+  return runs;
+}
+
+const xyLength = (m: CanonMotion): number => Math.hypot(m.to.x - m.from.x, m.to.y - m.from.y);
+
+function checkMillProgram(job: EngraveJob, s: EngraveSettings, text: string): { ms: CanonMotion[]; finalDepthLengthMm: number; deepestMm: number } {
+  const { commands } = runRs274(text, 'engrave.ngc');
+  const ms = motions(commands);
+  expect(ms.length).toBeGreaterThan(0);
+
+  // The first motion goes straight up/down to safe height, with no XY motion before it.
+  expect(ms[0].kind).toBe('STRAIGHT_TRAVERSE');
+  expectClose(ms[0].to.z, s.safeZMm, EPS_MM, 'first move Z', ' mm');
+  expect([ms[0].to.x, ms[0].to.y]).toEqual([ms[0].from.x, ms[0].from.y]);
+
+  // The spindle runs (at the preset speed) during every feed below Z 0.
+  for (const m of ms.filter((k) => k.kind === 'STRAIGHT_FEED' && k.to.z < 0)) {
+    expect(m.spindle).toBe('cw');
+    expect(m.spindleSpeed).toBe(s.spindleRpm);
+  }
+  // ...and stops at the end: last motion at safe height, then M5 and M2.
+  const last = ms[ms.length - 1];
+  expect(last.kind).toBe('STRAIGHT_TRAVERSE');
+  expectClose(last.to.z, s.safeZMm, EPS_MM, 'last move Z', ' mm');
+  const after = commands.slice(last.at + 1).map((c) => c.kind);
+  expect(after[0]).toBe('STOP_SPINDLE_TURNING');
+  expect(after).toContain('PROGRAM_END');
+
+  // No feed move leaves the stock's XY rectangle (tool-centre lines).
+  for (const m of ms.filter((k) => k.kind === 'STRAIGHT_FEED')) {
+    for (const p of [m.from, m.to]) {
+      expect(p.x).toBeGreaterThanOrEqual(-EPS_MM);
+      expect(p.y).toBeGreaterThanOrEqual(-EPS_MM);
+      expect(p.x).toBeLessThanOrEqual(job.stock.widthMm + EPS_MM);
+      expect(p.y).toBeLessThanOrEqual(job.stock.lengthMm + EPS_MM);
+    }
+  }
+  // Rapids move in XY only at or above the clearance height and never
+  // descend below it (retracts start in the stock, so they are exempt);
+  // feeds move in XY only in the stock. ms[0] starts from rs274's assumed Z0.
+  for (const m of ms.slice(1)) {
+    if (m.kind === 'STRAIGHT_TRAVERSE') {
+      if (xyLength(m) > 0) expect(Math.min(m.from.z, m.to.z)).toBeGreaterThanOrEqual(s.clearanceZMm - EPS_MM);
+      if (m.to.z < m.from.z) expect(m.to.z).toBeGreaterThanOrEqual(s.clearanceZMm - EPS_MM);
+    } else if (xyLength(m) > 0) expect(m.to.z).toBeLessThan(0);
+  }
+  // Plunges at the plunge feed, XY cuts at the cutting feed.
+  for (const m of ms.filter((k) => k.kind === 'STRAIGHT_FEED')) {
+    expect(m.feed).toBe(xyLength(m) > 0 ? s.feedMmPerMin : s.plungeMmPerMin);
+  }
+
+  // Cutting length at each cut's final depth.
+  let finalDepthLengthMm = 0;
+  let deepestMm = 0;
+  for (const run of feedRuns(ms)) {
+    const bottom = Math.min(...run.map((m) => m.to.z));
+    deepestMm = Math.max(deepestMm, -bottom);
+    for (const m of run) {
+      if (Math.abs(m.from.z - bottom) < EPS_MM && Math.abs(m.to.z - bottom) < EPS_MM) finalDepthLengthMm += xyLength(m);
+    }
+  }
+  return { ms, finalDepthLengthMm, deepestMm };
+}
+
+describe('toNgc', () => {
+  const s = resolveEngraveSettings('aluminium');
+  const text = toNgc(SAMPLE_PLATE_JOB, s);
+
+  it('is accepted by rs274 and meets the safety and geometry checks', () => {
+    const { finalDepthLengthMm, deepestMm } = checkMillProgram(SAMPLE_PLATE_JOB, s, text);
+    // Deepest cut = V-bit depth of the widest (0.5 mm) line: 0.25 mm for 90°.
+    expectClose(deepestMm, vbitDepthMm(0.5, s.vbitAngleDeg), 0.001, 'deepest cut', ' mm');
+    const inputMm = SAMPLE_PLATE_JOB.paths.reduce((sum, p) => sum + polylineLengthMm(p.points, p.closed), 0);
+    const relErr = Math.abs(finalDepthLengthMm - inputMm) / inputMm;
+    console.log(`toNgc sample: final-depth length ${finalDepthLengthMm.toFixed(4)} mm vs geometry ${inputMm.toFixed(4)} mm (rel. err ${relErr.toExponential(2)})`);
+    expect(relErr).toBeLessThanOrEqual(0.001);
+  });
+
+  it('is byte-stable, ASCII only, with valid comments and no negative zero', () => {
+    expect(toNgc(SAMPLE_PLATE_JOB, s)).toBe(text);
+    expect(/^[\x20-\x7e\n]*$/.test(text)).toBe(true);
+    expect(text).not.toMatch(/-0\.0+(?![0-9])/);
+    for (const line of text.trimEnd().split('\n')) {
+      if (line.startsWith('(')) expect(line).toMatch(/^\([^()]*\)$/);
+      else expect(line).not.toMatch(/[()]/);
+    }
+    expect(text).toContain('(spec: latitude 51.5 deg N [invented])');
+    expect(text.trimEnd().split('\n').slice(-3)).toEqual(['G0 Z5.000', 'M5', 'M2']);
+  });
+
+  it('writes the whole expected program for one mark (golden text)', () => {
+    // 90° bit, width 0.5 → 0.25 mm, aluminium step-down 0.15 → passes 0.125 and 0.25.
+    const job: EngraveJob = {
+      stock: { widthMm: 50, lengthMm: 40, thicknessMm: 3, material: 'aluminium' },
+      title: ['one mark'],
+      paths: [{ points: [[10, 5], [10, 35]], closed: false, widthMm: 0.5, operation: 'marks', label: 'hour 12' }],
+    };
+    expect(toNgc(job, s)).toBe(
+      [
+        '(umbrafab engrave.ngc: engraving program, RS-274/NGC)',
+        '(units: millimetres [G21], absolute coordinates [G90], XY plane [G17], feed in mm/min [G94])',
+        '(work origin: X0 Y0 = lower-left corner of the plate [as in plate.dxf], Z0 = top of the stock)',
+        '(stock: 50.000 x 40.000 x 3.000 mm, material aluminium)',
+        '(T1: V-bit 90 deg included angle, tip 0.000 mm, diameter 3.175 mm - load before start)',
+        '(spindle 16000 rpm, feed 400 mm/min, plunge 100 mm/min, step-down at most 0.150 mm)',
+        '(safe Z 5.000 mm, clearance Z 1.000 mm)',
+        '(1 cuts, deepest 0.250 mm [limit 1.500 mm], at most 2 passes)',
+        '(estimated time: 10 s [10 s: cutting 9 s, plunges 1 s, rapids 0 s; no acceleration or tool changes])',
+        '(rapid travel XY: 11.2 mm [input order 11.2 mm, lower bound 11.2 mm])',
+        '(spec: one mark)',
+        'G21 G90 G17 G94 G40 G49 G80 G54',
+        'G0 Z5.000',
+        'S16000 M3',
+        '(cut 1/1: marks hour 12, width 0.500 mm, depth 0.250 mm in 2 passes)',
+        'G0 X10.000 Y5.000',
+        'G0 Z1.000',
+        'G1 Z-0.125 F100',
+        'G1 X10.000 Y35.000 F400',
+        'G1 Z-0.250 F100',
+        'G1 X10.000 Y5.000 F400',
+        'G0 Z1.000',
+        'G0 Z5.000',
+        'M5',
+        'M2',
+        '',
+      ].join('\n'),
+    );
+  });
+
+  it('keeps the input order when optimizeOrder is false, and still passes rs274', () => {
+    const plain = toNgc(SAMPLE_PLATE_JOB, s, { optimizeOrder: false });
+    const plan = planNgc(SAMPLE_PLATE_JOB, s, { optimizeOrder: false });
+    expect(plan.toolpaths.cuts.map((c) => c.sourceIndex)).toEqual(SAMPLE_PLATE_JOB.paths.map((_, i) => i));
+    checkMillProgram(SAMPLE_PLATE_JOB, s, plain);
+  });
+
+  it('writes other decimals on request', () => {
+    expect(toNgc(SAMPLE_PLATE_JOB, s, { decimals: 4 })).toContain('G1 Z-0.1250 F100');
+    expect(() => toNgc(SAMPLE_PLATE_JOB, s, { decimals: 1.5 })).toThrow(/decimals .*1\.5/);
+  });
+
+  it('cuts wide marks with a flat end mill after a tool change, accepted by rs274', () => {
+    const sb = resolveEngraveSettings('brass', { flatEndMillMm: 1 });
+    const prog = toNgc(SAMPLE_WIDE_MARK_JOB, sb);
+    const { commands } = runRs274(prog, 'wide.ngc');
+    const kinds = commands.map((c) => c.kind);
+    expect(kinds).toContain('CHANGE_TOOL');
+    const change = kinds.indexOf('CHANGE_TOOL');
+    const ms = motions(commands);
+    // Spindle stopped and at safe height at the tool change.
+    const before = ms.filter((m) => m.at < change);
+    expectClose(before[before.length - 1].to.z, sb.safeZMm, EPS_MM, 'Z at tool change', ' mm');
+    // After the change: grooves at the flat depth, spread across the 2.4 mm width (centre ±0.7 mm for a 1 mm mill).
+    const flatFeeds = ms.filter((m) => m.at > change && m.kind === 'STRAIGHT_FEED');
+    expectClose(Math.min(...flatFeeds.map((m) => m.to.z)), -sb.flatDepthMm, 0.001, 'flat depth', ' mm');
+    const xs = flatFeeds.filter((m) => m.to.x < 60).map((m) => m.to.x);
+    expectClose(Math.min(...xs), 55 - 0.7, 0.001, 'west groove edge pass', ' mm');
+    expectClose(Math.max(...xs), 55 + 0.7, 0.001, 'east pass of the west groove', ' mm');
+    for (const m of flatFeeds) expect(m.spindle).toBe('cw');
+  });
+});
+
+describe('rs274 helper', () => {
+  it('throws with the interpreter message on a bad program', () => {
+    // rs274 rejects G1 with zero feed ("Cannot do g1 with zero feed rate").
+    expect(() => runRs274('G21\nG1 X1 F0\nM2\n')).toThrow(/zero feed rate/);
+  });
+});
