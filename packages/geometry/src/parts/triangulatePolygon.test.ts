@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Vec2 } from './mesh.ts';
 import { triangulatePolygon } from './triangulatePolygon.ts';
@@ -46,5 +47,28 @@ describe('triangulatePolygon', () => {
   });
   it('rejects a polygon with fewer than 3 points, naming it', () => {
     expect(() => triangulatePolygon([[0, 0], [1, 1]])).toThrow(/outer has 2 points/);
+  });
+});
+
+describe('triangulatePolygon (property)', () => {
+  it('triangulates a rectangle with a random row of disjoint polygonal holes', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 6 }),
+        fc.integer({ min: 3, max: 24 }),
+        fc.double({ min: -2, max: 2, noNaN: true }),
+        fc.double({ min: 0, max: 6.28, noNaN: true }),
+        (count, sides, dy, phase) => {
+          const holes: Vec2[][] = Array.from({ length: count }, (_, k) =>
+            Array.from({ length: sides }, (_, j) => {
+              const t = phase + (2 * Math.PI * j) / sides;
+              return [10 + 15 * k + 4 * Math.cos(t), 10 + dy * (k % 2) + 4 * Math.sin(t)] as Vec2;
+            }),
+          );
+          check([[0, 0], [15 * count + 5, 0], [15 * count + 5, 20], [0, 20]], holes);
+        },
+      ),
+      { numRuns: 200, seed: 20250101 },
+    );
   });
 });

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { expectClose } from '../../../../test/helpers/closeTo.ts';
 import type { Vec3 } from './mesh.ts';
@@ -167,5 +168,20 @@ describe('wedgeSolid', () => {
     expect(() => wedgeSolid({ minBaseMm: 2.5 })).toThrow(/wedge\.holes\.countersink/);
     expect(() => wedgeSolid({ holes: { countersink: { diameterMm: 4, angleDeg: 90 } } })).toThrow(/countersink\.diameterMm = 4 mm/);
     expect(() => wedgeSolid({ arrow: { depthMm: 6 } })).toThrow(/wedge\.arrow\.depthMm = 6 mm/);
+  });
+});
+
+describe('wedgeSolid (property)', () => {
+  it('gives a valid closed mesh matching the closed form for any tilt 0…89° and hole count', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -89, max: 89, noNaN: true }), fc.constantFrom(0, 2, 4), (lat, count) => {
+        const part = wedgeSolid({ latitudeDeg: lat, holes: { count } });
+        validateMesh(part.mesh);
+        const o = { ...WEDGE_DEFAULTS, holes: { ...WEDGE_DEFAULTS.holes, count } };
+        const exact = closedFormVolume(part, lat, true, o);
+        expect(Math.abs(meshVolumeMm3(part.mesh) - exact)).toBeLessThan(1e-9 * exact);
+      }),
+      { numRuns: 100, seed: 20250102 },
+    );
   });
 });
