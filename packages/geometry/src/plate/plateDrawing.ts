@@ -1,0 +1,88 @@
+import type { DialLayout } from '../polar/layoutDial.ts';
+import type { Circle, MarkKind, Path, RoundedRect, Vec2 } from '../types.ts';
+
+/** An engraved line (a mark or a curve) as a centre-line in plate coordinates. */
+export interface DrawnLine {
+  readonly label: string;
+  readonly kind: MarkKind | 'curve';
+  readonly widthMm: number;
+  readonly path: Path;
+}
+
+export interface DrawnText {
+  readonly role: 'numeral' | 'title' | 'label';
+  readonly text: string;
+  readonly strokeWidthMm: number;
+  readonly strokes: readonly Path[];
+}
+
+/**
+ * The plate as a drawing: nominal shapes (no kerf yet) in plate coordinates,
+ * origin at the plate's lower-left corner, mm. Writers (DXF, SVG, G-code)
+ * read this; kerf and process allowances are applied in `fabricate`.
+ */
+export interface PlateDrawing {
+  readonly widthMm: number;
+  readonly lengthMm: number;
+  readonly substyleX: number;
+  readonly faceOriginY: number;
+  readonly outline: RoundedRect;
+  readonly holes: readonly Circle[];
+  readonly slots: readonly RoundedRect[];
+  readonly lines: readonly DrawnLine[];
+  readonly text: readonly DrawnText[];
+  /** Lines for checking, never cut: the substyle, the gnomon's footprint, the 45° check. */
+  readonly reference: readonly { readonly label: string; readonly path: Path }[];
+}
+
+/**
+ * The plate drawing of a layout: face coordinates moved to plate coordinates
+ * (x + substyleX, y + faceOriginY).
+ * @example plateDrawing(layoutDial(spec)).lines[0].path.points
+ */
+export function plateDrawing(layout: DialLayout, extraLines: readonly DrawnLine[] = []): PlateDrawing {
+  const { plate, gnomon } = layout;
+  const dx = plate.substyleX;
+  const dy = plate.faceOriginY;
+  const move = (p: Vec2): Vec2 => [p[0] + dx, p[1] + dy];
+  const movePath = (p: Path): Path => ({ kind: 'path', points: p.points.map(move), closed: p.closed });
+  const seg = (a: Vec2, b: Vec2): Path => ({ kind: 'path', points: [move(a), move(b)], closed: false });
+
+  const lines: DrawnLine[] = layout.marks.map((m) => ({
+    label: `${m.label} ${m.style}`,
+    kind: m.kind,
+    widthMm: m.widthMm,
+    path: seg([m.xMm, m.y0Mm], [m.xMm, m.y1Mm]),
+  }));
+  const text: DrawnText[] = [...layout.numerals, ...layout.title].map((b) => ({
+    role: b.role,
+    text: b.text,
+    strokeWidthMm: b.strokeWidthMm,
+    strokes: b.strokes.map(movePath),
+  }));
+
+  const t2 = gnomon.thicknessMm / 2;
+  const h = gnomon.heightMm;
+  const checkY = layout.marks.length ? Math.min(...layout.marks.map((m) => m.y0Mm)) : 0;
+  const east = layout.hemisphere === 'north' ? 1 : -1;
+  const reference = [
+    { label: 'substyle', path: seg([0, 0 - dy], [0, plate.lengthMm - dy]) },
+    { label: 'gnomon footprint', path: { kind: 'path' as const, closed: true, points: [move([-t2, gnomon.y0Mm]), move([t2, gnomon.y0Mm]), move([t2, gnomon.y1Mm]), move([-t2, gnomon.y1Mm])] } },
+    // The 45° check (common practice): at |H| = 45° the line lies one gnomon height from its style edge.
+    { label: '45 deg check west', path: seg([-east * t2, checkY], [-east * (t2 + h), checkY]) },
+    { label: '45 deg check east', path: seg([east * t2, checkY], [east * (t2 + h), checkY]) },
+  ];
+
+  return {
+    widthMm: plate.widthMm,
+    lengthMm: plate.lengthMm,
+    substyleX: dx,
+    faceOriginY: dy,
+    outline: { kind: 'rect', cx: plate.widthMm / 2, cy: plate.lengthMm / 2, widthMm: plate.widthMm, heightMm: plate.lengthMm, cornerRadiusMm: plate.cornerRadiusMm },
+    holes: plate.holes,
+    slots: plate.slots,
+    lines: [...lines, ...extraLines],
+    text,
+    reference,
+  };
+}

@@ -1,0 +1,145 @@
+import { z } from 'zod';
+
+/**
+ * The dial spec schema: one source for validation, defaults and the field
+ * documentation (the CLI's starter spec and, later, the local page's form read
+ * the `describe()` texts from here).
+ *
+ * Lengths are millimetres, angles degrees, times "HH:MM" local (solar or
+ * standard, per `dial.reads`). Field names under `site`, `dial.reads`,
+ * `gnomon.height|thickness`, `hours.from|to` and `process.method|kerf` are
+ * fixed: other tools read them.
+ */
+
+/** A number field with bounds, unit and default; the error names what is allowed. */
+function num(opts: { min: number; max: number; unit: string; exclusiveMin?: boolean; int?: boolean }) {
+  const { min, max, unit, exclusiveMin, int } = opts;
+  const u = unit === '' ? '' : unit === '°' ? unit : ` ${unit}`;
+  const allowed = `allowed: ${int ? 'a whole number' : 'a number'} ${exclusiveMin ? 'greater than' : 'from'} ${min}${u}${max === Infinity ? '' : ` ${exclusiveMin ? 'up to' : 'to'} ${max}${u}`}`;
+  let s = z.number({ error: allowed });
+  s = exclusiveMin ? s.gt(min, { error: allowed }) : s.gte(min, { error: allowed });
+  if (max !== Infinity) s = s.lte(max, { error: allowed });
+  if (int) s = s.int({ error: allowed });
+  return s;
+}
+
+function oneOf<const T extends readonly [string, ...string[]]>(values: T) {
+  return z.enum(values, { error: `allowed: ${values.map((v) => JSON.stringify(v)).join(', ')}` });
+}
+
+const HHMM = /^([01]\d|2[0-3]):([0-5]\d)$/;
+const clock = z.string({ error: 'allowed: a time "HH:MM" in quotes, e.g. "07:00"' }).regex(HHMM, {
+  error: 'allowed: a time "HH:MM" with hours 00-23 and minutes 00-59, e.g. "07:00"',
+});
+
+/** A length or the word auto (sized from the layout). */
+const autoLength = z.union([z.literal('auto'), num({ min: 20, max: 3000, unit: 'mm' })], {
+  error: 'allowed: "auto" or a number from 20 to 3000 mm',
+});
+
+export const METHODS = ['laser', 'waterjet', 'router', 'print'] as const;
+export type ProcessMethod = (typeof METHODS)[number];
+
+export const MATERIALS = ['aluminium', 'brass', 'stainless', 'steel', 'acrylic', 'hardwood', 'plywood', 'slate', 'pla', 'petg'] as const;
+
+export const NUMERAL_STYLES = ['arabic', 'arabic24', 'roman'] as const;
+
+const markSchema = (length: number, width: number) =>
+  z
+    .strictObject({
+      length: num({ min: 1, max: 2000, unit: 'mm' }).default(length).describe('mark length along the style, mm'),
+      width: num({ min: 0.05, max: 20, unit: 'mm' }).default(width).describe('line width, mm'),
+    })
+    .prefault({});
+
+export const specSchema = z.strictObject({
+  name: z.string({ error: 'allowed: a text in quotes' }).min(1).max(60, { error: 'allowed: 1 to 60 characters' }).default('Polar dial').describe('dial name, engraved in the title block'),
+  site: z.strictObject({
+    latitude: num({ min: -90, max: 90, unit: '°' }).describe('site latitude, degrees, north positive'),
+    longitude: num({ min: -180, max: 180, unit: '°' }).describe('site longitude, degrees, east positive'),
+    timezone: z.string({ error: 'allowed: an IANA time zone name in quotes, e.g. "Europe/Lisbon"' }).describe('IANA time zone name, e.g. "Europe/Lisbon"'),
+    place: z.string({ error: 'allowed: a text in quotes' }).max(60).optional().describe('place name for the title block (optional)'),
+  }),
+  dial: z
+    .strictObject({
+      reads: oneOf(['solar', 'standard']).default('solar').describe('solar: apparent solar time; standard: lines shifted to the zone standard meridian'),
+      numerals: oneOf(NUMERAL_STYLES).default('arabic').describe('arabic (7..12..5), arabic24 (7..17) or roman (VII..XII..V)'),
+      numeralHeight: num({ min: 2, max: 100, unit: 'mm' }).default(8).describe('numeral cap height, mm'),
+      textHeight: num({ min: 1.5, max: 50, unit: 'mm' }).default(3.5).describe('title block text height, mm'),
+    })
+    .prefault({}),
+  gnomon: z
+    .strictObject({
+      height: num({ min: 0, max: 1000, unit: 'mm', exclusiveMin: true }).default(50).describe('style height above the dial face, mm'),
+      thickness: num({ min: 0, max: 100, unit: 'mm', exclusiveMin: true }).default(3).describe('gnomon (fin) thickness, mm'),
+      overhang: num({ min: 0, max: 500, unit: 'mm' }).default(5).describe('style length beyond the hour marks at each end, mm'),
+      tabs: num({ min: 1, max: 8, unit: '', int: true }).default(2).describe('number of tabs through the plate'),
+      tabLength: num({ min: 2, max: 500, unit: 'mm' }).default(15).describe('length of each tab along the style, mm'),
+    })
+    .prefault({}),
+  hours: z
+    .strictObject({
+      from: clock.default('07:00').describe('first mark, "HH:MM"'),
+      to: clock.default('17:00').describe('last mark, "HH:MM"'),
+      step: z.union([z.literal(60), z.literal(30), z.literal(15)], { error: 'allowed: 60, 30 or 15 (minutes)' }).default(15).describe('finest mark spacing in minutes: 60, 30 or 15'),
+      maxHourAngle: num({ min: 30, max: 85, unit: '°' }).default(75).describe('widest hour angle a mark may have, degrees (75° puts 07:00 at 3.73 gnomon heights)'),
+    })
+    .prefault({}),
+  marks: z
+    .strictObject({
+      hour: markSchema(80, 0.8),
+      half: markSchema(55, 0.6),
+      quarter: markSchema(30, 0.4),
+    })
+    .prefault({}),
+  plate: z
+    .strictObject({
+      width: autoLength.default('auto').describe('plate width across the style, mm, or auto'),
+      length: autoLength.default('auto').describe('plate length along the style, mm, or auto'),
+      margin: num({ min: 0, max: 200, unit: 'mm' }).default(12).describe('clear border around the engraving, mm'),
+      thickness: num({ min: 0, max: 100, unit: 'mm', exclusiveMin: true }).default(3).describe('sheet thickness, mm'),
+      material: oneOf(MATERIALS).default('aluminium').describe('sheet material'),
+      cornerRadius: num({ min: 0, max: 100, unit: 'mm' }).default(4).describe('outer corner radius, mm'),
+    })
+    .prefault({}),
+  holes: z
+    .strictObject({
+      count: z.union([z.literal(0), z.literal(2), z.literal(4)], { error: 'allowed: 0, 2 or 4' }).default(4).describe('mounting holes: 0, 2 (one each side at mid-length) or 4 (one in each corner)'),
+      diameter: num({ min: 1, max: 50, unit: 'mm' }).default(5.5).describe('hole diameter, mm (5.5 clears an M5 screw)'),
+      inset: num({ min: 1, max: 200, unit: 'mm' }).default(10).describe('hole centre distance from the plate edges, mm'),
+    })
+    .prefault({}),
+  calendar: z
+    .strictObject({
+      year: num({ min: 1900, max: 2200, unit: '', int: true }).default(2027).describe('year for the time tables and the zone offsets (outputs never depend on today)'),
+    })
+    .prefault({}),
+  process: z
+    .strictObject({
+      method: oneOf(METHODS).default('laser').describe('laser, waterjet, router or print'),
+      kerf: num({ min: 0, max: 25, unit: 'mm' }).optional().describe('cut width, mm (default by method: laser 0.15, waterjet 0.9, router = tool 3.175, print 0)'),
+      clearance: num({ min: 0, max: 2, unit: 'mm' }).optional().describe('fit clearance per side for tabs in slots, mm (default by method: print 0.2, others 0.1)'),
+    })
+    .prefault({}),
+});
+
+/** The spec as written by a user (before defaults). */
+export type DialSpecInput = z.input<typeof specSchema>;
+
+/** The spec after validation and defaults, with the per-method allowances filled in. */
+export type DialSpec = Omit<z.output<typeof specSchema>, 'process'> & {
+  readonly process: { readonly method: ProcessMethod; readonly kerf: number; readonly clearance: number };
+};
+
+/**
+ * Per-method allowances (DESIGN §5, typical values, common practice):
+ * laser kerf 0.1–0.25 mm, waterjet 0.8–1.0 mm, router kerf = tool diameter
+ * (1/8" = 3.175 mm end mill), print none; fit clearance 0.2 mm per side for
+ * prints, 0.1 mm for cut parts.
+ */
+export const METHOD_DEFAULTS: Readonly<Record<ProcessMethod, { readonly kerf: number; readonly clearance: number }>> = {
+  laser: { kerf: 0.15, clearance: 0.1 },
+  waterjet: { kerf: 0.9, clearance: 0.1 },
+  router: { kerf: 3.175, clearance: 0.1 },
+  print: { kerf: 0, clearance: 0.2 },
+};

@@ -1,0 +1,21 @@
+import { describe, expect, it } from 'vitest';
+import { knowsTimeZone, standardMeridianDeg, standardOffsetMin } from './zoneMeridian.ts';
+
+// Source: the IANA time zone database as shipped in Node's ICU (a general-purpose reference library).
+describe('standard offsets without daylight saving', () => {
+  it.each([
+    ['Europe/London', 0],
+    ['Europe/Paris', 60],
+    ['America/New_York', -300],
+    ['Asia/Kolkata', 330],
+    ['Australia/Adelaide', 570],
+    ['Pacific/Chatham', 765],
+  ])('%s → %i min', (tz, off) => {
+    expect(standardOffsetMin(tz, 2027)).toBe(off);
+    expect(standardMeridianDeg(tz, 2027)).toBe(off / 4);
+  });
+  it('rejects unknown zones', () => {
+    expect(knowsTimeZone('Mars/Olympus')).toBe(false);
+    expect(() => standardOffsetMin('Mars/Olympus', 2027)).toThrow(/site\.timezone/);
+  });
+});
