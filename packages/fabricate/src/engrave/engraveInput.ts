@@ -39,13 +39,25 @@ export interface EngraveJob {
   readonly title: readonly string[];
 }
 
+const ON_STOCK_TOL_MM = 1e-6;
+
+/** Throw unless `p` lies on the stock's XY rectangle [0, widthMm] × [0, lengthMm]. */
+export function assertOnStock(p: Vec2, field: string, stock: EngraveJob['stock']): void {
+  const t = ON_STOCK_TOL_MM;
+  if (p[0] < -t || p[1] < -t || p[0] > stock.widthMm + t || p[1] > stock.lengthMm + t) {
+    throw new Error(
+      `${field} [${p[0]}, ${p[1]}] lies off the stock; allowed: 0 <= x <= stock.widthMm ${stock.widthMm}, 0 <= y <= stock.lengthMm ${stock.lengthMm} (plate coordinates, origin at the lower-left corner)`,
+    );
+  }
+}
+
 const OPERATIONS: readonly EngraveOperation[] = ['marks', 'text', 'curves'];
 
 /**
  * Check a job's invariants and throw an Error naming the first bad field:
  * finite points, at least 2 points per path (3 for a loop), a positive width,
- * a known operation, a positive stock size.
- * Points outside the stock are not an error here (the writers report them).
+ * a known operation, a positive stock size, every point on the stock
+ * (0 ≤ x ≤ stock.widthMm, 0 ≤ y ≤ stock.lengthMm, within 1e-6 mm).
  */
 export function validateEngraveJob(job: EngraveJob): void {
   assertPositive(job.stock.widthMm, 'stock.widthMm', 'mm');
@@ -62,6 +74,7 @@ export function validateEngraveJob(job: EngraveJob): void {
     path.points.forEach((p, j) => {
       assertFinite(p[0], `${at}.points[${j}][0]`);
       assertFinite(p[1], `${at}.points[${j}][1]`);
+      assertOnStock(p, `${at}.points[${j}]`, job.stock);
     });
     assertPositive(path.widthMm, `${at}.widthMm`, 'mm');
     if (!OPERATIONS.includes(path.operation)) {

@@ -167,6 +167,34 @@ describe('toNgc', () => {
     expect(() => toNgc(SAMPLE_PLATE_JOB, s, { decimals: 1.5 })).toThrow(/decimals .*1\.5/);
   });
 
+  it('passes the same checks on a busier job (60 strokes, 1–5 passes, loops, 60° bit)', () => {
+    // Deterministic pseudo-random strokes (Park–Miller LCG), invented test data.
+    let x = 12345;
+    const r = (): number => (x = (x * 48271) % 2147483647) / 2147483647;
+    const widths = [0.2, 0.35, 0.5, 0.7, 0.9];
+    const paths = Array.from({ length: 60 }, (_, i) => {
+      const cx = 20 + r() * 160;
+      const cy = 20 + r() * 110;
+      const n = 2 + Math.floor(r() * 5);
+      const points = Array.from({ length: n }, (): readonly [number, number] => [cx + (r() - 0.5) * 30, cy + (r() - 0.5) * 30]);
+      return { points, closed: i % 7 === 0 && n >= 3, widthMm: widths[i % widths.length], operation: 'text' as const, label: `stroke ${i}` };
+    });
+    const job: EngraveJob = { ...SAMPLE_PLATE_JOB, paths, stock: { ...SAMPLE_PLATE_JOB.stock, material: 'hardwood', thicknessMm: 6 } };
+    const sh = resolveEngraveSettings('hardwood', { vbitAngleDeg: 60, stepDownMm: 0.2 });
+    const prog = toNgc(job, sh);
+    const { finalDepthLengthMm, deepestMm } = checkMillProgram(job, sh, prog);
+    expectClose(deepestMm, vbitDepthMm(0.9, 60), 0.001, 'deepest cut', ' mm');
+    const inputMm = paths.reduce((sum, p) => sum + polylineLengthMm(p.points, p.closed), 0);
+    const relErr = Math.abs(finalDepthLengthMm - inputMm) / inputMm;
+    const t = planNgc(job, sh).toolpaths.rapidTravelMm;
+    console.log(
+      `toNgc busy job: final-depth length ${finalDepthLengthMm.toFixed(3)} vs ${inputMm.toFixed(3)} mm (rel. err ${relErr.toExponential(2)}); travel input ${t.inputOrder.toFixed(1)}, ordered ${t.ordered.toFixed(1)}, bound ${t.lowerBound.toFixed(1)} mm`,
+    );
+    expect(relErr).toBeLessThanOrEqual(0.001);
+    expect(t.ordered).toBeLessThanOrEqual(t.inputOrder);
+    expect(t.ordered).toBeGreaterThanOrEqual(t.lowerBound);
+  });
+
   it('cuts wide marks with a flat end mill after a tool change, accepted by rs274', () => {
     const sb = resolveEngraveSettings('brass', { flatEndMillMm: 1 });
     const prog = toNgc(SAMPLE_WIDE_MARK_JOB, sb);

@@ -58,6 +58,11 @@ describe('buildToolpaths', () => {
     expect(() => buildToolpaths(bad, resolveEngraveSettings('aluminium'))).toThrow(/paths\[0\].points must hold at least 2 points/);
   });
 
+  it('rejects a point off the stock', () => {
+    const off: EngraveJob = { ...job(0.5), paths: [{ points: [[1, 1], [51, 1]], closed: false, widthMm: 0.5, operation: 'marks', label: 'x' }] };
+    expect(() => buildToolpaths(off, resolveEngraveSettings('aluminium'))).toThrow(/paths\[0\].points\[1\] \[51, 1\] lies off the stock; allowed: 0 <= x <= stock.widthMm 50/);
+  });
+
   it('sends wide marks to the flat end mill, after the V-bit cuts', () => {
     const s = resolveEngraveSettings('brass', { flatEndMillMm: 1 });
     const tp = buildToolpaths(SAMPLE_WIDE_MARK_JOB, s);

@@ -1,5 +1,5 @@
 import type { EngraveJob, EngraveOperation, Vec2 } from './engraveInput.ts';
-import { validateEngraveJob } from './engraveInput.ts';
+import { assertOnStock, validateEngraveJob } from './engraveInput.ts';
 import { flatGroovePath } from './flatGroove.ts';
 import type { EngraveSettings } from './materialPresets.ts';
 import { orderPaths } from './orderPaths.ts';
@@ -128,6 +128,7 @@ export function buildToolpaths(job: EngraveJob, settings: EngraveSettings, optio
     }
     const base = dedupe(p.points, p.closed);
     const points = tool === 'flat' ? flatGroovePath(base, p.widthMm, s.flatEndMillMm as number, s.flatStepoverFraction) : base;
+    if (tool === 'flat') points.forEach((q, j) => assertOnStock(q, `flat-mill pass point ${j} of paths[${i}] ('${p.label}')`, job.stock));
     return {
       tool,
       points,
