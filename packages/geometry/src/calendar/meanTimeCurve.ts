@@ -5,7 +5,7 @@ import { longitudeDifferenceDeg } from '../sun/longitudeCorrectionMin.ts';
 import { formatIsoDate, MS_PER_DAY, parseClockMinutes } from '../sun/localDate.ts';
 import { sunDeclinationRad } from '../sun/sunDeclinationRad.ts';
 import { assertHemisphere, declinationTowardPoleRad } from './declinationTowardPoleRad.ts';
-import type { FacePoint, FacePolyline, Hemisphere } from './types.ts';
+import type { FacePoint, FacePolyline, Hemisphere, StyleEdge } from './types.ts';
 
 /** Options of `meanTimeCurve` (lengths mm, angles degrees where named Deg). */
 export interface MeanTimeCurveOptions {
@@ -40,7 +40,7 @@ export interface MeanTimeSample {
   /** geocentric declination, north positive, radians */
   readonly declinationRad: number;
   /** which style edge casts the shadow (H < 0: west, morning) */
-  readonly style: 'west' | 'east';
+  readonly style: StyleEdge;
   readonly xMm: number;
   readonly yMm: number;
 }
@@ -112,7 +112,7 @@ export function meanTimeCurve(options: MeanTimeCurveOptions): MeanTimeCurve {
       throw new SpecError('clockTime', o.clockTime, `allowed: a clock time whose hour angle stays within ±${maxH}°`, `got ${JSON.stringify(o.clockTime)}, which is hour angle ${hDeg.toFixed(2)}° on ${formatIsoDate(dayMs)}`);
     }
     const hRad = (hDeg * Math.PI) / 180;
-    const style = hRad < 0 ? 'west' : 'east';
+    const style: StyleEdge = hRad < 0 ? 'west' : 'east';
     const xEast = (style === 'west' ? -1 : 1) * (half + h * Math.abs(Math.tan(hRad)));
     const xMm = mirror * xEast;
     const yMm = -Math.tan(declinationTowardPoleRad(decl, hemisphere)) * Math.hypot(h, Math.abs(xMm) - half);

@@ -1,8 +1,9 @@
-/** A point in the face frame (DESIGN §2), mm: [x right-positive in the face drawing, y toward the elevated pole]. */
-export type FacePoint = readonly [number, number];
+import type { Vec2 } from '../types.ts';
+
+export type { Hemisphere, StyleEdge } from '../types.ts';
+
+/** A point in the face frame (DESIGN §2, see ../types.ts), mm: [x right-positive in the face drawing, y toward the elevated pole]. */
+export type FacePoint = Vec2;
 
 /** An open polyline of face points, mm. */
 export type FacePolyline = readonly FacePoint[];
-
-/** Hemisphere of the site: decides which pole is elevated and where east lies on the face. */
-export type Hemisphere = 'north' | 'south';

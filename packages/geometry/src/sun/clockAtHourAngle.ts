@@ -2,7 +2,7 @@ import { SpecError } from '../errors.ts';
 import { assertFinite, assertRange } from '../guards.ts';
 import { equationOfTimeMin } from './equationOfTimeMin.ts';
 import { longitudeDifferenceDeg } from './longitudeCorrectionMin.ts';
-import { dateToUtcMidnightMs, formatClock, parseLocalDate } from './localDate.ts';
+import { dateToUtcMidnightMs, formatClockHms, parseLocalDate } from './localDate.ts';
 import { assertZone, offsetHoursAt, zoneYearOffsets } from './zoneOffsets.ts';
 
 /** Options of `clockAtHourAngle`. */
@@ -92,12 +92,12 @@ export function clockAtHourAngle(options: ClockAtHourAngleOptions): ClockReading
         : std;
   const clockMinutes = tStd + (offset - std) * 60;
   if (clockMinutes < 0 || clockMinutes >= 1440) {
-    throw new SpecError('hourAngleRad', o.hourAngleRad, `allowed: an hour angle the Sun reaches on ${o.date} by the local clock`, `got ${o.hourAngleRad}, which the Sun reaches at ${formatClock(clockMinutes)}, outside that date`);
+    throw new SpecError('hourAngleRad', o.hourAngleRad, `allowed: an hour angle the Sun reaches on ${o.date} by the local clock`, `got ${o.hourAngleRad}, which the Sun reaches at ${formatClockHms(clockMinutes)}, outside that date`);
   }
   return {
     utc: new Date(Math.round(utcMs)),
     clockMinutes,
-    clock: formatClock(clockMinutes),
+    clock: formatClockHms(clockMinutes),
     daylightSaving: offset > std,
     utcOffsetHours: offset,
     equationOfTimeMin: e,

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { formatClock, formatIsoDate, parseClockMinutes, parseLocalDate } from './localDate.ts';
+import { formatClockHms, formatIsoDate, parseClockMinutes, parseLocalDate } from './localDate.ts';
 
 describe('localDate helpers', () => {
   test('parseLocalDate', () => {
@@ -15,10 +15,10 @@ describe('localDate helpers', () => {
     expect(() => parseClockMinutes('9:30')).toThrow(/HH:MM/);
   });
 
-  test('formatClock rounds to the second', () => {
-    expect(formatClock(810.5)).toBe('13:30:30');
-    expect(formatClock(59.9999)).toBe('01:00:00');
-    expect(formatClock(-10)).toBe('-00:10:00');
+  test('formatClockHms rounds to the second', () => {
+    expect(formatClockHms(810.5)).toBe('13:30:30');
+    expect(formatClockHms(59.9999)).toBe('01:00:00');
+    expect(formatClockHms(-10)).toBe('-00:10:00');
     expect(formatIsoDate(Date.UTC(2025, 11, 31))).toBe('2025-12-31');
   });
 });

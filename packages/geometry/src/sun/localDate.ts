@@ -51,9 +51,9 @@ export function parseClockMinutes(text: unknown, field = 'clock'): number {
 /**
  * Format minutes after midnight as 'HH:MM:SS', rounded to the nearest second.
  * Values outside one day keep counting hours ('24:00:05', '-00:10:00').
- * @example formatClock(810.5) // '13:30:30'
+ * @example formatClockHms(810.5) // '13:30:30'
  */
-export function formatClock(minutes: number): string {
+export function formatClockHms(minutes: number): string {
   const total = Math.round(minutes * 60);
   const sign = total < 0 ? '-' : '';
   const a = Math.abs(total);
