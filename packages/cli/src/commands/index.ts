@@ -1,0 +1,6 @@
+import { buildCommand } from './build.ts';
+import { initCommand } from './init.ts';
+import type { CommandModule } from './commandTypes.ts';
+
+/** Every command of the CLI, in the order --help lists them. Add a command: one file, one line here. */
+export const COMMANDS: readonly CommandModule[] = [buildCommand, initCommand];

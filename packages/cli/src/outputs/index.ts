@@ -1,0 +1,9 @@
+import { plateOutputs } from './plateOutputs.ts';
+import type { Producer } from './outputTypes.ts';
+
+/**
+ * Every producer of `umbrafab build`, in file order. Add an output group:
+ * one file in outputs/, one line here. Sections of report.json with the same
+ * top-level key are merged shallowly (later producers add keys).
+ */
+export const PRODUCERS: readonly Producer[] = [plateOutputs];

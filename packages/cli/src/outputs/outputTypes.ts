@@ -1,0 +1,23 @@
+import type { DialLayout, DialSpec, PlateDrawing } from '@umbrafab/geometry';
+import type { OutputFile } from '../writeFilesAtomic.ts';
+
+/** What every producer can read: the spec, its layout and the plate drawing (computed once). */
+export interface BuildContext {
+  readonly spec: DialSpec;
+  readonly layout: DialLayout;
+  readonly drawing: PlateDrawing;
+}
+
+/** What a producer adds: files, and top-level sections merged into report.json. */
+export interface ProducerResult {
+  readonly files: readonly OutputFile[];
+  readonly report: Readonly<Record<string, unknown>>;
+}
+
+/**
+ * One group of outputs (the plate, the printed parts, the toolpaths, …), in
+ * its own file under outputs/. Pure: no file system, no clock.
+ */
+export type Producer = (ctx: BuildContext) => ProducerResult;
+
+export const utf8 = (s: string): Uint8Array => new TextEncoder().encode(s);

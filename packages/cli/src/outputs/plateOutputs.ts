@@ -1,0 +1,45 @@
+import { kerfCompensate, toDxf, toSvg } from '@umbrafab/fabricate';
+import { utf8, type Producer } from './outputTypes.ts';
+
+/** plate.dxf and preview.svg, and the report's marks, plate, gnomon and time sections. */
+export const plateOutputs: Producer = ({ spec, layout, drawing }) => {
+  const cut = kerfCompensate(drawing, spec.process.kerf);
+  const dxf = toDxf(drawing, { method: spec.process.method, kerfMm: spec.process.kerf });
+  const svg = toSvg(drawing, { caption: `${spec.name} - preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+  return {
+    files: [
+      { name: 'plate.dxf', bytes: utf8(dxf) },
+      { name: 'preview.svg', bytes: utf8(svg) },
+    ],
+    report: {
+      hemisphere: layout.hemisphere,
+      marks: layout.marks,
+      plate: {
+        widthMm: layout.plate.widthMm,
+        lengthMm: layout.plate.lengthMm,
+        thicknessMm: layout.plate.thicknessMm,
+        cornerRadiusMm: layout.plate.cornerRadiusMm,
+        substyleX: layout.plate.substyleX,
+        faceOriginY: layout.plate.faceOriginY,
+        holes: layout.plate.holes.map((c) => ({ xMm: c.cx, yMm: c.cy, diameterMm: 2 * c.radiusMm })),
+        slots: layout.plate.slots.map((s) => ({ xMm: s.cx, yMm: s.cy, widthMm: s.widthMm, lengthMm: s.heightMm })),
+        cut: {
+          method: spec.process.method,
+          kerfMm: spec.process.kerf,
+          offsetMm: cut.offsetMm,
+          outlineWidthMm: cut.outline.widthMm,
+          outlineLengthMm: cut.outline.heightMm,
+          fitClearancePerSideMm: spec.process.clearance,
+        },
+      },
+      gnomon: {
+        heightMm: layout.gnomon.heightMm,
+        thicknessMm: layout.gnomon.thicknessMm,
+        y0Mm: layout.gnomon.y0Mm,
+        y1Mm: layout.gnomon.y1Mm,
+        tabs: layout.gnomon.tabs,
+      },
+      time: layout.time,
+    },
+  };
+};
