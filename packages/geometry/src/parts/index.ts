@@ -1,4 +1,4 @@
-export type { Mesh, Triangle, Vec2, Vec3 } from './mesh.ts';
+export type { Mesh, Triangle, Vec3 } from './mesh.ts';
 export { meshVolumeMm3 } from './meshVolumeMm3.ts';
 export { meshBounds, type MeshBounds } from './meshBounds.ts';
 export { validateMesh } from './validateMesh.ts';

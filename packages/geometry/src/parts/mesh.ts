@@ -8,7 +8,7 @@
  */
 
 /** A point in a plane, `[u, v]` in mm. */
-export type Vec2 = readonly [number, number];
+export type { Vec2 } from '../types.ts';
 
 /** A point or direction in space, `[x, y, z]` in mm. */
 export type Vec3 = readonly [number, number, number];

@@ -2,7 +2,7 @@ import { SpecError } from '../errors.ts';
 import { DEG } from '../guards.ts';
 import type { DialSpec } from '../spec/schema.ts';
 import { formatClock, parseClock } from '../spec/parseClock.ts';
-import { standardMeridianDeg, standardOffsetMin } from '../spec/zoneMeridian.ts';
+import { standardMeridianDeg, zoneYearOffsets } from '../sun/zoneOffsets.ts';
 import { strokeText, strokeTextWidthMm } from '../text/strokeText.ts';
 import type { Circle, Hemisphere, Mark, MarkKind, RoundedRect, TextBlock } from '../types.ts';
 import { castingEdge, eastToFaceX, markOffsetEastMm } from './markOffset.ts';
@@ -195,7 +195,7 @@ export function layoutDial(spec: DialSpec): DialLayout {
 }
 
 function timeLayout(spec: DialSpec): TimeLayout {
-  const offset = standardOffsetMin(spec.site.timezone, spec.calendar.year);
+  const offset = Math.round(zoneYearOffsets(spec.site.timezone, spec.calendar.year).standardOffsetHours * 60);
   const meridian = standardMeridianDeg(spec.site.timezone, spec.calendar.year);
   const standard = spec.dial.reads === 'standard';
   return {

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { SpecError, formatValue } from '../errors.ts';
 import { didYouMean } from './didYouMean.ts';
 import { METHOD_DEFAULTS, specSchema, type DialSpec } from './schema.ts';
-import { knowsTimeZone } from './zoneMeridian.ts';
+import { isValidTimeZone } from '../sun/zoneOffsets.ts';
 import { parseClock } from './parseClock.ts';
 
 type Issue = z.core.$ZodIssue;
@@ -25,7 +25,7 @@ export function parseSpec(raw: unknown): DialSpec {
   const result = specSchema.safeParse(raw);
   if (!result.success) throw issueToError(result.error.issues, raw);
   const s = result.data;
-  if (!knowsTimeZone(s.site.timezone)) {
+  if (!isValidTimeZone(s.site.timezone)) {
     throw new SpecError('site.timezone', s.site.timezone, 'allowed: an IANA time zone name such as "Europe/Lisbon" or "America/Denver"', `unknown time zone ${JSON.stringify(s.site.timezone)}`);
   }
   if (parseClock('hours.from', s.hours.from) >= parseClock('hours.to', s.hours.to)) {
