@@ -13,8 +13,10 @@ const cases = [
   { name: 'router, roman, 2 holes', raw: { site: { latitude: 64.1, longitude: -21.9, timezone: 'Atlantic/Reykjavik' }, process: { method: 'router', kerf: 3.175 }, dial: { numerals: 'roman' }, gnomon: { height: 70, thickness: 6 }, holes: { count: 2, diameter: 8 } } },
 ];
 
-function writeDxf(raw: object): { dump: DxfDump; text: string; report: ReturnType<typeof buildFiles>['report']; built: ReturnType<typeof buildFiles> } {
-  const built = buildFiles(parseSpec(raw));
+type Built = Awaited<ReturnType<typeof buildFiles>>;
+
+async function writeDxf(raw: object): Promise<{ dump: DxfDump; text: string; built: Built }> {
+  const built = await buildFiles(parseSpec(raw));
   const dir = mkdtempSync(join(tmpdir(), 'umbrafab-dxf-'));
   const file = join(dir, 'plate.dxf');
   const text = new TextDecoder().decode(built.files.find((f) => f.name === 'plate.dxf')!.bytes);
@@ -22,8 +24,10 @@ function writeDxf(raw: object): { dump: DxfDump; text: string; report: ReturnTyp
   return { dump: ezdxfDump(file), text, report: built.report, built };
 }
 
-describe.each(cases)('plate.dxf read back by ezdxf: $name', ({ raw }) => {
-  const { dump, text, built } = writeDxf(raw);
+const readBack = await Promise.all(cases.map((c) => writeDxf(c.raw)));
+
+describe.each(cases.map((c, i) => ({ ...c, i })))('plate.dxf read back by ezdxf: $name', ({ i }) => {
+  const { dump, text, built } = readBack[i];
   const spec = built.layout.spec;
   const plate = built.layout.plate;
   const kerf = spec.process.kerf;
@@ -96,9 +100,9 @@ describe.each(cases)('plate.dxf read back by ezdxf: $name', ({ raw }) => {
 });
 
 describe('plate.dxf determinism', () => {
-  it('is byte-identical on a second build in the same process', () => {
-    const a = writeDxf(cases[0].raw).text;
-    const b = writeDxf(cases[0].raw).text;
+  it('is byte-identical on a second build in the same process', async () => {
+    const a = (await writeDxf(cases[0].raw)).text;
+    const b = (await writeDxf(cases[0].raw)).text;
     expect(a).toBe(b);
   });
 });

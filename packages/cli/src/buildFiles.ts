@@ -18,14 +18,14 @@ export const GENERATOR = 'umbrafab 0.1.0';
  * report.json. The same spec always gives byte-identical files (no clock, no
  * randomness, fixed rounding).
  */
-export function buildFiles(spec: DialSpec): BuildResult {
+export async function buildFiles(spec: DialSpec): Promise<BuildResult> {
   const layout = layoutDial(spec);
   const drawing = plateDrawing(layout);
   const ctx = { spec, layout, drawing };
   const files: OutputFile[] = [];
   const sections: Record<string, unknown> = {};
   for (const produce of PRODUCERS) {
-    const r = produce(ctx);
+    const r = await produce(ctx);
     files.push(...r.files);
     for (const [key, value] of Object.entries(r.report)) {
       const prev = sections[key];

@@ -12,9 +12,9 @@ export const buildCommand: CommandModule = {
       .positional('spec', { type: 'string', demandOption: true, describe: 'dial spec file (.yaml or .json)' })
       .option('out', { type: 'string', alias: 'o', describe: 'output folder (default: out/<spec name>)' })
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
-  run: (args, io) => {
+  run: async (args, io) => {
     const spec = readSpecFile(args.spec);
-    const result = buildFiles(spec);
+    const result = await buildFiles(spec);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
     writeFilesAtomic(outDir, result.files, args.force);
     const p = result.layout.plate;

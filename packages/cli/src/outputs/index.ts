@@ -1,4 +1,8 @@
+import { engraveOutputs } from './engraveOutputs.ts';
+import { partsOutputs } from './partsOutputs.ts';
+import { picturesOutputs } from './picturesOutputs.ts';
 import { plateOutputs } from './plateOutputs.ts';
+import { timeOutputs } from './timeOutputs.ts';
 import type { Producer } from './outputTypes.ts';
 
 /**
@@ -6,4 +10,4 @@ import type { Producer } from './outputTypes.ts';
  * one file in outputs/, one line here. Sections of report.json with the same
  * top-level key are merged shallowly (later producers add keys).
  */
-export const PRODUCERS: readonly Producer[] = [plateOutputs];
+export const PRODUCERS: readonly Producer[] = [plateOutputs, partsOutputs, engraveOutputs, timeOutputs, picturesOutputs];

@@ -16,8 +16,9 @@ export interface ProducerResult {
 
 /**
  * One group of outputs (the plate, the printed parts, the toolpaths, …), in
- * its own file under outputs/. Pure: no file system, no clock.
+ * its own file under outputs/. Pure: no file system, no clock. May be async
+ * (e.g. a WASM mesh engine that loads once).
  */
-export type Producer = (ctx: BuildContext) => ProducerResult;
+export type Producer = (ctx: BuildContext) => ProducerResult | Promise<ProducerResult>;
 
 export const utf8 = (s: string): Uint8Array => new TextEncoder().encode(s);

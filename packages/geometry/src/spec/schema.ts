@@ -1,4 +1,9 @@
 import { z } from 'zod';
+import { checkSection } from './sections/checkSection.ts';
+import { engraveSection } from './sections/engraveSection.ts';
+import { installSection } from './sections/installSection.ts';
+import { partsSection } from './sections/partsSection.ts';
+import { templateSection } from './sections/templateSection.ts';
 
 /**
  * The dial spec schema: one source for validation, defaults and the field
@@ -114,6 +119,11 @@ export const specSchema = z.strictObject({
       year: num({ min: 1900, max: 2200, unit: '', int: true }).default(2027).describe('year for the time tables and the zone offsets (outputs never depend on today)'),
     })
     .prefault({}),
+  parts: partsSection,
+  engrave: engraveSection,
+  install: installSection,
+  check: checkSection,
+  template: templateSection,
   process: z
     .strictObject({
       method: oneOf(METHODS).default('laser').describe('laser, waterjet, router or print'),
