@@ -21,7 +21,7 @@ async function writeDxf(raw: object): Promise<{ dump: DxfDump; text: string; bui
   const file = join(dir, 'plate.dxf');
   const text = new TextDecoder().decode(built.files.find((f) => f.name === 'plate.dxf')!.bytes);
   writeFileSync(file, text);
-  return { dump: ezdxfDump(file), text, report: built.report, built };
+  return { dump: ezdxfDump(file), text, built };
 }
 
 const readBack = await Promise.all(cases.map((c) => writeDxf(c.raw)));
