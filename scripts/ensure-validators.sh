@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Make sure the outside validators the tests use are present:
 #   python3-ezdxf (DXF reader + audit, run with /usr/bin/python3), admesh (STL),
-#   linuxcnc-uspace (rs274, the standalone RS274NGC interpreter), poppler-utils (PDF).
+#   linuxcnc-uspace (rs274, the standalone RS274NGC interpreter), poppler-utils (PDF),
+#   chromium (the browser test of the local page).
 # Installs the missing ones with apt-get when running as root; otherwise says what to install.
 set -euo pipefail
 need=()
@@ -9,6 +10,7 @@ need=()
 command -v admesh >/dev/null 2>&1 || need+=(admesh)
 command -v rs274 >/dev/null 2>&1 || need+=(linuxcnc-uspace)
 command -v pdftoppm >/dev/null 2>&1 || need+=(poppler-utils)
+command -v chromium >/dev/null 2>&1 || need+=(chromium)
 if [ ${#need[@]} -eq 0 ]; then exit 0; fi
 if [ "$(id -u)" -ne 0 ]; then
   echo "umbrafab tests need these Debian packages: ${need[*]}" >&2
