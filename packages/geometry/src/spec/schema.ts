@@ -49,6 +49,15 @@ export const MATERIALS = ['aluminium', 'brass', 'stainless', 'steel', 'acrylic',
 
 export const NUMERAL_STYLES = ['arabic', 'arabic24', 'roman'] as const;
 
+/** Sets of date lines a nodus dial can carry (calendar.lines). */
+export const DATE_LINE_SETS = ['solstices', 'equinox', 'zodiac'] as const;
+
+/** A custom date line: "MM-DD" in calendar.year and a short engraved label. */
+const calendarDate = z.strictObject({
+  date: z.string({ error: 'allowed: a date "MM-DD" in quotes, e.g. "06-14"' }).regex(/^(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/, { error: 'allowed: a date "MM-DD" with month 01-12 and day 01-31, e.g. "06-14"' }).describe('month and day "MM-DD" in calendar.year'),
+  label: z.string({ error: 'allowed: a text in quotes' }).min(1).max(24, { error: 'allowed: 1 to 24 characters' }).describe('engraved beside the line'),
+});
+
 const markSchema = (length: number, width: number) =>
   z
     .strictObject({
@@ -71,6 +80,8 @@ export const specSchema = z.strictObject({
       numerals: oneOf(NUMERAL_STYLES).default('arabic').describe('arabic (7..12..5), arabic24 (7..17) or roman (VII..XII..V)'),
       numeralHeight: num({ min: 2, max: 100, unit: 'mm' }).default(8).describe('numeral cap height, mm'),
       textHeight: num({ min: 1.5, max: 50, unit: 'mm' }).default(3.5).describe('title block text height, mm'),
+      meanTimeCurves: z.boolean({ error: 'allowed: true or false' }).default(false).describe('figure-of-eight curves of standard clock time for each whole hour (needs gnomon.nodus: true)'),
+      summerNumerals: z.boolean({ error: 'allowed: true or false' }).default(false).describe('a second, smaller row of numerals in summer (daylight-saving) time'),
     })
     .prefault({}),
   gnomon: z
@@ -80,6 +91,8 @@ export const specSchema = z.strictObject({
       overhang: num({ min: 0, max: 500, unit: 'mm' }).default(5).describe('style length beyond the hour marks at each end, mm'),
       tabs: num({ min: 1, max: 8, unit: '', int: true }).default(2).describe('number of tabs through the plate'),
       tabLength: num({ min: 2, max: 500, unit: 'mm' }).default(15).describe('length of each tab along the style, mm'),
+      nodus: z.boolean({ error: 'allowed: true or false' }).default(false).describe('a nodus (notch or bead) on the style: its shadow point reads the date lines'),
+      nodusY: num({ min: -1000, max: 1000, unit: 'mm' }).default(0).describe('nodus position along the style, face y in mm (0 = mid-length of the hour marks)'),
     })
     .prefault({}),
   hours: z
@@ -95,6 +108,7 @@ export const specSchema = z.strictObject({
       hour: markSchema(80, 0.8),
       half: markSchema(55, 0.6),
       quarter: markSchema(30, 0.4),
+      followPenumbra: z.boolean({ error: 'allowed: true or false' }).default(false).describe('widen marks away from noon as 1/cos² of the hour angle, like the shadow blur, so each spans the same time'),
     })
     .prefault({}),
   plate: z
@@ -117,6 +131,9 @@ export const specSchema = z.strictObject({
   calendar: z
     .strictObject({
       year: num({ min: 1900, max: 2200, unit: '', int: true }).default(2027).describe('year for the time tables and the zone offsets (outputs never depend on today)'),
+      lines: z.array(oneOf(DATE_LINE_SETS), { error: `allowed: a list of ${DATE_LINE_SETS.map((v) => JSON.stringify(v)).join(', ')}` }).default(['solstices', 'equinox']).describe('date lines drawn when gnomon.nodus is true: solstices, equinox, zodiac (the twelve sign entries)'),
+      dates: z.array(calendarDate).max(12, { error: 'allowed: at most 12 custom dates' }).default([]).describe('extra date lines (needs gnomon.nodus: true), e.g. [{date: "06-14", label: "WEDDING"}]'),
+      table: oneOf(['none', 'table', 'graph']).default('none').describe('engrave the equation of time on the plate: none, a table (1st and 15th of each month) or a graph'),
     })
     .prefault({}),
   parts: partsSection,
