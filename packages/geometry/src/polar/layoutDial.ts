@@ -140,15 +140,18 @@ export function layoutDial(spec: DialSpec): DialLayout {
   const numeralHalfExtent = Math.max(0, ...numerals.map((n) => halfExtentX(n)));
   const engravingHalf = Math.max(markHalfExtent, numeralHalfExtent);
   const holeNeed = holes.count > 0 ? engravingHalf + HOLE_CLEAR_MM + holes.diameter / 2 + holes.inset : 0;
-  const autoHalfWidth = Math.max(engravingHalf + spec.plate.margin, holeNeed);
+  // The title block sits left of the gnomon: an auto plate is wide enough for it at full size.
+  const textH = spec.dial.textHeight;
+  const titleLines = titleText(spec, time);
+  const titleLeftInset = holes.count === 4 ? holes.inset + holes.diameter / 2 + HOLE_CLEAR_MM : spec.plate.margin;
+  const titleNeed = titleLeftInset + Math.max(...titleLines.map((l) => strokeTextWidthMm(l, textH))) + t / 2 + spec.process.clearance + BAND_GAP_MM;
+  const autoHalfWidth = Math.max(engravingHalf + spec.plate.margin, holeNeed, titleNeed);
   const widthMm = spec.plate.width === 'auto' ? Math.ceil(2 * autoHalfWidth) : spec.plate.width;
-  if (spec.plate.width !== 'auto' && widthMm / 2 < autoHalfWidth) {
-    throw plateTooNarrow(spec, times, widthMm, autoHalfWidth);
+  if (spec.plate.width !== 'auto' && widthMm / 2 < Math.max(engravingHalf + spec.plate.margin, holeNeed)) {
+    throw plateTooNarrow(spec, times, widthMm, Math.max(engravingHalf + spec.plate.margin, holeNeed));
   }
 
   // Plate extents along the style: margin, numerals, marks and gnomon, title, margin.
-  const textH = spec.dial.textHeight;
-  const titleLines = titleText(spec, time);
   const titleBandHeight = (titleLines.length - 1) * LINE_PITCH * textH + textH;
   const engravedTop = Math.max(spanTop, gnomonY1);
   const bottomNeed = spec.plate.margin + (numeralTop - numeralBase);
@@ -167,7 +170,7 @@ export function layoutDial(spec: DialSpec): DialLayout {
   const substyleX = widthMm / 2;
 
   const title = titleBlocks(titleLines, spec, {
-    leftX: -widthMm / 2 + (holes.count === 4 ? holes.inset + holes.diameter / 2 + HOLE_CLEAR_MM : spec.plate.margin),
+    leftX: -widthMm / 2 + titleLeftInset,
     rightLimitX: -t / 2 - spec.process.clearance - BAND_GAP_MM,
     topY: titleBottom + titleBandHeight,
     notes,

@@ -34,12 +34,29 @@ export function parseSpec(raw: unknown): DialSpec {
   const fallback = METHOD_DEFAULTS[s.process.method];
   return {
     ...s,
+    marks: methodMarkWidths(s.marks, s.process.method, raw as Record<string, unknown>),
     process: {
       method: s.process.method,
       kerf: s.process.kerf ?? fallback.kerf,
       clearance: s.process.clearance ?? fallback.clearance,
     },
   };
+}
+
+/**
+ * A waterjet cannot make a line narrower than its jet (DESIGN §5: kerf about
+ * 0.8–1.0 mm), so mark widths the user did not set default wider for it.
+ */
+export const WATERJET_MARK_WIDTHS = { hour: 2, half: 1.6, quarter: 1.2 } as const;
+
+function methodMarkWidths<M extends Record<'hour' | 'half' | 'quarter', { length: number; width: number }>>(marks: M, method: string, raw: Record<string, unknown>): M {
+  if (method !== 'waterjet') return marks;
+  const given = (raw.marks ?? {}) as Record<string, Record<string, unknown> | undefined>;
+  const out = { ...marks };
+  for (const kind of ['hour', 'half', 'quarter'] as const) {
+    if (given[kind]?.width === undefined) out[kind] = { ...marks[kind], width: WATERJET_MARK_WIDTHS[kind] };
+  }
+  return out;
 }
 
 /** Turn zod's first issue into a SpecError with field, value and allowed text. */

@@ -1,0 +1,139 @@
+import { execFileSync } from 'node:child_process';
+import { mkdirSync, mkdtempSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import fc from 'fast-check';
+import { stringify } from 'yaml';
+import { afterAll, describe, expect, it } from 'vitest';
+import { isSpecError, parseSpec } from '../packages/geometry/src/index.ts';
+import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { runCli } from './helpers/runCli.ts';
+
+/**
+ * Property-based tests over the whole spec space (fast-check). Seeded, so
+ * each run is the same set of cases; FUZZ_RUNS scales the count.
+ * Outside validators: ezdxf audit (Debian python3-ezdxf), admesh, rs274.
+ */
+const RUNS = Number(process.env.FUZZ_RUNS ?? 1200);
+const BAD_RUNS = Number(process.env.FUZZ_BAD_RUNS ?? 1000);
+const SEED = 20271;
+const work = mkdtempSync(join(tmpdir(), 'umbrafab-fuzz-'));
+afterAll(() => rmSync(work, { recursive: true, force: true }));
+
+const zones = ['UTC', 'Europe/London', 'Europe/Lisbon', 'Europe/Berlin', 'America/Denver', 'America/Phoenix', 'Asia/Kolkata', 'Australia/Hobart', 'Pacific/Auckland', 'America/Sao_Paulo', 'Africa/Nairobi', 'Asia/Tokyo'];
+const clockAt = (m: number) => `${String(Math.floor(m / 60)).padStart(2, '0')}:${String(m % 60).padStart(2, '0')}`;
+const round2 = (x: number) => Math.round(x * 100) / 100;
+
+const specArb = fc.record({
+  name: fc.stringMatching(/^[A-Za-z][A-Za-z0-9 .-]{0,24}$/),
+  site: fc.record({
+    latitude: fc.double({ min: -89.9, max: 89.9, noNaN: true }).map(round2),
+    longitude: fc.double({ min: -180, max: 180, noNaN: true }).map(round2),
+    timezone: fc.constantFrom(...zones),
+  }),
+  dial: fc.record({ reads: fc.constantFrom('solar', 'standard'), numerals: fc.constantFrom('arabic', 'arabic24', 'roman'), numeralHeight: fc.integer({ min: 3, max: 12 }) }),
+  gnomon: fc.record({ height: fc.integer({ min: 20, max: 160 }), thickness: fc.constantFrom(0.5, 1, 2, 3, 4, 6, 10) }),
+  hours: fc
+    .record({ from: fc.integer({ min: 7, max: 11 }), to: fc.integer({ min: 13, max: 17 }), step: fc.constantFrom(15, 30, 60) })
+    .map((h) => ({ from: clockAt(h.from * 60), to: clockAt(h.to * 60), step: h.step })),
+  plate: fc.record({ margin: fc.integer({ min: 5, max: 25 }), thickness: fc.constantFrom(2, 3, 5, 6, 10), material: fc.constantFrom('aluminium', 'brass', 'acrylic', 'hardwood', 'slate', 'stainless') }),
+  holes: fc.record({ count: fc.constantFrom(0, 2, 4) }),
+  process: fc.record({ method: fc.constantFrom('laser', 'waterjet', 'router', 'print') }),
+});
+
+describe('fuzzed specs', () => {
+  it(`every valid spec builds files that pass ezdxf, admesh and rs274; others fail with a SpecError (${RUNS} cases)`, async () => {
+    const dxfDir = join(work, 'dxf');
+    mkdirSync(dxfDir);
+    let built = 0;
+    let refused = 0;
+    const refusedFields = new Map<string, number>();
+    const others: string[] = [];
+    await fc.assert(
+      fc.asyncProperty(specArb, async (raw) => {
+        let result;
+        try {
+          result = await buildFiles(parseSpec(raw));
+        } catch (e) {
+          if (!isSpecError(e)) throw e; // an internal error is a failure of the property
+          refused++;
+          refusedFields.set(e.field, (refusedFields.get(e.field) ?? 0) + 1);
+          return;
+        }
+        const id = String(built++).padStart(5, '0');
+        for (const f of result.files) {
+          if (f.name.endsWith('.dxf')) writeFileSync(join(dxfDir, `${id}-${f.name}`), f.bytes);
+          else if (f.name.endsWith('.stl') || f.name.endsWith('.ngc')) others.push(writeOther(id, f.name, f.bytes));
+        }
+      }),
+      { numRuns: RUNS, seed: SEED },
+    );
+    const audit = JSON.parse(execFileSync('/usr/bin/python3', [fileURLToPath(new URL('./helpers/dxf_audit_many.py', import.meta.url)), dxfDir], { encoding: 'utf8', maxBuffer: 1 << 28 })) as Record<string, { errors: string[]; insunits: number; nonzero_z: number }>;
+    const bad = Object.entries(audit).filter(([, a]) => a.errors.length || a.insunits !== 4 || a.nonzero_z);
+    expect(bad.slice(0, 3)).toEqual([]);
+    expect(Object.keys(audit).length).toBeGreaterThanOrEqual(built);
+    for (const file of others) {
+      if (file.endsWith('.stl')) {
+        const txt = execFileSync('admesh', [file], { encoding: 'utf8' });
+        expect(txt, file).toMatch(/Number of parts\s*:\s*1\b/);
+        expect(txt, file).toMatch(/Degenerate facets\s*:\s*0\b/);
+        expect(txt, file).toMatch(/Edges fixed\s*:\s*0\b/);
+      } else {
+        execFileSync('rs274', ['-g', file], { encoding: 'utf8', cwd: work, env: { ...process.env, HOME: work } });
+      }
+    }
+    console.log(`fuzz: ${RUNS} specs, ${built} built (${Object.keys(audit).length} DXF audited, ${others.length} STL/NGC checked), ${refused} refused by field: ${JSON.stringify(Object.fromEntries(refusedFields))}`);
+    expect(built).toBeGreaterThan(RUNS / 3);
+  }, 900_000);
+
+  function writeOther(id: string, name: string, bytes: Uint8Array): string {
+    const dir = join(work, 'other');
+    mkdirSync(dir, { recursive: true });
+    const file = join(dir, `${id}-${name}`);
+    writeFileSync(file, bytes);
+    return file;
+  }
+
+  it(`every invalid spec exits 1 naming a field, with no stack trace and no file written (${BAD_RUNS} cases)`, async () => {
+    const specFile = join(work, 'bad.yaml');
+    const out = join(work, 'bad-out');
+    const breakArb = fc.record({
+      base: specArb,
+      path: fc.constantFrom('site.latitude', 'site.longitude', 'site.timezone', 'gnomon.height', 'gnomon.thickness', 'hours.from', 'hours.to', 'hours.step', 'plate.width', 'plate.margin', 'process.method', 'process.kerf', 'dial.numerals', 'holes.count', 'marks.hour.width', 'name'),
+      value: fc.oneof(fc.constant(null), fc.constant('x'), fc.constant(-1), fc.constant(1e9), fc.constant(true), fc.constant([]), fc.constant({}), fc.constant('25:99'), fc.double({ noNaN: false })),
+      unknown: fc.option(fc.constantFrom('gnomon.hight', 'site.lat', 'proces', 'marks.hours'), { nil: undefined }),
+    });
+    let cases = 0;
+    await fc.assert(
+      fc.asyncProperty(breakArb, async ({ base, path, value, unknown }) => {
+        const spec = structuredClone(base) as Record<string, any>;
+        setPath(spec, unknown ?? path, unknown ? 1 : value);
+        // Some substitutions happen to stay valid (e.g. a huge plate width); those are not this property's cases.
+        try {
+          parseSpec(spec);
+          return;
+        } catch (e) {
+          if (!isSpecError(e)) throw e;
+        }
+        cases++;
+        writeFileSync(specFile, stringify(spec));
+        const r = await runCli(['build', specFile, '--out', out]);
+        expect(r.code).toBe(1);
+        expect(r.err).toMatch(/^umbrafab: [A-Za-z(][^:]*: /);
+        expect(r.err).not.toMatch(/\n\s+at /);
+        expect(() => readdirSync(out)).toThrow();
+      }),
+      { numRuns: BAD_RUNS, seed: SEED + 1 },
+    );
+    console.log(`fuzz: ${cases} invalid specs refused with exit 1`);
+    expect(cases).toBeGreaterThan(BAD_RUNS / 2);
+  }, 600_000);
+});
+
+function setPath(obj: Record<string, any>, path: string, value: unknown): void {
+  const keys = path.split('.');
+  let node = obj;
+  for (const k of keys.slice(0, -1)) node = node[k] = node[k] && typeof node[k] === 'object' ? node[k] : {};
+  node[keys.at(-1)!] = value;
+}
