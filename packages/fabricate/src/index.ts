@@ -4,3 +4,4 @@ export * from './process/rectVertices.ts';
 export * from './dxf/toDxf.ts';
 export * from './svg/toSvg.ts';
 export * from './report/toReportJson.ts';
+export * from './engrave/index.ts';

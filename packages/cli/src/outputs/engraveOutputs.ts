@@ -1,4 +1,16 @@
-import type { Producer } from './outputTypes.ts';
+import { engraveFromSpec } from '@umbrafab/fabricate';
+import { utf8, type Producer } from './outputTypes.ts';
 
-/** The engrave outputs of `umbrafab build` (filled in by the engrave work). */
-export const engraveOutputs: Producer = () => ({ files: [], report: {} });
+/**
+ * The engraving programs of `umbrafab build` (engrave.ngc for a router or
+ * mill, engrave-laser.gcode for a laser engraver, as spec `engrave.programs`
+ * chooses) and the report's `engraving` section (depths, passes, time
+ * estimate, rapid travel before and after ordering with its lower bound).
+ */
+export const engraveOutputs: Producer = ({ spec, drawing }) => {
+  const r = engraveFromSpec(spec, drawing);
+  return {
+    files: r.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })),
+    report: { engraving: r.report },
+  };
+};

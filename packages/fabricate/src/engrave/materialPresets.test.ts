@@ -31,7 +31,7 @@ describe('resolveEngraveSettings', () => {
 
   it('rejects an unknown material, listing the allowed ones', () => {
     expect(() => resolveEngraveSettings('granite')).toThrow(
-      'stock.material "granite" has no engraving preset; allowed: aluminium, brass, stainless, acrylic, hardwood, slate',
+      'stock.material "granite" has no engraving preset; allowed: aluminium, brass, stainless, steel, acrylic, hardwood, plywood, slate',
     );
   });
 

@@ -12,7 +12,7 @@ import { assertInRange, assertPositive, assertNonNegative, quote } from './check
  */
 
 /** Materials with a preset. */
-export const MATERIAL_NAMES = ['aluminium', 'brass', 'stainless', 'acrylic', 'hardwood', 'slate'] as const;
+export const MATERIAL_NAMES = ['aluminium', 'brass', 'stainless', 'steel', 'acrylic', 'hardwood', 'plywood', 'slate'] as const;
 export type MaterialName = (typeof MATERIAL_NAMES)[number];
 
 /** The material-dependent part of the settings. */
@@ -42,10 +42,16 @@ export const MATERIAL_PRESETS: Readonly<Record<MaterialName, MaterialPreset>> = 
   // 304/316 stainless work-hardens: slow feed, very light passes, carbide bit.
   // Laser values again assume a marking compound.
   stainless: { spindleRpm: 10000, feedMmPerMin: 200, plungeMmPerMin: 50, stepDownMm: 0.05, laserPowerPct: 100, laserSpeedMmPerMin: 400 },
+  // Mild steel (S235/1018-type): between brass and stainless; carbide bit,
+  // light passes, cutting fluid. Laser values assume a marking compound.
+  steel: { spindleRpm: 10000, feedMmPerMin: 250, plungeMmPerMin: 60, stepDownMm: 0.08, laserPowerPct: 100, laserSpeedMmPerMin: 400 },
   // Cast acrylic (PMMA): fast enough not to melt, single-flute bit; CO2 scores it at low power.
   acrylic: { spindleRpm: 16000, feedMmPerMin: 1000, plungeMmPerMin: 300, stepDownMm: 0.5, laserPowerPct: 30, laserSpeedMmPerMin: 3000 },
   // Oak, beech, iroko and the like.
   hardwood: { spindleRpm: 18000, feedMmPerMin: 1500, plungeMmPerMin: 500, stepDownMm: 1, laserPowerPct: 40, laserSpeedMmPerMin: 2000 },
+  // Birch or poplar plywood: like a softer hardwood; the glue lines dull the
+  // bit and char darker under a laser, so a little less laser power.
+  plywood: { spindleRpm: 18000, feedMmPerMin: 1500, plungeMmPerMin: 500, stepDownMm: 1, laserPowerPct: 35, laserSpeedMmPerMin: 2500 },
   // Natural slate: abrasive and brittle, moderate feed; a laser marks it light grey.
   slate: { spindleRpm: 12000, feedMmPerMin: 600, plungeMmPerMin: 200, stepDownMm: 0.3, laserPowerPct: 60, laserSpeedMmPerMin: 1500 },
 };

@@ -1,0 +1,195 @@
+import type { DialSpec, PlateDrawing } from '@umbrafab/geometry';
+import { checkMillJob } from './checkMillJob.ts';
+import type { EngraveJob } from './engraveInput.ts';
+import { engraveJobFromDrawing } from './engraveJobFromDrawing.ts';
+import { ENGRAVE_FILE_NAMES, engraveProgramsFor, type EngraveProgram } from './engravePrograms.ts';
+import { engraveSettingsFromSpec } from './engraveSettingsFromSpec.ts';
+import type { TimeEstimate } from './estimateTime.ts';
+import type { EngraveSettings } from './materialPresets.ts';
+import { polylineLengthMm } from './polylineLength.ts';
+import { specSummaryLines } from './specSummaryLines.ts';
+import { planLaser, toLaserGcode } from './toLaserGcode.ts';
+import { planNgc, toNgc } from './toNgc.ts';
+
+/**
+ * The engraving programs of one spec and their figures for report.json
+ * (`engraving:`): the job built from the plate drawing, the spec's settings
+ * over the material preset, the checks that name spec fields, then the
+ * writers. Plain data in, text out; the CLI writes the files.
+ */
+
+/** Rapid travel figures, mm, and how far the ordered travel is above the bound. */
+export interface RapidTravelReport {
+  readonly inputOrder: number;
+  readonly ordered: number;
+  readonly lowerBound: number;
+  /** ordered / lowerBound (1 when both are 0): at most this far from the shortest possible. */
+  readonly ratioToBound: number;
+}
+
+export interface NgcReport {
+  readonly file: string;
+  /** Deepest V-bit groove, mm below the stock top. */
+  readonly vbitDepthMmMax: number;
+  /** Deepest groove the sheet allows, mm. */
+  readonly depthLimitMm: number;
+  /** Most depth passes of any cut (step-down). */
+  readonly passes: number;
+  readonly cuts: number;
+  readonly timeEstimateS: number;
+  readonly timeBreakdownS: { readonly cutting: number; readonly plunge: number; readonly rapid: number; readonly retract: number };
+  readonly rapidTravelMm: RapidTravelReport;
+  /** XY length of one pass of every cut = the length cut at final depth, mm. */
+  readonly cuttingLengthMm: number;
+  /** XY feed length over all passes, mm. */
+  readonly feedLengthMm: number;
+  readonly tool: {
+    readonly vbitAngleDeg: number;
+    readonly vbitTipMm: number;
+    readonly vbitMaxWidthMm: number;
+    readonly flatEndMillMm?: number;
+    readonly flatDepthMm?: number;
+  };
+  readonly spindleRpm: number;
+  readonly feedMmPerMin: number;
+  readonly plungeMmPerMin: number;
+  readonly stepDownMm: number;
+  readonly safeZMm: number;
+  readonly clearanceZMm: number;
+}
+
+export interface LaserReport {
+  readonly file: string;
+  /** Every stroke is traced once. */
+  readonly passes: 1;
+  readonly strokes: number;
+  readonly timeEstimateS: number;
+  readonly timeBreakdownS: { readonly burning: number; readonly travel: number };
+  readonly rapidTravelMm: RapidTravelReport;
+  /** XY length burned, mm. */
+  readonly cuttingLengthMm: number;
+  readonly powerPct: number;
+  readonly powerS: number;
+  readonly maxS: number;
+  readonly speedMmPerMin: number;
+}
+
+export interface EngravingReport {
+  readonly programs: readonly EngraveProgram[];
+  /** The preset the settings start from (plate.material), when a program is written. */
+  readonly preset?: string;
+  /** Sum of the engraved geometry's lengths (every line and text stroke once), mm. */
+  readonly geometryLengthMm?: number;
+  readonly ngc?: NgcReport;
+  readonly laser?: LaserReport;
+}
+
+export interface SpecEngraving {
+  readonly files: readonly { readonly name: string; readonly text: string }[];
+  readonly report: EngravingReport;
+  /** The job the programs were written from (for tests and previews). */
+  readonly job?: EngraveJob;
+}
+
+function travel(t: { readonly inputOrder: number; readonly ordered: number; readonly lowerBound: number }): RapidTravelReport {
+  const ratio = t.lowerBound > 0 ? t.ordered / t.lowerBound : 1;
+  return { inputOrder: t.inputOrder, ordered: t.ordered, lowerBound: t.lowerBound, ratioToBound: ratio };
+}
+
+/** Header lines: how to remake the file. */
+export function engraveTitleLines(spec: DialSpec): readonly string[] {
+  return ['to remake: umbrafab build on a spec with these fields [normalised, defaults filled in]', ...specSummaryLines(spec)];
+}
+
+function ngcProgram(job: EngraveJob, s: EngraveSettings, spec: DialSpec): { text: string; report: NgcReport } {
+  checkMillJob(job, s, spec);
+  const plan = planNgc(job, s);
+  const text = toNgc(job, s);
+  const cuts = plan.toolpaths.cuts;
+  const e: TimeEstimate = plan.estimate;
+  const usesFlat = cuts.some((c) => c.tool === 'flat');
+  return {
+    text,
+    report: {
+      file: ENGRAVE_FILE_NAMES.ngc,
+      vbitDepthMmMax: cuts.filter((c) => c.tool === 'vbit').reduce((m, c) => Math.max(m, c.depthPassesMm[c.depthPassesMm.length - 1]), 0),
+      depthLimitMm: plan.toolpaths.depthLimitMm,
+      passes: cuts.reduce((m, c) => Math.max(m, c.depthPassesMm.length), 0),
+      cuts: cuts.length,
+      timeEstimateS: e.totalS,
+      timeBreakdownS: { cutting: e.cuttingS, plunge: e.plungeS, rapid: e.rapidS, retract: e.retractS },
+      rapidTravelMm: travel(plan.toolpaths.rapidTravelMm),
+      cuttingLengthMm: cuts.reduce((sum, c) => sum + polylineLengthMm(c.points, c.closed), 0),
+      feedLengthMm: e.cuttingMm,
+      tool: {
+        vbitAngleDeg: s.vbitAngleDeg,
+        vbitTipMm: s.vbitTipMm,
+        vbitMaxWidthMm: s.vbitMaxWidthMm,
+        ...(usesFlat ? { flatEndMillMm: s.flatEndMillMm, flatDepthMm: s.flatDepthMm } : {}),
+      },
+      spindleRpm: s.spindleRpm,
+      feedMmPerMin: s.feedMmPerMin,
+      plungeMmPerMin: s.plungeMmPerMin,
+      stepDownMm: s.stepDownMm,
+      safeZMm: s.safeZMm,
+      clearanceZMm: s.clearanceZMm,
+    },
+  };
+}
+
+function laserProgram(job: EngraveJob, s: EngraveSettings): { text: string; report: LaserReport } {
+  const plan = planLaser(job, s);
+  const text = toLaserGcode(job, s);
+  const e = plan.estimate;
+  return {
+    text,
+    report: {
+      file: ENGRAVE_FILE_NAMES.laser,
+      passes: 1,
+      strokes: plan.strokes.length,
+      timeEstimateS: e.totalS,
+      timeBreakdownS: { burning: e.cuttingS, travel: e.rapidS + e.retractS },
+      rapidTravelMm: travel(plan.rapidTravelMm),
+      cuttingLengthMm: e.cuttingMm,
+      powerPct: s.laserPowerPct,
+      powerS: plan.powerS,
+      maxS: s.laserMaxS,
+      speedMmPerMin: s.laserSpeedMmPerMin,
+    },
+  };
+}
+
+/**
+ * Build the engraving programs a spec asks for (engrave.programs, see
+ * engraveProgramsFor) from its plate drawing.
+ *
+ * @param spec the normalised spec (parseSpec)
+ * @param drawing plateDrawing(layoutDial(spec)), plate coordinates as plate.dxf
+ * @returns the files (engrave.ngc, engrave-laser.gcode) and the report section
+ * @throws SpecError (field, value, allowed) for a material without a preset, a
+ *   V-bit too narrow for the widest line, a groove deeper than the sheet
+ *   allows; feeds of zero never get here (the schema rejects them)
+ * @example engraveFromSpec(spec, plateDrawing(layoutDial(spec))).files.map((f) => f.name)
+ */
+export function engraveFromSpec(spec: DialSpec, drawing: PlateDrawing): SpecEngraving {
+  const programs = engraveProgramsFor(spec.engrave.programs, spec.process.method);
+  if (programs.length === 0) return { files: [], report: { programs } };
+  const settings = engraveSettingsFromSpec(spec);
+  const job = engraveJobFromDrawing(drawing, { thicknessMm: spec.plate.thickness, material: spec.plate.material }, engraveTitleLines(spec));
+  const files: { name: string; text: string }[] = [];
+  let ngc: NgcReport | undefined;
+  let laser: LaserReport | undefined;
+  for (const program of programs) {
+    if (program === 'ngc') {
+      const r = ngcProgram(job, settings, spec);
+      files.push({ name: ENGRAVE_FILE_NAMES.ngc, text: r.text });
+      ngc = r.report;
+    } else {
+      const r = laserProgram(job, settings);
+      files.push({ name: ENGRAVE_FILE_NAMES.laser, text: r.text });
+      laser = r.report;
+    }
+  }
+  const geometryLengthMm = job.paths.reduce((sum, p) => sum + polylineLengthMm(p.points, p.closed), 0);
+  return { files, report: { programs, preset: settings.material, geometryLengthMm, ngc, laser }, job };
+}

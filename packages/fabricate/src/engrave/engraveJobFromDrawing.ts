@@ -1,0 +1,57 @@
+import type { PlateDrawing } from '@umbrafab/geometry';
+import type { EngraveJob, EngraveOperation, EngravePath } from './engraveInput.ts';
+
+/** The stock facts a drawing does not hold. */
+export interface EngraveStockInput {
+  /** Sheet thickness, mm (spec plate.thickness). */
+  readonly thicknessMm: number;
+  /** Sheet material (spec plate.material). */
+  readonly material: string;
+}
+
+/**
+ * The engraving job of a plate drawing: everything the face carries, in plate
+ * coordinates (origin at the plate's lower-left corner, as plate.dxf):
+ * - every drawn line, each with its own width: the hour, half and quarter
+ *   marks (operation 'marks', label e.g. 'hour 09:00 west') and any curve the
+ *   drawing holds, such as date lines or mean-time curves (operation
+ *   'curves', label 'curve …');
+ * - every stroke of the numerals and of the title text (operation 'text',
+ *   label 'numeral 10' / 'title Windlecombe Quay'), at the text's stroke width.
+ *
+ * Cut profiles (outline, holes, slots) and reference lines are not engraved.
+ * The drawing is not modified.
+ *
+ * @param drawing plateDrawing(layout)
+ * @param stock the sheet thickness and material
+ * @param title header lines for the programs (e.g. specSummaryLines(spec))
+ * @example engraveJobFromDrawing(drawing, { thicknessMm: 3, material: 'aluminium' }, ['demo']).paths.length
+ */
+export function engraveJobFromDrawing(drawing: PlateDrawing, stock: EngraveStockInput, title: readonly string[]): EngraveJob {
+  const lines = drawing.lines.map((line): EngravePath => {
+    const operation: EngraveOperation = line.kind === 'curve' ? 'curves' : 'marks';
+    return {
+      points: line.path.points,
+      closed: line.path.closed,
+      widthMm: line.widthMm,
+      operation,
+      label: `${line.kind} ${line.label}`,
+    };
+  });
+  const text = drawing.text.flatMap((block) =>
+    block.strokes.map(
+      (stroke, i): EngravePath => ({
+        points: stroke.points,
+        closed: stroke.closed,
+        widthMm: block.strokeWidthMm,
+        operation: 'text',
+        label: `${block.role} ${block.text}${block.strokes.length > 1 ? ` stroke ${i + 1}/${block.strokes.length}` : ''}`,
+      }),
+    ),
+  );
+  return {
+    paths: [...lines, ...text],
+    stock: { widthMm: drawing.widthMm, lengthMm: drawing.lengthMm, thicknessMm: stock.thicknessMm, material: stock.material },
+    title,
+  };
+}
