@@ -5,3 +5,6 @@ export * from './dxf/toDxf.ts';
 export * from './svg/toSvg.ts';
 export * from './report/toReportJson.ts';
 export * from './engrave/index.ts';
+export * from './stl/index.ts';
+export * from './dxf/toGnomonDxf.ts';
+export * from './dxf/offsetRingMiter.ts';

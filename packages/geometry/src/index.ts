@@ -13,3 +13,4 @@ export * from './plate/plateDrawing.ts';
 export * from './sun/index.ts';
 export * from './calendar/index.ts';
 export * from './parts/index.ts';
+export * from './shadow/index.ts';

@@ -1,0 +1,382 @@
+import { SpecError } from '../errors.ts';
+import { DEG } from '../guards.ts';
+import { penumbraWidthMm } from '../calendar/penumbraWidth.ts';
+import type { DialLayout } from '../polar/layoutDial.ts';
+import { eastToFaceX } from '../polar/markOffset.ts';
+import type { Vec3 } from '../parts/mesh.ts';
+import { SUN_RADIUS_KM } from '../sun/sunAngularRadiusRad.ts';
+import type { MarkKind, StyleEdge } from '../types.ts';
+import { shadowOnLine } from './castShadow.ts';
+import { dialFrame, toDialFrame, type DialFrame } from './dialFrame.ts';
+import { drawnMarksFromLayout, type DrawnMark } from './drawnMarks.ts';
+import { gnomonForLayout } from './gnomonForLayout.ts';
+import { styleEdges, type Edge3 } from './styleEdges.ts';
+import { instantAtHourAngle, sunOnDay, sunTrack, type RefractionModel, type SunSample } from './sunTrack.ts';
+import { KM_PER_AU } from 'astronomy-engine';
+
+/**
+ * Mean rate of the true Sun's hour angle, radians per second: 360° per
+ * apparent solar day of 86 400 s (the apparent day differs from it by at most
+ * about 30 s, i.e. 0.035 %: the equation of time's daily change, DESIGN §3).
+ */
+const HOUR_ANGLE_RAD_PER_S = (2 * Math.PI) / 86_400;
+
+/** Options of `checkDial`; every one defaults from the layout's spec (`check:` section). */
+export interface CheckOptions {
+  /** largest accepted |shadow x − mark x|, mm (default spec.check.tolerance, 0.05) */
+  readonly toleranceMm?: number;
+  /** shadow sweep step, minutes (default spec.check.sampling.stepMinutes, 1) */
+  readonly stepMinutes?: number;
+  /** simulate every n-th day (default spec.check.sampling.everyDays, 1) */
+  readonly everyDays?: number;
+  readonly refraction?: RefractionModel;
+  /** installed tilt − |latitude|, degrees (default spec.check.tiltError, 0) */
+  readonly tiltErrorDeg?: number;
+  /** installed style azimuth − true meridian, degrees clockwise from above (default spec.check.azimuthError, 0) */
+  readonly azimuthErrorDeg?: number;
+  /** calendar year simulated (default spec.calendar.year) */
+  readonly year?: number;
+  /** the marks as drawn (default: the layout's own marks), e.g. read back from plate.dxf by `marksFromPlate` */
+  readonly drawn?: readonly DrawnMark[];
+  /** where the drawn marks came from, for the report (default 'layout') */
+  readonly source?: 'layout' | 'plate';
+}
+
+export interface Range {
+  readonly min: number;
+  readonly max: number;
+}
+
+/** Worst (largest magnitude, signed) and mean magnitude of a quantity over the lit days. */
+export interface WorstMean {
+  readonly worst: number;
+  readonly meanAbs: number;
+}
+
+/** The year's result for one mark. */
+export interface MarkCheck {
+  readonly label: string;
+  readonly kind: MarkKind;
+  readonly style: StyleEdge;
+  readonly hourAngleDeg: number;
+  /** x of the drawn line at its middle, face coordinates, mm */
+  readonly xMm: number;
+  /** days on which the Sun is above the horizon and in front of the face at this mark's hour angle */
+  readonly litDays: number;
+  /** lit days on which the style's shadow reaches the mark's y-range */
+  readonly reachedDays: number;
+  /** shadow x − mark x, mm: worst (signed) and mean |·| over the reached days */
+  readonly errorMm: WorstMean;
+  /** seconds after the mark's hour angle at which the shadow reaches the line (+: the dial reads late there), via dx/dH */
+  readonly errorS: WorstMean;
+  /** date of the worst error, 'YYYY-MM-DD' (null if never reached) */
+  readonly worstDate: string | null;
+  /** days whose |error| exceeds the tolerance */
+  readonly daysOverTolerance: number;
+  /** penumbra width across the line, mm, over the lit days (2hα / (cos δ cos² H), DESIGN §3) */
+  readonly penumbraMm: Range;
+  /**
+   * standard clock time when the real Sun is at this mark's hour angle, minus
+   * the mark's label, minutes: for a standard-time dial this is the
+   * equation-of-time offset (−E); for a solar dial it adds 4·(λs − λ)
+   */
+  readonly clockOffsetMin: Range;
+  /** how much a 1° steeper tilt shifts the time the shadow reaches this mark, minutes (+: later) */
+  readonly tiltShiftMinPerDeg: WorstMean;
+  /** how much a 1° clockwise azimuth error shifts it, minutes (+: later) */
+  readonly azimuthShiftMinPerDeg: WorstMean;
+  /** shadow x − mark x per simulated day, mm; null when unlit or not reached */
+  readonly errorsMm: readonly (number | null)[];
+}
+
+/** One simulated day. */
+export interface CheckDay {
+  readonly date: string;
+  /** topocentric declination at local apparent noon, degrees */
+  readonly declinationDeg: number;
+  /** equation of time at local apparent noon, minutes */
+  readonly equationOfTimeMin: number;
+  /** minutes of the sweep (between the first and last mark's hour angle) with the face in sunlight */
+  readonly litMinutes: number;
+}
+
+/** A mark whose shadow falls beyond the tolerance on some day (its worst day). */
+export interface CheckFailure {
+  readonly label: string;
+  readonly style: StyleEdge;
+  readonly date: string;
+  readonly errorMm: number;
+  readonly errorS: number;
+  readonly daysOverTolerance: number;
+}
+
+/** The whole check, plain data (check.json is this, rounded). */
+export interface CheckResult {
+  readonly year: number;
+  readonly site: { readonly latitudeDeg: number; readonly longitudeDeg: number; readonly timezone: string };
+  readonly hemisphere: 'north' | 'south';
+  readonly reads: 'solar' | 'standard';
+  readonly source: 'layout' | 'plate';
+  readonly toleranceMm: number;
+  readonly stepMinutes: number;
+  readonly everyDays: number;
+  readonly refraction: RefractionModel;
+  readonly tiltErrorDeg: number;
+  readonly azimuthErrorDeg: number;
+  readonly gnomon: { readonly heightMm: number; readonly thicknessMm: number; readonly styleEdges: number };
+  /** Sun positions computed: the sweep samples plus the per-mark instants */
+  readonly sunPositions: number;
+  /** astronomy-engine calls behind the track */
+  readonly ephemerisCalls: number;
+  readonly method: readonly string[];
+  readonly days: readonly CheckDay[];
+  readonly marks: readonly MarkCheck[];
+  /** the single worst (mark, day), or null if no mark is ever reached */
+  readonly worst: { readonly label: string; readonly style: StyleEdge; readonly date: string; readonly errorMm: number; readonly errorS: number } | null;
+  /** marks beyond the tolerance, worst first */
+  readonly failures: readonly CheckFailure[];
+  readonly pass: boolean;
+}
+
+/**
+ * Prove a dial: run the real Sun over the real gnomon for a year and measure,
+ * mark by mark and day by day, how far the shadow falls from the line.
+ *
+ * For every simulated local day (calendar.year) and every mark:
+ * 1. the instant the real Sun's topocentric hour angle equals the mark's
+ *    (`instantAtHourAngle` on the `sunTrack`, seeded from the day's sweep);
+ * 2. the Sun's direction there (horizon coordinates, refraction as asked),
+ *    turned into the installed dial frame (`dialFrame` with the tilt and
+ *    azimuth errors);
+ * 3. lit test: the Sun's centre above the horizon AND in front of the face;
+ * 4. the casting style edges, found in the mesh of `gnomonForLayout` (the
+ *    solid written to gnomon.stl), projected along the rays onto the face
+ *    (`shadowOnLine`): error = shadow x − drawn x over the mark's y-range;
+ * 5. that error in seconds of time through dx/dH = h / cos² H;
+ * 6. the same with the plate 1° steeper and turned 1° clockwise: the
+ *    installation tolerance in minutes per degree.
+ * The sweep samples every `stepMinutes` between the first and the last
+ * mark's hour angle (the face's lit minutes, and the seeds of step 1).
+ *
+ * @example checkDial(layoutDial(parseSpec(raw))).pass
+ */
+export function checkDial(layout: DialLayout, options: CheckOptions = {}): CheckResult {
+  const spec = layout.spec;
+  const c = spec.check;
+  const toleranceMm = options.toleranceMm ?? c.tolerance;
+  const stepMinutes = options.stepMinutes ?? c.sampling.stepMinutes;
+  const everyDays = options.everyDays ?? c.sampling.everyDays;
+  const refraction = options.refraction ?? c.refraction;
+  const tiltErrorDeg = options.tiltErrorDeg ?? c.tiltError;
+  const azimuthErrorDeg = options.azimuthErrorDeg ?? c.azimuthError;
+  const year = options.year ?? spec.calendar.year;
+  if (!(toleranceMm > 0)) throw new SpecError('check.tolerance', toleranceMm, 'allowed: a number greater than 0 mm');
+  if (!(stepMinutes >= 0.25 && stepMinutes <= 60)) throw new SpecError('check.sampling.stepMinutes', stepMinutes, 'allowed: a number from 0.25 to 60 min');
+  const drawn = options.drawn ?? drawnMarksFromLayout(layout);
+  if (drawn.length === 0) throw new SpecError('marks', 0, 'allowed: at least one mark to check');
+
+  const track = sunTrack({ latitudeDeg: spec.site.latitude, longitudeDeg: spec.site.longitude, timezone: spec.site.timezone, year, everyDays, refraction });
+  const part = gnomonForLayout(layout);
+  const edges = styleEdges(part.mesh);
+  const h = Math.max(...[...edges.minusX, ...edges.plusX].flatMap((e) => [e[0][2], e[1][2]]));
+  const lat = spec.site.latitude;
+  const frame = dialFrame({ latitudeDeg: lat, tiltErrorDeg, azimuthErrorDeg });
+  const frameTilt = dialFrame({ latitudeDeg: lat, tiltErrorDeg: tiltErrorDeg + 1, azimuthErrorDeg });
+  const frameAz = dialFrame({ latitudeDeg: lat, tiltErrorDeg, azimuthErrorDeg: azimuthErrorDeg + 1 });
+  const hemiSign = layout.hemisphere === 'north' ? 1 : -1;
+  const edgesOf = (style: StyleEdge): readonly Edge3[] => (eastToFaceX(style === 'east' ? 1 : -1, layout.hemisphere) > 0 ? edges.plusX : edges.minusX);
+
+  const hours = drawn.map((d) => d.mark.hourAngleDeg * DEG);
+  const hMin = Math.min(...hours);
+  const hMax = Math.max(...hours);
+  const stepMs = stepMinutes * 60_000;
+  const acc = drawn.map(() => newAccumulator());
+  const days: CheckDay[] = [];
+  let sunPositions = 0;
+
+  for (const day of track.days) {
+    // The sweep: every stepMinutes from the first mark's hour angle to the last.
+    const t0 = instantAtHourAngle(track, day, hMin);
+    const t1 = instantAtHourAngle(track, day, hMax);
+    const n = Math.floor((t1 - t0) / stepMs + 1e-9) + 1;
+    const sweepH = new Float64Array(n);
+    let lit = 0;
+    for (let k = 0; k < n; k++) {
+      const s = sunOnDay(track, day, t0 + k * stepMs);
+      sweepH[k] = s.hourAngleRad;
+      if (isFaceLit(s, toDialFrame(frame, s.enu))) lit++;
+    }
+    sunPositions += n;
+    const noon = sunOnDay(track, day, instantAtHourAngle(track, day, 0));
+    days.push({ date: day.date, declinationDeg: noon.declinationRad / DEG, equationOfTimeMin: noon.equationOfTimeMin, litMinutes: lit * stepMinutes });
+
+    drawn.forEach((d, i) => {
+      const a = acc[i];
+      const H = hours[i];
+      const t = instantAtHourAngle(track, day, H, seedFromSweep(sweepH, H, t0, stepMs));
+      const s = sunOnDay(track, day, t);
+      sunPositions++;
+      const sun = toDialFrame(frame, s.enu);
+      if (!isFaceLit(s, sun)) {
+        a.errors.push(null);
+        return;
+      }
+      a.lit++;
+      const penumbra = penumbraWidthMm({ heightMm: h, hourAngleRad: H, declinationRad: s.declinationRad, sunRadiusRad: Math.asin(SUN_RADIUS_KM / (s.distanceAu * KM_PER_AU)) });
+      a.penumbra = widen(a.penumbra, penumbra);
+      a.clock = widen(a.clock, (t - day.startMs) / 60_000 - labelMinutes(d.mark.label));
+      const cast = shadowOnLine(edgesOf(d.mark.style), sun, d.a, d.b);
+      if (!cast) {
+        a.errors.push(null);
+        return;
+      }
+      // Face-x speed of the shadow: dx/dH = h / cos² H (tan law), signed by hemisphere.
+      const speedMmPerS = (hemiSign * h * HOUR_ANGLE_RAD_PER_S) / Math.cos(H) ** 2;
+      const errS = -cast.errorMm / speedMmPerS;
+      a.reached++;
+      a.errors.push(cast.errorMm);
+      a.sumAbsMm += Math.abs(cast.errorMm);
+      a.sumAbsS += Math.abs(errS);
+      if (Math.abs(cast.errorMm) > toleranceMm) a.over++;
+      if (a.worstDate === null || Math.abs(cast.errorMm) > Math.abs(a.worstMm)) {
+        a.worstMm = cast.errorMm;
+        a.worstS = errS;
+        a.worstDate = day.date;
+      }
+      for (const [f, key] of [[frameTilt, 'tilt'], [frameAz, 'az']] as const) {
+        const moved = shadowOnLine(edgesOf(d.mark.style), toDialFrame(f, s.enu), d.a, d.b);
+        if (!moved) continue;
+        const shiftMin = -(moved.shadowXMm - cast.shadowXMm) / speedMmPerS / 60;
+        const w = key === 'tilt' ? a.tilt : a.az;
+        w.n++;
+        w.sumAbs += Math.abs(shiftMin);
+        if (Math.abs(shiftMin) > Math.abs(w.worst)) w.worst = shiftMin;
+      }
+    });
+  }
+
+  const marks: MarkCheck[] = drawn.map((d, i) => {
+    const a = acc[i];
+    return {
+      label: d.mark.label,
+      kind: d.mark.kind,
+      style: d.mark.style,
+      hourAngleDeg: d.mark.hourAngleDeg,
+      xMm: (d.a[0] + d.b[0]) / 2,
+      litDays: a.lit,
+      reachedDays: a.reached,
+      errorMm: { worst: a.worstMm, meanAbs: a.reached ? a.sumAbsMm / a.reached : 0 },
+      errorS: { worst: a.worstS, meanAbs: a.reached ? a.sumAbsS / a.reached : 0 },
+      worstDate: a.worstDate,
+      daysOverTolerance: a.over,
+      penumbraMm: a.penumbra ?? { min: 0, max: 0 },
+      clockOffsetMin: a.clock ?? { min: 0, max: 0 },
+      tiltShiftMinPerDeg: { worst: a.tilt.worst, meanAbs: a.tilt.n ? a.tilt.sumAbs / a.tilt.n : 0 },
+      azimuthShiftMinPerDeg: { worst: a.az.worst, meanAbs: a.az.n ? a.az.sumAbs / a.az.n : 0 },
+      errorsMm: a.errors,
+    };
+  });
+
+  let worst: CheckResult['worst'] = null;
+  for (const m of marks) {
+    if (m.worstDate !== null && (worst === null || Math.abs(m.errorMm.worst) > Math.abs(worst.errorMm))) {
+      worst = { label: m.label, style: m.style, date: m.worstDate, errorMm: m.errorMm.worst, errorS: m.errorS.worst };
+    }
+  }
+  const failures: CheckFailure[] = marks
+    .filter((m) => m.daysOverTolerance > 0 && m.worstDate !== null)
+    .map((m) => ({ label: m.label, style: m.style, date: m.worstDate as string, errorMm: m.errorMm.worst, errorS: m.errorS.worst, daysOverTolerance: m.daysOverTolerance }))
+    .sort((p, q) => Math.abs(q.errorMm) - Math.abs(p.errorMm) || p.label.localeCompare(q.label));
+
+  return {
+    year,
+    site: { latitudeDeg: lat, longitudeDeg: spec.site.longitude, timezone: spec.site.timezone },
+    hemisphere: layout.hemisphere,
+    reads: layout.time.reads,
+    source: options.source ?? 'layout',
+    toleranceMm,
+    stepMinutes,
+    everyDays,
+    refraction,
+    tiltErrorDeg,
+    azimuthErrorDeg,
+    gnomon: { heightMm: part.styleHeightMm, thicknessMm: part.thicknessMm, styleEdges: edges.minusX.length + edges.plusX.length },
+    sunPositions,
+    ephemerisCalls: track.ephemerisCalls,
+    method: CHECK_METHOD(refraction),
+    days,
+    marks,
+    worst,
+    failures,
+    pass: failures.length === 0,
+  };
+}
+
+/**
+ * The lit test: the Sun's centre above the horizon (its altitude as
+ * simulated, i.e. with refraction if asked) AND in front of the face (the
+ * dial-frame direction has z > 0).
+ */
+export function isFaceLit(sample: SunSample, sunInDialFrame: Vec3): boolean {
+  return sample.enu[2] > 0 && sunInDialFrame[2] > 0;
+}
+
+/** The sun's direction in a dial frame at one sample (re-exported helper for front ends). */
+export function sunInDialFrame(frame: DialFrame, sample: SunSample): Vec3 {
+  return toDialFrame(frame, sample.enu);
+}
+
+function CHECK_METHOD(refraction: RefractionModel): string[] {
+  return [
+    'Sun: astronomy-engine 2.1.19 geocentric apparent RA/Dec of date + Greenwich apparent sidereal time at local standard 00:00, 12:00, 24:00 of each day, interpolated quadratically; topocentric by the observer position on astronomy-engine\'s ellipsoid; horizon frame as astronomy-engine Horizon',
+    refraction === 'none' ? 'refraction: none (geometric Sun)' : "refraction: astronomy-engine Refraction('normal')",
+    'instant: topocentric hour angle = mark hour angle (Newton on the track)',
+    'shadow: style edges found in the gnomon mesh (gnomonForLayout = gnomon.stl), projected along the rays onto the face z = 0',
+    'seconds: error / (dx/dH), dx/dH = h / cos² H, hour angle rate 2π per 86 400 s',
+  ];
+}
+
+interface Accumulator {
+  lit: number;
+  reached: number;
+  over: number;
+  worstMm: number;
+  worstS: number;
+  worstDate: string | null;
+  sumAbsMm: number;
+  sumAbsS: number;
+  penumbra: Range | null;
+  clock: Range | null;
+  tilt: { n: number; worst: number; sumAbs: number };
+  az: { n: number; worst: number; sumAbs: number };
+  errors: (number | null)[];
+}
+
+function newAccumulator(): Accumulator {
+  return { lit: 0, reached: 0, over: 0, worstMm: 0, worstS: 0, worstDate: null, sumAbsMm: 0, sumAbsS: 0, penumbra: null, clock: null, tilt: { n: 0, worst: 0, sumAbs: 0 }, az: { n: 0, worst: 0, sumAbs: 0 }, errors: [] };
+}
+
+function widen(r: Range | null, v: number): Range {
+  return r === null ? { min: v, max: v } : { min: Math.min(r.min, v), max: Math.max(r.max, v) };
+}
+
+/** "08:15" → 495 (minutes after midnight). */
+function labelMinutes(label: string): number {
+  const m = /^(\d{2}):(\d{2})/.exec(label);
+  if (!m) throw new SpecError('marks.label', label, 'allowed: a mark label starting "HH:MM"');
+  return Number(m[1]) * 60 + Number(m[2]);
+}
+
+/** Linear interpolation of the instant of hour angle H within the sweep (the hour angle grows monotonically). */
+function seedFromSweep(sweepH: Float64Array, H: number, t0: number, stepMs: number): number {
+  let lo = 0;
+  let hi = sweepH.length - 1;
+  if (hi < 1) return t0;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (sweepH[mid] <= H) lo = mid;
+    else hi = mid;
+  }
+  const f = (H - sweepH[lo]) / (sweepH[hi] - sweepH[lo] || 1);
+  return t0 + (lo + f) * stepMs;
+}
