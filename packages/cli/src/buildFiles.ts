@@ -1,4 +1,4 @@
-import { layoutDial, plateDrawing, type DialLayout, type DialSpec } from '@umbrafab/geometry';
+import { layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec } from '@umbrafab/geometry';
 import { toReportJson } from '@umbrafab/fabricate';
 import { PRODUCERS } from './outputs/index.ts';
 import { utf8 } from './outputs/outputTypes.ts';
@@ -20,7 +20,8 @@ export const GENERATOR = 'umbrafab 0.1.0';
  */
 export async function buildFiles(spec: DialSpec): Promise<BuildResult> {
   const layout = layoutDial(spec);
-  const drawing = plateDrawing(layout);
+  const extras = timeFaceExtras(layout); // date lines, mean-time curves, engraved equation of time (issue 5)
+  const drawing = plateDrawing(layout, extras.lines, extras.text);
   const ctx = { spec, layout, drawing };
   const files: OutputFile[] = [];
   const sections: Record<string, unknown> = {};

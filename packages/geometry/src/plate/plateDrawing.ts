@@ -40,7 +40,7 @@ export interface PlateDrawing {
  * (x + substyleX, y + faceOriginY).
  * @example plateDrawing(layoutDial(spec)).lines[0].path.points
  */
-export function plateDrawing(layout: DialLayout, extraLines: readonly DrawnLine[] = []): PlateDrawing {
+export function plateDrawing(layout: DialLayout, extraLines: readonly DrawnLine[] = [], extraText: readonly DrawnText[] = []): PlateDrawing {
   const { plate, gnomon } = layout;
   const dx = plate.substyleX;
   const dy = plate.faceOriginY;
@@ -82,7 +82,7 @@ export function plateDrawing(layout: DialLayout, extraLines: readonly DrawnLine[
     holes: plate.holes,
     slots: plate.slots,
     lines: [...lines, ...extraLines],
-    text,
+    text: [...text, ...extraText],
     reference,
   };
 }

@@ -7,6 +7,8 @@ import { strokeText, strokeTextWidthMm } from '../text/strokeText.ts';
 import type { Circle, Hemisphere, Mark, MarkKind, RoundedRect, TextBlock } from '../types.ts';
 import { castingEdge, eastToFaceX, markOffsetEastMm } from './markOffset.ts';
 import { numeralText } from './numeralText.ts';
+import { penumbraMarkWidths } from './penumbraWidths.ts';
+import { summerNumerals } from './summerNumerals.ts';
 
 /** Gap between the end of the marks (or gnomon) and the numerals, and between bands, mm. */
 const BAND_GAP_MM = 3;
@@ -122,6 +124,7 @@ export function layoutDial(spec: DialSpec): DialLayout {
     }
   }
   marks.sort((a, b) => a.xMm - b.xMm || a.y1Mm - b.y1Mm);
+  if (spec.marks.followPenumbra) marks.splice(0, marks.length, ...penumbraMarkWidths(marks));
 
   const spanTop = Math.max(...marks.map((m) => m.y1Mm));
   const gnomonY0 = spanBottom - spec.gnomon.overhang;
@@ -132,7 +135,8 @@ export function layoutDial(spec: DialSpec): DialLayout {
   const numeralHeight = fitNumeralHeight(spec, marks, notes);
   const numeralTop = Math.min(spanBottom, gnomonY0) - BAND_GAP_MM;
   const numeralBase = numeralTop - numeralHeight;
-  const numerals = hourNumerals(spec, marks, numeralHeight, numeralBase);
+  const summer = summerNumerals(spec, marks, numeralHeight, numeralBase);
+  const numerals = [...hourNumerals(spec, marks, numeralHeight, numeralBase), ...summer.blocks];
 
   // Plate extents across the style.
   const holes = spec.holes;
@@ -154,7 +158,7 @@ export function layoutDial(spec: DialSpec): DialLayout {
   // Plate extents along the style: margin, numerals, marks and gnomon, title, margin.
   const titleBandHeight = (titleLines.length - 1) * LINE_PITCH * textH + textH;
   const engravedTop = Math.max(spanTop, gnomonY1);
-  const bottomNeed = spec.plate.margin + (numeralTop - numeralBase);
+  const bottomNeed = spec.plate.margin + (numeralTop - summer.bottomY);
   const titleBottom = engravedTop + BAND_GAP_MM;
   const contentLength = bottomNeed + (titleBottom - numeralTop) + titleBandHeight + spec.plate.margin;
   const lengthMm = spec.plate.length === 'auto' ? Math.ceil(contentLength) : spec.plate.length;
@@ -166,7 +170,7 @@ export function layoutDial(spec: DialSpec): DialLayout {
       `the layout needs ${contentLength.toFixed(1)} mm along the style but the plate is ${lengthMm} mm`,
     );
   }
-  const faceOriginY = (lengthMm - contentLength) / 2 + spec.plate.margin + (0 - numeralBase);
+  const faceOriginY = (lengthMm - contentLength) / 2 + spec.plate.margin + (0 - summer.bottomY);
   const substyleX = widthMm / 2;
 
   const title = titleBlocks(titleLines, spec, {
