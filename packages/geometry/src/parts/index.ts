@@ -18,3 +18,9 @@ export {
   type WedgeCountersink,
   type WedgeArrow,
 } from './wedgeSolid.ts';
+export { partsPlan, type PartsPlan } from './partsPlan.ts';
+export { dialGnomon, dialWedge, gnomonOnPlate, faceToWedge, mapMesh } from './dialParts.ts';
+export { bodySolid, type BodyPart } from './bodySolid.ts';
+export { manifoldEngine } from './manifoldEngine.ts';
+export { meshFromManifold, manifoldFromMesh } from './manifoldMesh.ts';
+export { widenPolyline, circlePolygon, ROUND_SEGMENTS } from './widenPolyline.ts';

@@ -4,6 +4,7 @@ import { didYouMean } from './didYouMean.ts';
 import { METHOD_DEFAULTS, specSchema, type DialSpec } from './schema.ts';
 import { isValidTimeZone } from '../sun/zoneOffsets.ts';
 import { parseClock } from './parseClock.ts';
+import { normaliseGnomonStock } from './sections/partsSection.ts';
 
 type Issue = z.core.$ZodIssue;
 
@@ -34,6 +35,8 @@ export function parseSpec(raw: unknown): DialSpec {
   const fallback = METHOD_DEFAULTS[s.process.method];
   return {
     ...s,
+    // Gnomon cut from the plate's sheet: t = plate.thickness (rule in partsSection.ts).
+    ...normaliseGnomonStock(s, raw),
     marks: methodMarkWidths(s.marks, s.process.method, raw as Record<string, unknown>),
     process: {
       method: s.process.method,

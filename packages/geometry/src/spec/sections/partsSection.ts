@@ -1,7 +1,113 @@
 import { z } from 'zod';
+import { SpecError, formatValue } from '../../errors.ts';
 
 /**
- * The `parts:` section of the dial spec (owned by the parts work; see schema.ts).
- * Every field has a default and a describe() text with its unit.
+ * The `parts:` section of the dial spec: which 3D parts and gnomon outline
+ * `umbrafab build` writes, and how they are made. Every field has a default
+ * and a describe() text with its unit. Cross-field rules (tab depth against
+ * the plate, clearance against the tab, the wedge's printability) are
+ * checked by `partsPlan`, which knows the layout.
  */
-export const partsSection = z.strictObject({}).prefault({});
+
+/** File names a spec may list in `parts.write`. */
+export const PART_FILES = ['gnomon.stl', 'gnomon.dxf', 'wedge.stl', 'body.stl'] as const;
+export type PartFile = (typeof PART_FILES)[number];
+
+/** Where the gnomon comes from: cut from the plate's own sheet, or made separately (printed or other stock). */
+export const GNOMON_SOURCES = ['sheet', 'separate'] as const;
+export type GnomonSource = (typeof GNOMON_SOURCES)[number];
+
+/** A bounded number; the error says what is allowed (the style of schema.ts). */
+function length(min: number, max: number, opts: { exclusiveMin?: boolean; int?: boolean; unit?: string } = {}) {
+  const unit = opts.unit ?? ' mm';
+  const allowed = `allowed: ${opts.int ? 'a whole number' : 'a number'} ${opts.exclusiveMin ? 'greater than' : 'from'} ${min}${unit} ${opts.exclusiveMin ? 'up to' : 'to'} ${max}${unit}`;
+  let s = z.number({ error: allowed });
+  s = opts.exclusiveMin ? s.gt(min, { error: allowed }) : s.gte(min, { error: allowed });
+  s = s.lte(max, { error: allowed });
+  if (opts.int) s = s.int({ error: allowed });
+  return s;
+}
+
+const flag = z.boolean({ error: 'allowed: true or false' });
+
+const partFile = z.enum(PART_FILES, { error: `allowed: a list of ${PART_FILES.map((f) => JSON.stringify(f)).join(', ')} (or "auto")` });
+
+export const partsSection = z
+  .strictObject({
+    write: z
+      .union([z.literal('auto'), z.array(partFile)], { error: `allowed: "auto" or a list of ${PART_FILES.map((f) => JSON.stringify(f)).join(', ')}` })
+      .refine((v) => v === 'auto' || new Set(v).size === v.length, { error: 'allowed: each file name at most once' })
+      .default('auto')
+      .describe(
+        'part files to write: "auto" (print: gnomon.stl + wedge.stl; laser, waterjet, router: gnomon.dxf + wedge.stl; body.stl too with parts.body) or a list of gnomon.stl, gnomon.dxf, wedge.stl, body.stl',
+      ),
+    body: flag.default(false).describe('with write "auto", also write body.stl: the whole dial printed in one piece'),
+    gnomonFrom: z
+      .enum(GNOMON_SOURCES, { error: 'allowed: "sheet" or "separate"' })
+      .optional()
+      .describe('sheet: the gnomon is cut from the plate stock, so gnomon.thickness = plate.thickness; separate: any thickness (default: sheet for laser, waterjet, router; separate for print)'),
+    tabDepth: z
+      .union([z.literal('through'), length(0, 100, { exclusiveMin: true })], { error: 'allowed: "through" or a number greater than 0 mm, at most plate.thickness' })
+      .default('through')
+      .describe('how far the gnomon tabs reach into their slots, mm; "through" = plate.thickness (tab bottoms flush with the underside)'),
+    nodus: flag.default(false).describe('cut a 90° V-notch nodus into the style at the face origin (the middle of the hour marks)'),
+    nodusSize: length(0.5, 50).default(3).describe('opening of the nodus notch along the style, mm (its depth is half that)'),
+    grooveDepth: length(0.1, 10).default(0.6).describe('body.stl: depth of the line grooves and recessed numerals and text, mm'),
+    bodyWedge: flag.default(false).describe('body.stl: fuse the latitude wedge under the plate (one print: wedge, plate and gnomon)'),
+    wedge: z
+      .strictObject({
+        base: length(0.8, 100).default(5).describe('least thickness of the wedge base (toe slab and thin end), mm'),
+        lipHeight: length(0.8, 50).default(2).describe('height of the locating lip at the plate lower edge, above the seat, mm'),
+        lipWidth: length(0.8, 50).default(3).describe('thickness of that lip along the slope, mm'),
+        wall: length(0.8, 50).default(3).describe('least material around holes and arrow, and the stability margin, mm'),
+        holes: z
+          .union([z.literal(0), z.literal(2), z.literal(4), z.literal(6)], { error: 'allowed: 0, 2, 4 or 6' })
+          .default(2)
+          .describe('mounting holes through the toe (pairs either side of the meridian arrow)'),
+        holeDiameter: length(1, 30).default(4.5).describe('mounting hole bore, mm (4.5 clears an M4 screw)'),
+        countersink: length(0, 60).default(9).describe('countersink diameter at the top of each hole, 90° cone, mm; 0 for a plain hole'),
+        arrow: flag.default(true).describe('recess a meridian arrow in the toe, pointing to the elevated pole (true north in the north, true south in the south)'),
+      })
+      .prefault({}),
+  })
+  .prefault({});
+
+export type PartsSpec = z.output<typeof partsSection>;
+
+/** Cut processes, whose gnomon comes from the plate's sheet by default. */
+const CUT_METHODS: readonly string[] = ['laser', 'waterjet', 'router'];
+
+/**
+ * Normalise the gnomon's stock (DESIGN §2: "when the gnomon is cut from the
+ * plate's own sheet stock, t is the material thickness"). Rule:
+ * `parts.gnomonFrom` defaults to "sheet" for laser, waterjet and router and
+ * to "separate" for print. With "sheet", gnomon.thickness becomes
+ * plate.thickness; a gnomon.thickness written in the spec that differs is an
+ * error naming both fields. "sheet" with process.method print is an error
+ * (a printed plate has no sheet to cut from).
+ *
+ * @param s the spec after zod (defaults filled in)
+ * @param raw the spec as written, to tell an explicit gnomon.thickness from the default
+ */
+export function normaliseGnomonStock<
+  S extends { readonly gnomon: { readonly thickness: number }; readonly plate: { readonly thickness: number }; readonly process: { readonly method: string }; readonly parts: PartsSpec },
+>(s: S, raw: unknown): { gnomon: S['gnomon']; parts: PartsSpec & { readonly gnomonFrom: GnomonSource } } {
+  const method = s.process.method;
+  const from: GnomonSource = s.parts.gnomonFrom ?? (CUT_METHODS.includes(method) ? 'sheet' : 'separate');
+  const parts = { ...s.parts, gnomonFrom: from };
+  if (from === 'separate') return { gnomon: s.gnomon, parts };
+  if (!CUT_METHODS.includes(method)) {
+    throw new SpecError('parts.gnomonFrom', 'sheet', `allowed: "separate" with process.method ${JSON.stringify(method)} (only laser, waterjet and router cut the gnomon from the plate's sheet)`);
+  }
+  const given = (raw as { gnomon?: { thickness?: unknown } } | null)?.gnomon?.thickness;
+  const sheet = s.plate.thickness;
+  if (given !== undefined && given !== sheet) {
+    throw new SpecError(
+      'gnomon.thickness',
+      given,
+      `allowed: ${sheet} mm (= plate.thickness) when the gnomon is cut from the sheet (parts.gnomonFrom "sheet"${s.parts.gnomonFrom === undefined ? `, the default for ${method}` : ''}); or omit gnomon.thickness, or set parts.gnomonFrom: separate`,
+      `gnomon.thickness ${formatValue(given)} mm contradicts plate.thickness ${sheet} mm`,
+    );
+  }
+  return { gnomon: { ...s.gnomon, thickness: sheet }, parts };
+}

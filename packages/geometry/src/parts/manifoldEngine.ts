@@ -1,0 +1,20 @@
+import Module, { type ManifoldToplevel } from 'manifold-3d';
+
+let engine: Promise<ManifoldToplevel> | undefined;
+
+/**
+ * The robust mesh-boolean engine (manifold-3d, WASM; E. Lalish et al.,
+ * https://github.com/elalish/manifold), loaded once per process and shared.
+ * Its booleans return guaranteed 2-manifold meshes, which JSCAD's do not
+ * (T-junctions, DEPS.md). Loading reads the bundled .wasm file; nothing
+ * else about the engine is stateful.
+ *
+ * @example const { Manifold } = await manifoldEngine();
+ */
+export function manifoldEngine(): Promise<ManifoldToplevel> {
+  engine ??= Module().then((wasm) => {
+    wasm.setup();
+    return wasm;
+  });
+  return engine;
+}

@@ -1,0 +1,166 @@
+import { SpecError } from '../errors.ts';
+import type { DialLayout } from '../polar/layoutDial.ts';
+import type { GnomonSource, PartFile } from '../spec/sections/partsSection.ts';
+import type { Hemisphere } from '../types.ts';
+import type { GnomonOptions } from './gnomonSolid.ts';
+import type { WedgeOptions } from './wedgeSolid.ts';
+
+/** Processes that cut the plate from sheet (and so, by default, the gnomon too). */
+const CUT_METHODS = new Set(['laser', 'waterjet', 'router']);
+
+/** Everything the part builders need, resolved from one layout: plain data. */
+export interface PartsPlan {
+  /** the part files this build writes, in a fixed order */
+  readonly files: readonly PartFile[];
+  readonly gnomonFrom: GnomonSource;
+  /**
+   * the pole the wedge rises toward and its arrow points to: true (geographic)
+   * north in the northern hemisphere, true south in the southern one
+   */
+  readonly elevatedPole: Hemisphere;
+  /** seat tilt = |latitude|, degrees */
+  readonly tiltDeg: number;
+  /** how far the tabs reach below the face, mm (= plate thickness for a through tab) */
+  readonly tabDepthMm: number;
+  /** fit clearance per side, mm: already in the plate's slots (slot = tab + 2 · clearance) */
+  readonly clearanceMm: number;
+  /**
+   * gnomonSolid options in the fin's own frame (y centred on the fin); add
+   * `gnomonCentreYMm` to a fin y to get the face y
+   */
+  readonly gnomon: GnomonOptions;
+  readonly gnomonCentreYMm: number;
+  /** wedgeSolid options: seat = plate + 2 · clearance each way, payload = plate thickness + gnomon height */
+  readonly wedge: WedgeOptions;
+  /** body.stl: groove depth for lines, numerals and text, mm, and whether the wedge is fused on */
+  readonly body: { readonly grooveDepthMm: number; readonly withWedge: boolean };
+}
+
+/**
+ * Resolve the spec's `parts:` section against a layout (DESIGN §5 fits):
+ * which files to write, the gnomon fin (length y0..y1 of the layout's
+ * gnomon, its tabs at the layout's tab centres and lengths, tab depth =
+ * plate thickness for a through tab, the nodus notch at the face origin),
+ * and the latitude wedge. The plate's slots already carry the clearance
+ * (slot = tab + 2 · clearance per side), so the tabs are nominal.
+ *
+ * Bad inputs throw a SpecError naming the spec field:
+ * - parts.tabDepth deeper than plate.thickness (a tab longer than the sheet is thick);
+ * - process.clearance not less than half the tab's smaller side
+ *   (min(gnomon.thickness, gnomon.tabLength)): the gap would be wider than the tab;
+ * - a nodus notch that does not fit the style (parts.nodusSize).
+ * The wedge's own printability is checked when it is built (see `dialWedge`).
+ *
+ * @example partsPlan(layoutDial(parseSpec(raw))).files // ['gnomon.dxf', 'wedge.stl']
+ */
+export function partsPlan(layout: DialLayout): PartsPlan {
+  const spec = layout.spec;
+  const parts = spec.parts;
+  const method = spec.process.method;
+  const gnomonFrom: GnomonSource = parts.gnomonFrom ?? (CUT_METHODS.has(method) ? 'sheet' : 'separate');
+  const T = layout.plate.thicknessMm;
+  const g = layout.gnomon;
+
+  let tabDepthMm = T;
+  if (parts.tabDepth !== 'through') {
+    if (parts.tabDepth > T) {
+      throw new SpecError('parts.tabDepth', parts.tabDepth, `allowed: at most plate.thickness = ${T} mm (or "through")`, `a ${parts.tabDepth} mm tab is longer than the ${T} mm sheet is thick`);
+    }
+    tabDepthMm = parts.tabDepth;
+  }
+  const c = spec.process.clearance;
+  const tabSide = Math.min(g.thicknessMm, spec.gnomon.tabLength);
+  if (!(2 * c < tabSide)) {
+    throw new SpecError(
+      'process.clearance',
+      c,
+      `allowed: less than ${tabSide / 2} mm per side, half the tab's smaller side (gnomon.thickness ${g.thicknessMm} mm, gnomon.tabLength ${spec.gnomon.tabLength} mm)`,
+      `a ${c} mm clearance per side leaves a gap around the tab at least as wide as the tab itself`,
+    );
+  }
+
+  const centre = (g.y0Mm + g.y1Mm) / 2;
+  const halfL = (g.y1Mm - g.y0Mm) / 2;
+  const nodus = nodusAt(layout);
+  let nodusOpt: GnomonOptions['nodus'];
+  if (nodus !== null) {
+    const s = parts.nodusSize;
+    const y = nodus - centre;
+    if (!(s / 2 < g.heightMm) || !(y - s / 2 > -halfL && y + s / 2 < halfL)) {
+      throw new SpecError('parts.nodusSize', s, `allowed: a notch that fits the style: opening under ${Math.min(2 * g.heightMm, 2 * (halfL - Math.abs(y))).toFixed(2)} mm here`);
+    }
+    nodusOpt = { kind: 'notch', yMm: y, sizeMm: s };
+  }
+  const gnomon: GnomonOptions = {
+    heightMm: g.heightMm,
+    thicknessMm: g.thicknessMm,
+    lengthMm: g.y1Mm - g.y0Mm,
+    tabs: g.tabs.map((t) => ({ centerYMm: t.centerYMm - centre, lengthMm: t.lengthMm, depthMm: tabDepthMm })),
+    ...(nodusOpt ? { nodus: nodusOpt } : {}),
+    plateThicknessMm: T,
+    tabClearanceMm: 0,
+  };
+
+  const w = parts.wedge;
+  const wedge: WedgeOptions = {
+    latitudeDeg: spec.site.latitude,
+    seatWidthMm: layout.plate.widthMm + 2 * c,
+    seatLengthMm: layout.plate.lengthMm + 2 * c,
+    minBaseMm: w.base,
+    lipMm: w.lipHeight,
+    lipWidthMm: w.lipWidth,
+    payloadHeightMm: T + g.heightMm,
+    wallMm: w.wall,
+    holes: {
+      count: w.holes,
+      diameterMm: w.holeDiameter,
+      countersink: w.countersink > 0 ? { diameterMm: w.countersink, angleDeg: 90 } : null,
+      segments: 32,
+    },
+    arrow: w.arrow ? { lengthMm: 12, shaftWidthMm: 1.6, headWidthMm: 5, headLengthMm: 4, depthMm: 0.6 } : null,
+  };
+
+  return {
+    files: partFiles(parts.write, method, gnomonFrom, parts.body),
+    gnomonFrom,
+    elevatedPole: layout.hemisphere,
+    tiltDeg: Math.abs(spec.site.latitude),
+    tabDepthMm,
+    clearanceMm: c,
+    gnomon,
+    gnomonCentreYMm: centre,
+    wedge,
+    body: { grooveDepthMm: parts.grooveDepth, withWedge: parts.bodyWedge },
+  };
+}
+
+/** Fixed file order for "auto" and for explicit lists alike. */
+const ORDER: readonly PartFile[] = ['gnomon.stl', 'gnomon.dxf', 'wedge.stl', 'body.stl'];
+
+function partFiles(write: 'auto' | readonly PartFile[], method: string, from: GnomonSource, body: boolean): PartFile[] {
+  if (write !== 'auto') return ORDER.filter((f) => write.includes(f));
+  const out: PartFile[] = [from === 'sheet' && method !== 'print' ? 'gnomon.dxf' : 'gnomon.stl', 'wedge.stl'];
+  if (body) out.push('body.stl');
+  return ORDER.filter((f) => out.includes(f));
+}
+
+/**
+ * Face y of the nodus, or null for none: `parts.nodus: true` puts it at the
+ * face origin (the middle of the hour marks, where the layout centres the
+ * date lines). A `gnomon.nodus` field, if the spec has one, also turns it
+ * on (a number or `{ y }` / `{ yMm }` gives its face y).
+ */
+function nodusAt(layout: DialLayout): number | null {
+  const fromGnomon = (layout.spec.gnomon as Record<string, unknown>).nodus;
+  if (fromGnomon !== undefined && fromGnomon !== false && fromGnomon !== null) {
+    if (typeof fromGnomon === 'number') return fromGnomon;
+    if (typeof fromGnomon === 'object') {
+      const o = fromGnomon as Record<string, unknown>;
+      if (o.enabled === false) return layout.spec.parts.nodus ? 0 : null;
+      const y = typeof o.yMm === 'number' ? o.yMm : typeof o.y === 'number' ? o.y : 0;
+      return y;
+    }
+    return 0;
+  }
+  return layout.spec.parts.nodus ? 0 : null;
+}
