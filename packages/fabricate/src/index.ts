@@ -9,5 +9,3 @@ export * from './stl/index.ts';
 export * from './dxf/toGnomonDxf.ts';
 export * from './dxf/offsetRingMiter.ts';
 export * from './install/toInstallMd.ts';
-export * from './pictures/index.ts';
-export * from './template/index.ts';

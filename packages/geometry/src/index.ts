@@ -24,5 +24,4 @@ export * from './sun/index.ts';
 export * from './calendar/index.ts';
 export * from './parts/index.ts';
 export * from './spec/sections/partsSection.ts';
-export * from './assembly/index.ts';
 export * from './shadow/index.ts';
