@@ -9,3 +9,4 @@ export * from './stl/index.ts';
 export * from './dxf/toGnomonDxf.ts';
 export * from './dxf/offsetRingMiter.ts';
 export * from './install/toInstallMd.ts';
+export * from './template/index.ts';

@@ -25,3 +25,4 @@ export * from './calendar/index.ts';
 export * from './parts/index.ts';
 export * from './spec/sections/partsSection.ts';
 export * from './shadow/index.ts';
+export * from './assembly/index.ts';

@@ -1,4 +1,85 @@
-import type { Producer } from './outputTypes.ts';
+import { defaultPictureDate, sunForPicture, viewAssembly } from '@umbrafab/geometry';
+import { svgWidthMm, templateTiles, toAssemblySvg, toPng, toTemplatePdf, CALIBRATION_BAR_MM } from '@umbrafab/fabricate';
+import { plateOutputs } from './plateOutputs.ts';
+import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
 
-/** The pictures outputs of `umbrafab build` (filled in by the pictures work). */
-export const picturesOutputs: Producer = () => ({ files: [], report: {} });
+/**
+ * preview.png (rendered from the very preview.svg the plate outputs write),
+ * assembly.svg and assembly.png (the dial on its wedge with the shadow for
+ * pictures.date / pictures.time), and template.pdf (1:1 paper template);
+ * the report's `pictures` and `template` sections.
+ */
+export const picturesOutputs: Producer = async (ctx) => {
+  const { spec, layout, drawing } = ctx;
+  const pics = spec.pictures;
+  const ppm = pics.pxPerMm;
+  const preview = await previewSvgOf(ctx);
+  const previewPng = toPng(preview, { pxPerMm: ppm });
+
+  const date = pics.date ?? defaultPictureDate(layout);
+  const sun = sunForPicture(layout, date, pics.time);
+  const picture = viewAssembly(layout, drawing, sun, { viewAzimuthDeg: pics.viewAzimuth, viewElevationDeg: pics.viewElevation });
+  const assemblySvg = toAssemblySvg(picture, { title: `${spec.name} on its ${Math.abs(spec.site.latitude)}° wedge, ${date}, shadow on ${pics.time}` });
+  const assemblyPng = toPng(assemblySvg, { pxPerMm: ppm });
+
+  const tOpts = { paper: spec.template.paper, orientation: spec.template.orientation, overlapMm: spec.template.overlap, marginMm: spec.template.margin };
+  const pdf = await toTemplatePdf(
+    { drawing, marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name },
+    tOpts,
+  );
+  const tiles = templateTiles(drawing, tOpts);
+  const size = (png: Uint8Array) => ({ widthPx: readU32(png, 16), heightPx: readU32(png, 20) });
+  const r3 = (v: number) => Math.round(v * 1000) / 1000;
+  return {
+    files: [
+      { name: 'preview.png', bytes: previewPng },
+      { name: 'assembly.svg', bytes: utf8(assemblySvg) },
+      { name: 'assembly.png', bytes: assemblyPng },
+      { name: 'template.pdf', bytes: pdf },
+    ],
+    report: {
+      pictures: {
+        pxPerMm: ppm,
+        preview: { widthMm: svgWidthMm(preview), ...size(previewPng) },
+        assembly: {
+          widthMm: picture.widthMm,
+          heightMm: picture.heightMm,
+          ...size(assemblyPng),
+          date,
+          dialTime: sun.dialTime,
+          clock: sun.clock,
+          daylightSaving: sun.daylightSaving,
+          utc: sun.utc,
+          sunAltitudeDeg: r3(sun.altitudeDeg),
+          sunAzimuthDeg: r3(sun.azimuthDeg),
+          shadowStyle: picture.shadow.style,
+          shadowEdgeXMm: r3(picture.shadow.edgeXMm),
+          wedgeTiltDeg: r3((picture.assembly.tiltRad * 180) / Math.PI),
+          viewAzimuthDeg: pics.viewAzimuth,
+          viewElevationDeg: pics.viewElevation,
+        },
+      },
+      template: {
+        paper: tiles.paper,
+        orientation: tiles.orientation,
+        sheets: { columns: tiles.columns, rows: tiles.rows },
+        overlapMm: tiles.overlapMm,
+        calibrationBarMm: CALIBRATION_BAR_MM,
+        scale: '1:1',
+      },
+    },
+  };
+};
+
+/** The very preview.svg the build writes (the plate outputs are deterministic, so the bytes are the same). */
+async function previewSvgOf(ctx: BuildContext): Promise<string> {
+  const r = await plateOutputs(ctx);
+  const f = r.files.find((x) => x.name === 'preview.svg');
+  if (!f) throw new Error('plate outputs wrote no preview.svg');
+  return new TextDecoder().decode(f.bytes);
+}
+
+/** Big-endian uint32 (PNG IHDR width at byte 16, height at 20). */
+function readU32(b: Uint8Array, at: number): number {
+  return ((b[at] << 24) >>> 0) + (b[at + 1] << 16) + (b[at + 2] << 8) + b[at + 3];
+}

@@ -4,6 +4,7 @@ import { engraveSection } from './sections/engraveSection.ts';
 import { installSection } from './sections/installSection.ts';
 import { partsSection } from './sections/partsSection.ts';
 import { templateSection } from './sections/templateSection.ts';
+import { picturesSection } from './sections/picturesSection.ts';
 
 /**
  * The dial spec schema: one source for validation, defaults and the field
@@ -141,6 +142,7 @@ export const specSchema = z.strictObject({
   install: installSection,
   check: checkSection,
   template: templateSection,
+  pictures: picturesSection,
   process: z
     .strictObject({
       method: oneOf(METHODS).default('laser').describe('laser, waterjet, router or print'),

@@ -1,0 +1,2 @@
+export * from './toPng.ts';
+export * from './toAssemblySvg.ts';

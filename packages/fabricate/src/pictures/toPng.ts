@@ -1,0 +1,56 @@
+import { Resvg } from '@resvg/resvg-js';
+
+/** Options of `toPng`. */
+export interface PngOptions {
+  /** pixels per millimetre of the SVG's width and height (default 4, about 100 dpi) */
+  readonly pxPerMm: number;
+}
+
+export const PNG_DEFAULTS: PngOptions = { pxPerMm: 4 };
+
+/** Millimetres per CSS inch and CSS pixels per inch (CSS Values and Units Level 3, §5.2: 1in = 96px = 25.4mm). */
+const MM_PER_IN = 25.4;
+const PX_PER_IN = 96;
+
+/**
+ * Render an SVG (whose root `width` is given in mm, px or unitless px) to a
+ * PNG of round(widthMm × pxPerMm) pixels across, with resvg
+ * (@resvg/resvg-js 2.6.2). No system fonts are loaded so the bytes are the
+ * same on every machine: only paths are drawn (the umbrafab SVGs draw their
+ * letters as single strokes; a `<text>` element would be left out).
+ *
+ * @returns the PNG file bytes (W3C PNG, 2nd ed. / ISO/IEC 15948)
+ * @example toPng(svg, { pxPerMm: 4 })
+ */
+export function toPng(svg: string, options: Partial<PngOptions> = {}): Uint8Array {
+  const o = { ...PNG_DEFAULTS, ...options };
+  if (!(Number.isFinite(o.pxPerMm) && o.pxPerMm > 0 && o.pxPerMm <= 50)) {
+    throw new Error(`pxPerMm = ${o.pxPerMm} is not allowed: it must be a number greater than 0 and at most 50`);
+  }
+  const widthMm = svgWidthMm(svg);
+  const widthPx = Math.max(1, Math.round(widthMm * o.pxPerMm));
+  const r = new Resvg(svg, {
+    fitTo: { mode: 'width', value: widthPx },
+    font: { loadSystemFonts: false },
+    background: '#ffffff',
+  });
+  return new Uint8Array(r.render().asPng());
+}
+
+/** The root element's width in mm (mm, cm, in, px or unitless px). */
+export function svgWidthMm(svg: string): number {
+  const root = /<svg\b[^>]*>/.exec(svg);
+  const m = root ? /\swidth="([\d.]+)(mm|cm|in|px)?"/.exec(root[0]) : null;
+  if (!m) throw new Error('svg: the root <svg> element has no numeric width attribute; allowed: width="123mm" (or cm, in, px)');
+  const v = Number(m[1]);
+  switch (m[2]) {
+    case 'mm':
+      return v;
+    case 'cm':
+      return v * 10;
+    case 'in':
+      return v * MM_PER_IN;
+    default:
+      return (v * MM_PER_IN) / PX_PER_IN;
+  }
+}

@@ -1,0 +1,2 @@
+export * from './templatePages.ts';
+export * from './toTemplatePdf.ts';
