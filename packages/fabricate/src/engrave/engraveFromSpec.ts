@@ -78,8 +78,10 @@ export interface EngravingReport {
   readonly programs: readonly EngraveProgram[];
   /** The preset the settings start from (plate.material), when a program is written. */
   readonly preset?: string;
-  /** Sum of the engraved geometry's lengths (every line and text stroke once), mm. */
+  /** Sum of the engraved geometry's lengths (every line and text stroke once, without the parts over holes and slots), mm. */
   readonly geometryLengthMm?: number;
+  /** Length of the drawing's lines and strokes left out because they cross a hole or gnomon slot, mm. */
+  readonly overThroughCutsMm?: number;
   readonly ngc?: NgcReport;
   readonly laser?: LaserReport;
 }
@@ -191,5 +193,9 @@ export function engraveFromSpec(spec: DialSpec, drawing: PlateDrawing): SpecEngr
     }
   }
   const geometryLengthMm = job.paths.reduce((sum, p) => sum + polylineLengthMm(p.points, p.closed), 0);
-  return { files, report: { programs, preset: settings.material, geometryLengthMm, ngc, laser }, job };
+  const drawnMm =
+    drawing.lines.reduce((sum, l) => sum + polylineLengthMm(l.path.points, l.path.closed), 0) +
+    drawing.text.reduce((sum, t) => sum + t.strokes.reduce((s2, p) => s2 + polylineLengthMm(p.points, p.closed), 0), 0);
+  const overThroughCutsMm = Math.max(0, drawnMm - geometryLengthMm);
+  return { files, report: { programs, preset: settings.material, geometryLengthMm, overThroughCutsMm, ngc, laser }, job };
 }

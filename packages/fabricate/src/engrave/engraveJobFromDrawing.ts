@@ -1,4 +1,5 @@
 import type { PlateDrawing } from '@umbrafab/geometry';
+import { clipToPlate } from './clipToPlate.ts';
 import type { EngraveJob, EngraveOperation, EngravePath } from './engraveInput.ts';
 
 /** The stock facts a drawing does not hold. */
@@ -19,8 +20,10 @@ export interface EngraveStockInput {
  * - every stroke of the numerals and of the title text (operation 'text',
  *   label 'numeral 10' / 'title Windlecombe Quay'), at the text's stroke width.
  *
- * Cut profiles (outline, holes, slots) and reference lines are not engraved.
- * The drawing is not modified.
+ * Cut profiles (outline, holes, slots) and reference lines are not engraved,
+ * and any part of a path over a mounting hole or a gnomon slot is left out
+ * (clipToPlate), so no tool moves over a through-cut; such a path becomes its
+ * pieces, labelled 'piece k/n'. The drawing is not modified.
  *
  * @param drawing plateDrawing(layout)
  * @param stock the sheet thickness and material
@@ -28,25 +31,26 @@ export interface EngraveStockInput {
  * @example engraveJobFromDrawing(drawing, { thicknessMm: 3, material: 'aluminium' }, ['demo']).paths.length
  */
 export function engraveJobFromDrawing(drawing: PlateDrawing, stock: EngraveStockInput, title: readonly string[]): EngraveJob {
-  const lines = drawing.lines.map((line): EngravePath => {
+  const clip = (path: Omit<EngravePath, 'points' | 'closed'>, points: EngravePath['points'], closed: boolean): EngravePath[] => {
+    const r = clipToPlate(points, closed, drawing.holes, drawing.slots);
+    if (!r.touched) return [{ ...path, points, closed }];
+    return r.pieces.map((piece, k) => ({ ...path, points: piece, closed: false, label: `${path.label} piece ${k + 1}/${r.pieces.length}` }));
+  };
+  const lines = drawing.lines.flatMap((line): EngravePath[] => {
     const operation: EngraveOperation = line.kind === 'curve' ? 'curves' : 'marks';
-    return {
-      points: line.path.points,
-      closed: line.path.closed,
-      widthMm: line.widthMm,
-      operation,
-      label: `${line.kind} ${line.label}`,
-    };
+    return clip({ widthMm: line.widthMm, operation, label: `${line.kind} ${line.label}` }, line.path.points, line.path.closed);
   });
   const text = drawing.text.flatMap((block) =>
-    block.strokes.map(
-      (stroke, i): EngravePath => ({
-        points: stroke.points,
-        closed: stroke.closed,
-        widthMm: block.strokeWidthMm,
-        operation: 'text',
-        label: `${block.role} ${block.text}${block.strokes.length > 1 ? ` stroke ${i + 1}/${block.strokes.length}` : ''}`,
-      }),
+    block.strokes.flatMap((stroke, i): EngravePath[] =>
+      clip(
+        {
+          widthMm: block.strokeWidthMm,
+          operation: 'text',
+          label: `${block.role} ${block.text}${block.strokes.length > 1 ? ` stroke ${i + 1}/${block.strokes.length}` : ''}`,
+        },
+        stroke.points,
+        stroke.closed,
+      ),
     ),
   );
   return {

@@ -21,3 +21,4 @@ export * from './engravePrograms.ts';
 export * from './engraveSettingsFromSpec.ts';
 export * from './checkMillJob.ts';
 export * from './engraveFromSpec.ts';
+export * from './clipToPlate.ts';
