@@ -10,3 +10,4 @@ export * from './dxf/toGnomonDxf.ts';
 export * from './dxf/offsetRingMiter.ts';
 export * from './install/toInstallMd.ts';
 export * from './template/index.ts';
+export * from './pictures/index.ts';
