@@ -1,6 +1,7 @@
+import { batchCommand } from './batch.ts';
 import { buildCommand } from './build.ts';
 import { initCommand } from './init.ts';
 import type { CommandModule } from './commandTypes.ts';
 
 /** Every command of the CLI, in the order --help lists them. Add a command: one file, one line here. */
-export const COMMANDS: readonly CommandModule[] = [buildCommand, initCommand];
+export const COMMANDS: readonly CommandModule[] = [buildCommand, batchCommand, initCommand];

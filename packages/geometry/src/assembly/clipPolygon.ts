@@ -47,25 +47,6 @@ export function clipPolygonAbovePlane(points: readonly Vec3[], height: (p: Vec3)
   return out;
 }
 
-/** Convex hull of points, CCW, Andrew's monotone chain (A. M. Andrew, Information Processing Letters 9(5), 1979). */
-export function convexHull(points: readonly Vec2[]): Vec2[] {
-  const p = [...points].sort((a, b) => a[0] - b[0] || a[1] - b[1]);
-  if (p.length < 3) return p;
-  const cross = (o: Vec2, a: Vec2, b: Vec2) => (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);
-  const lower: Vec2[] = [];
-  for (const q of p) {
-    while (lower.length >= 2 && cross(lower[lower.length - 2], lower[lower.length - 1], q) <= 0) lower.pop();
-    lower.push(q);
-  }
-  const upper: Vec2[] = [];
-  for (let i = p.length - 1; i >= 0; i--) {
-    const q = p[i];
-    while (upper.length >= 2 && cross(upper[upper.length - 2], upper[upper.length - 1], q) <= 0) upper.pop();
-    upper.push(q);
-  }
-  return [...lower.slice(0, -1), ...upper.slice(0, -1)];
-}
-
 /** Signed area of a 2D polygon (positive when CCW), shoelace formula. */
 export function signedArea(points: readonly Vec2[]): number {
   let a = 0;

@@ -1,7 +1,8 @@
-import { gnomonSolid } from '../parts/gnomonSolid.ts';
+import { dialGnomon, dialWedge, faceToWedge, gnomonOnPlate } from '../parts/dialParts.ts';
 import type { Mesh, Vec3 } from '../parts/mesh.ts';
+import { partsPlan } from '../parts/partsPlan.ts';
 import { cross3, normalize3, sub3 } from '../parts/vec3.ts';
-import { wedgeSolid, type WedgePart } from '../parts/wedgeSolid.ts';
+import type { WedgePart } from '../parts/wedgeSolid.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { Hemisphere, Vec2 } from '../types.ts';
 import type { FaceFrame, Facet, PlacedPart } from './assemblyTypes.ts';
@@ -25,14 +26,13 @@ const CORNER_SEGMENTS = 6;
 /**
  * Place the three parts of a dial in the world frame (X east, Y north, Z up,
  * ground Z = 0, mm) for its spec's site:
- * - the latitude wedge (`wedgeSolid`, seat = the plate's width and length,
- *   payload = plate thickness + gnomon height, other sizes WEDGE_DEFAULTS),
- *   its seat rising toward the elevated pole: +Y (north) in the north, −Y in
- *   the south, tilted by |latitude|;
- * - the plate lying on the seat, its lower edge against the wedge's lip, its
- *   top face the dial face;
- * - the gnomon (`gnomonSolid`) standing on the face over the layout's style,
- *   tabs down into the slots.
+ * - the latitude wedge and the gnomon exactly as wedge.stl and gnomon.stl
+ *   are built (`partsPlan`, `dialWedge`, `dialGnomon`), placed with the parts'
+ *   own maps (`faceToWedge`: the plate on the seat against the lip;
+ *   `gnomonOnPlate`: the fin on the face, tabs in the slots);
+ * - the wedge frame turned to the world: its seat rises toward the elevated
+ *   pole, +Y (north) in the north, −Y (a half turn about Z) in the south;
+ * - the plate as a prism of its rounded outline and thickness.
  * The face frame of DESIGN §2 maps to world by `face`: x across (east in the
  * north, west in the south: seen face-on, pole-ward up, east is on the right
  * in the north), y up the slope toward the pole, z the outward normal.
@@ -40,43 +40,25 @@ const CORNER_SEGMENTS = 6;
  * @example placeAssembly(layoutDial(spec)).face.normal // [0, -sin φ, cos φ] in the north
  */
 export function placeAssembly(layout: DialLayout): Assembly {
-  const { plate, gnomon } = layout;
+  const { plate } = layout;
   const t = plate.thicknessMm;
-  const wedge = wedgeSolid({
-    latitudeDeg: layout.spec.site.latitude,
-    seatWidthMm: Math.max(20, plate.widthMm),
-    seatLengthMm: Math.max(20, plate.lengthMm),
-    payloadHeightMm: t + gnomon.heightMm,
-  });
+  // The very parts gnomon.stl and wedge.stl are written from, and their placement (parts/dialParts.ts).
+  const plan = partsPlan(layout);
+  const wedge = dialWedge(plan, layout);
+  const fin = dialGnomon(plan, layout);
+  const faceToWedgeFrame = faceToWedge(layout, wedge);
   const sign = layout.hemisphere === 'north' ? 1 : -1;
   // Wedge frame (x across, y toward the elevated pole, z up) to world: a half turn about Z in the south.
   const toWorld = (p: Vec3): Vec3 => [sign * p[0], sign * p[1], p[2]];
-  const dirToWorld = toWorld;
-
-  const [lowerLeft, lowerRight, , upperLeft] = wedge.seatCorners;
-  const xAxisW = normalize3(sub3(lowerRight, lowerLeft));
-  const yAxisW = normalize3(sub3(upperLeft, lowerLeft));
-  const nW = wedge.seatNormal;
-  // Plate lower-left corner on the seat's lower-left corner, centred across the seat.
-  const inset = (Math.max(20, plate.widthMm) - plate.widthMm) / 2;
-  const originW: Vec3 = [0, 1, 2].map((i) => lowerLeft[i] + (inset + plate.substyleX) * xAxisW[i] + plate.faceOriginY * yAxisW[i] + t * nW[i]) as unknown as Vec3;
-  const face: FaceFrame = { origin: toWorld(originW), xAxis: dirToWorld(xAxisW), yAxis: dirToWorld(yAxisW), normal: dirToWorld(nW) };
+  const o = toWorld(faceToWedgeFrame([0, 0, 0]));
+  const axis = (p: Vec3): Vec3 => normalize3(sub3(toWorld(faceToWedgeFrame(p)), o));
+  const face: FaceFrame = { origin: o, xAxis: axis([1, 0, 0]), yAxis: axis([0, 1, 0]), normal: axis([0, 0, 1]) };
   const onFace = (p: Vec3): Vec3 => faceToWorld(face, p);
 
   // Plate: the rounded outline as a prism from z = −t to the face (z = 0).
   const faceOutline = roundedRectOutline(-plate.substyleX, -plate.faceOriginY, plate.widthMm, plate.lengthMm, plate.cornerRadiusMm);
   const plateFacets = prismFacets(faceOutline, -t, 0).map((f) => ({ points: f.points.map(onFace), normal: rotate(face, f.normal) }));
-
-  // Gnomon: centred on the style's middle, tabs as laid out.
-  const yc = (gnomon.y0Mm + gnomon.y1Mm) / 2;
-  const fin = gnomonSolid({
-    heightMm: gnomon.heightMm,
-    thicknessMm: gnomon.thicknessMm,
-    lengthMm: gnomon.y1Mm - gnomon.y0Mm,
-    tabs: gnomon.tabs.map((tab) => ({ centerYMm: tab.centerYMm - yc, lengthMm: tab.lengthMm, depthMm: t })),
-    plateThicknessMm: t,
-  });
-  const gnomonFacets = meshFacets(fin.mesh, (p) => onFace([p[0], p[1] + yc, p[2]]));
+  const gnomonFacets = meshFacets(gnomonOnPlate(fin, plan), onFace);
   const wedgeFacets = meshFacets(wedge.mesh, toWorld);
 
   return {

@@ -142,7 +142,7 @@ export function viewAssembly(layout: DialLayout, drawing: PlateDrawing, sun: Pic
   // The gnomon's shadow on the face goes just before the gnomon's own faces.
   const shadow = gnomonShadowOnFace(layout, sunFace, assembly.faceOutline);
   const firstGnomon = items.findIndex((e) => e.item.kind === 'face' && e.item.part === 'gnomon');
-  const shadowItem = { item: { kind: 'shadow', on: 'face', polygons: shadow.polygon.length ? [shadow.polygon.map(([x, y]) => P(faceToWorld(face, [x, y, 0])))] : [] } as PictureItem, pts: [] as Vec2[] };
+  const shadowItem = { item: { kind: 'shadow', on: 'face', polygons: shadow.polygons.map((poly) => poly.map(([x, y]) => P(faceToWorld(face, [x, y, 0])))) } as PictureItem, pts: [] as Vec2[] };
   items.splice(firstGnomon < 0 ? items.length : firstGnomon, 0, shadowItem);
 
   // Picture frame from everything but the (clipped) shadows.
