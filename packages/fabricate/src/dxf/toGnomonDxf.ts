@@ -41,13 +41,21 @@ export function gnomonDxfRecords(outline: GnomonOutline, options: GnomonDxfOptio
   const y0 = Math.min(...ys);
   const z0 = Math.min(...zs);
   const sheet = outline.profile.map(([y, z]): Vec2 => [y - y0, z - z0]);
+  // An outward mitred offset shortens only the edges between two inside
+  // (reflex) corners, by kerf; they must stay longer than that.
+  const n = sheet.length;
+  const reflex = sheet.map((p, i) => {
+    const a = sheet[(i - 1 + n) % n];
+    const b = sheet[(i + 1) % n];
+    return (p[0] - a[0]) * (b[1] - p[1]) - (p[1] - a[1]) * (b[0] - p[0]) < 0;
+  });
   let shortest = Infinity;
   sheet.forEach((p, i) => {
-    const q = sheet[(i + 1) % sheet.length];
-    shortest = Math.min(shortest, Math.hypot(q[0] - p[0], q[1] - p[1]));
+    const q = sheet[(i + 1) % n];
+    if (reflex[i] && reflex[(i + 1) % n]) shortest = Math.min(shortest, Math.hypot(q[0] - p[0], q[1] - p[1]));
   });
   if (!(options.kerfMm < shortest)) {
-    throw new SpecError('process.kerf', options.kerfMm, `allowed: a kerf narrower than the gnomon outline's shortest edge (${shortest.toFixed(3)} mm, a tab or the nodus notch)`);
+    throw new SpecError('process.kerf', options.kerfMm, `allowed: a kerf narrower than ${shortest.toFixed(3)} mm, the shortest gnomon edge between two inside corners (between tabs, or a tab and the nodus)`);
   }
   const faceY = -z0;
   const length = Math.max(...ys) - y0;

@@ -1,4 +1,4 @@
-import { SpecError } from '../errors.ts';
+import { SpecError, formatValue } from '../errors.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { Mesh, Vec3 } from './mesh.ts';
 import { gnomonSolid, type GnomonPart } from './gnomonSolid.ts';
@@ -33,8 +33,12 @@ function asSpecError(e: unknown, values: Readonly<Record<string, unknown>>): nev
   if (!(e instanceof Error) || e.name === 'SpecError') throw e;
   const hit = SPEC_FIELD.find(([opt]) => e.message.startsWith(opt));
   if (!hit) throw e;
-  const [, field] = hit;
-  throw new SpecError(field, values[field], `allowed: a value for which ${e.message.replace(/^.*? is not allowed: /, '')}`, e.message);
+  const [opt, field] = hit;
+  const cut = e.message.indexOf(' is not allowed: ');
+  const rule = cut >= 0 ? e.message.slice(cut + ' is not allowed: '.length) : e.message;
+  const what = cut >= 0 ? e.message.slice(0, cut) : opt;
+  const part = opt.startsWith('wedge') ? 'the latitude wedge' : 'the gnomon';
+  throw new SpecError(field, values[field], `allowed: ${rule}`, `got ${formatValue(values[field])}, so ${part} cannot be made (${what})`);
 }
 
 /**

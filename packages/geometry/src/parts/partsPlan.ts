@@ -145,22 +145,14 @@ function partFiles(write: 'auto' | readonly PartFile[], method: string, from: Gn
 }
 
 /**
- * Face y of the nodus, or null for none: `parts.nodus: true` puts it at the
- * face origin (the middle of the hour marks, where the layout centres the
- * date lines). A `gnomon.nodus` field, if the spec has one, also turns it
- * on (a number or `{ y }` / `{ yMm }` gives its face y).
+ * Face y of the nodus, or null for none. The date-line work's
+ * `gnomon.nodus: true` (with `gnomon.nodusY`, face y in mm, default 0) or
+ * `parts.nodus: true` (at the face origin, the middle of the hour marks)
+ * turns the notch on. Read defensively: the gnomon fields may be absent.
  */
 function nodusAt(layout: DialLayout): number | null {
-  const fromGnomon = (layout.spec.gnomon as Record<string, unknown>).nodus;
-  if (fromGnomon !== undefined && fromGnomon !== false && fromGnomon !== null) {
-    if (typeof fromGnomon === 'number') return fromGnomon;
-    if (typeof fromGnomon === 'object') {
-      const o = fromGnomon as Record<string, unknown>;
-      if (o.enabled === false) return layout.spec.parts.nodus ? 0 : null;
-      const y = typeof o.yMm === 'number' ? o.yMm : typeof o.y === 'number' ? o.y : 0;
-      return y;
-    }
-    return 0;
-  }
-  return layout.spec.parts.nodus ? 0 : null;
+  const g = layout.spec.gnomon as Record<string, unknown>;
+  const y = typeof g.nodusY === 'number' ? g.nodusY : 0;
+  if (g.nodus === true) return y;
+  return layout.spec.parts.nodus ? y : null;
 }

@@ -50,7 +50,7 @@ export const partsSection = z
       .union([z.literal('through'), length(0, 100, { exclusiveMin: true })], { error: 'allowed: "through" or a number greater than 0 mm, at most plate.thickness' })
       .default('through')
       .describe('how far the gnomon tabs reach into their slots, mm; "through" = plate.thickness (tab bottoms flush with the underside)'),
-    nodus: flag.default(false).describe('cut a 90° V-notch nodus into the style at the face origin (the middle of the hour marks)'),
+    nodus: flag.default(false).describe('cut a 90° V-notch nodus into the style at gnomon.nodusY (0 = the middle of the hour marks); always on when gnomon.nodus is true'),
     nodusSize: length(0.5, 50).default(3).describe('opening of the nodus notch along the style, mm (its depth is half that)'),
     grooveDepth: length(0.1, 10).default(0.6).describe('body.stl: depth of the line grooves and recessed numerals and text, mm'),
     bodyWedge: flag.default(false).describe('body.stl: fuse the latitude wedge under the plate (one print: wedge, plate and gnomon)'),

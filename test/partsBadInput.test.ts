@@ -1,0 +1,54 @@
+import { mkdirSync, mkdtempSync, readdirSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { stringify } from 'yaml';
+import { describe, expect, it } from 'vitest';
+import { runCli } from './helpers/runCli.ts';
+
+const good = {
+  name: 'Parts bad input',
+  site: { latitude: 44.2, longitude: 7.1, timezone: 'Europe/Rome' },
+  process: { method: 'print' },
+};
+
+function patched(patch: Record<string, unknown>): unknown {
+  const copy = structuredClone(good) as Record<string, Record<string, unknown>>;
+  for (const [path, value] of Object.entries(patch)) {
+    const keys = path.split('.');
+    let node: Record<string, unknown> = copy;
+    for (const k of keys.slice(0, -1)) node = (node[k] ??= {}) as Record<string, unknown>;
+    node[keys.at(-1)!] = value;
+  }
+  return copy;
+}
+
+const cases: { name: string; spec: unknown; field: string; message: RegExp }[] = [
+  { name: 'a tab longer than the sheet is thick', spec: patched({ 'plate.thickness': 3, 'parts.tabDepth': 4 }), field: 'parts.tabDepth', message: /a 4 mm tab is longer than the 3 mm sheet is thick; allowed: at most plate.thickness = 3 mm/ },
+  { name: 'a clearance bigger than the tab', spec: patched({ 'gnomon.thickness': 3, 'process.clearance': 1.5 }), field: 'process.clearance', message: /gap around the tab at least as wide as the tab.*allowed: less than 1.5 mm per side/ },
+  { name: 'a wedge that cannot be printed (seat vertical at 89.5°)', spec: patched({ 'site.latitude': 89.5 }), field: 'site.latitude', message: /\|latitude\| must be at most 89° for a printable wedge/ },
+  { name: 'a wedge base too thin for its countersinks', spec: patched({ 'parts.wedge.base': 2 }), field: 'parts.wedge.countersink', message: /straight bore/ },
+  { name: 'wedge holes that do not fit a narrow wedge', spec: patched({ 'hours.from': '09:00', 'hours.to': '15:00', 'parts.wedge.holes': 6, 'parts.wedge.countersink': 60, 'parts.wedge.holeDiameter': 30, 'parts.wedge.base': 40 }), field: 'parts.wedge.holes', message: /do not fit across/ },
+  { name: 'a cut gnomon thicker than the sheet', spec: patched({ 'process.method': 'laser', 'plate.thickness': 3, 'gnomon.thickness': 6 }), field: 'gnomon.thickness', message: /gnomon.thickness 6 mm contradicts plate.thickness 3 mm.*parts.gnomonFrom/ },
+  { name: 'a sheet gnomon on a printed dial', spec: patched({ 'parts.gnomonFrom': 'sheet' }), field: 'parts.gnomonFrom', message: /allowed: "separate" with process.method "print"/ },
+  { name: 'an unknown part file', spec: patched({ 'parts.write': ['gnomon.stl', 'base.stl'] }), field: 'parts.write', message: /got \["gnomon.stl","base.stl"\]; allowed: "auto" or a list of "gnomon.stl", "gnomon.dxf", "wedge.stl", "body.stl"/ },
+  { name: 'a part file listed twice', spec: patched({ 'parts.write': ['wedge.stl', 'wedge.stl'] }), field: 'parts.write', message: /at most once/ },
+  { name: 'grooves deeper than half the body', spec: patched({ 'parts.write': ['body.stl'], 'parts.grooveDepth': 2 }), field: 'parts.grooveDepth', message: /at most half the plate thickness/ },
+  { name: 'a nodus notch bigger than the style', spec: patched({ 'parts.nodus': true, 'parts.nodusSize': 50, 'gnomon.height': 20 }), field: 'parts.nodusSize', message: /notch that fits the style/ },
+  { name: 'a misspelt parts field', spec: patched({ 'parts.bodyWedgee': true }), field: 'parts.bodyWedgee', message: /did you mean parts.bodyWedge\?/ },
+];
+
+describe('umbrafab build: bad parts input gets exit 1 and an error naming the field', () => {
+  it.each(cases)('$name → $field', async (c) => {
+    const root = mkdtempSync(join(tmpdir(), 'umbrafab-parts-bad-'));
+    const out = join(root, 'out');
+    mkdirSync(out);
+    const spec = join(root, 'spec.yaml');
+    writeFileSync(spec, stringify(c.spec));
+    const r = await runCli(['build', spec, '--out', out]);
+    expect(r.code, r.err).toBe(1);
+    expect(r.err).toContain(c.field);
+    expect(r.err).toMatch(c.message);
+    expect(r.err).not.toMatch(/\n\s+at /);
+    expect(readdirSync(out)).toEqual([]);
+  });
+});
