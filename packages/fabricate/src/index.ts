@@ -11,3 +11,4 @@ export * from './dxf/offsetRingMiter.ts';
 export * from './install/toInstallMd.ts';
 export * from './template/index.ts';
 export * from './pictures/index.ts';
+export * from './check/index.ts';

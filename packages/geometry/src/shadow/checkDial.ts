@@ -150,7 +150,8 @@ export interface CheckResult {
  *    azimuth errors);
  * 3. lit test: the Sun's centre above the horizon AND in front of the face;
  * 4. the casting style edges, found in the mesh of `gnomonForLayout` (the
- *    solid written to gnomon.stl), projected along the rays onto the face
+ *    solid written to gnomon.stl; at full height, so a nodus notch's flanks
+ *    are left out), projected along the rays onto the face
  *    (`shadowOnLine`): error = shadow x − drawn x over the mark's y-range;
  * 5. that error in seconds of time through dx/dH = h / cos² H;
  * 6. the same with the plate 1° steeper and turned 1° clockwise: the
@@ -177,8 +178,12 @@ export function checkDial(layout: DialLayout, options: CheckOptions = {}): Check
 
   const track = sunTrack({ latitudeDeg: spec.site.latitude, longitudeDeg: spec.site.longitude, timezone: spec.site.timezone, year, everyDays, refraction });
   const part = gnomonForLayout(layout);
-  const edges = styleEdges(part.mesh);
-  const h = Math.max(...[...edges.minusX, ...edges.plusX].flatMap((e) => [e[0][2], e[1][2]]));
+  // The hour lines read the straight style at full height; a nodus notch's
+  // flanks (lower, sloping) are left out: they are meant to mark the date.
+  const found = styleEdges(part.mesh);
+  const h = Math.max(...[...found.minusX, ...found.plusX].flatMap((e) => [e[0][2], e[1][2]]));
+  const atTop = (e: Edge3) => Math.abs(e[0][2] - h) < 1e-9 && Math.abs(e[1][2] - h) < 1e-9;
+  const edges = { minusX: found.minusX.filter(atTop), plusX: found.plusX.filter(atTop) };
   const lat = spec.site.latitude;
   const frame = dialFrame({ latitudeDeg: lat, tiltErrorDeg, azimuthErrorDeg });
   const frameTilt = dialFrame({ latitudeDeg: lat, tiltErrorDeg: tiltErrorDeg + 1, azimuthErrorDeg });

@@ -1,0 +1,53 @@
+import { join } from 'node:path';
+import { checkDial, layoutDial, marksFromPlate, parseSpec, type CheckResult } from '@umbrafab/geometry';
+import { checkTableText, toCheckJson, toCheckSvg } from '@umbrafab/fabricate';
+import { readPlateDxf } from '../readPlateDxf.ts';
+import { readSpecFile } from '../readSpec.ts';
+import { writeFilesAtomic } from '../writeFilesAtomic.ts';
+import { utf8 } from '../outputs/outputTypes.ts';
+import { UsageError, type CommandModule } from './commandTypes.ts';
+
+export const checkCommand: CommandModule = {
+  command: 'check <spec>',
+  describe: 'simulate a year of sunshine on the built parts and measure every mark against the shadow (exit 1 beyond check.tolerance)',
+  builder: (y) =>
+    y
+      .positional('spec', { type: 'string', demandOption: true, describe: 'dial spec file (.yaml or .json)' })
+      .option('plate', { type: 'string', describe: 'read the marks back from this plate DXF (e.g. after editing it in CAD) instead of the layout' })
+      .option('year', { type: 'number', describe: 'calendar year to simulate (default: calendar.year of the spec)' })
+      .option('out', { type: 'string', alias: 'o', describe: 'also write check.json and check.svg to this folder' })
+      .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
+  run: (args, io) => {
+    let spec = readSpecFile(args.spec);
+    if (args.year !== undefined) {
+      const year = Number(args.year);
+      if (!Number.isInteger(year) || year < 1900 || year > 2200) throw new UsageError(`--year: got ${args.year}; allowed: a whole year from 1900 to 2200`);
+      spec = parseSpec({ ...spec, calendar: { ...spec.calendar, year } });
+    }
+    const layout = layoutDial(spec);
+    let result: CheckResult;
+    if (args.plate !== undefined) {
+      const plate = readPlateDxf(String(args.plate));
+      const found = marksFromPlate(layout, plate.lines);
+      result = checkDial(layout, { drawn: found.drawn, source: 'plate' });
+      if (found.unmatched.length) io.out(`note: ${found.unmatched.length} mark line(s) in ${args.plate} match no mark of the spec (first at face x ${found.unmatched[0][0].toFixed(2)} mm, y ${found.unmatched[0][1].toFixed(2)} mm); they are not checked`);
+    } else {
+      result = checkDial(layout);
+    }
+    io.out(checkTableText(result));
+    if (args.out !== undefined) {
+      const dir = String(args.out);
+      writeFilesAtomic(dir, [
+        { name: 'check.json', bytes: utf8(toCheckJson(result)) },
+        { name: 'check.svg', bytes: utf8(toCheckSvg(result)) },
+      ], Boolean(args.force));
+      io.out(`umbrafab: wrote check.json, check.svg to ${join(dir)}`);
+    }
+    if (!result.pass) {
+      const f = result.failures[0];
+      io.err(`umbrafab check: mark ${f.label} ${f.style} is ${Math.abs(f.errorMm).toFixed(3)} mm off the simulated shadow on ${f.date} (tolerance ${result.toleranceMm} mm); ${result.failures.length} mark(s) fail`);
+      return 1;
+    }
+    return 0;
+  },
+};

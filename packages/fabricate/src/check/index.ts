@@ -1,0 +1,3 @@
+export * from './toCheckJson.ts';
+export * from './toCheckSvg.ts';
+export * from './checkTableText.ts';
