@@ -1,0 +1,96 @@
+import { mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { runCli } from './helpers/runCli.ts';
+import { expectClose } from './helpers/closeTo.ts';
+
+const ROOT = resolve(import.meta.dirname, '..');
+const DEMO = join(ROOT, 'fixtures/demo.yaml');
+
+/**
+ * The seat tilt of a binary STL wedge, degrees: the largest facet area whose
+ * normal leans toward −y and up (the seat, normal (0, −sin a, cos a)), a = acos(n_z).
+ * Binary STL layout: 80-byte header, uint32 count, 50 bytes per facet
+ * (normal, three vertices as float32 LE, uint16 attribute) — common practice
+ * (the format's 3D Systems definition).
+ */
+function seatTiltDeg(stl: Buffer): number {
+  const n = stl.readUInt32LE(80);
+  const areaByTilt = new Map<number, number>();
+  for (let i = 0; i < n; i++) {
+    const o = 84 + 50 * i;
+    const v = Array.from({ length: 9 }, (_, k) => stl.readFloatLE(o + 12 + 4 * k));
+    const e1 = [v[3] - v[0], v[4] - v[1], v[5] - v[2]];
+    const e2 = [v[6] - v[0], v[7] - v[1], v[8] - v[2]];
+    const c = [e1[1] * e2[2] - e1[2] * e2[1], e1[2] * e2[0] - e1[0] * e2[2], e1[0] * e2[1] - e1[1] * e2[0]];
+    const len = Math.hypot(c[0], c[1], c[2]);
+    if (len === 0) continue;
+    const [nx, ny, nz] = c.map((x) => x / len);
+    if (Math.abs(nx) > 1e-4 || !(ny < -1e-4) || !(nz > 1e-4)) continue;
+    const tilt = Math.round((Math.acos(nz) * 180) / Math.PI * 1000) / 1000;
+    areaByTilt.set(tilt, (areaByTilt.get(tilt) ?? 0) + len / 2);
+  }
+  return [...areaByTilt.entries()].sort((a, b) => b[1] - a[1])[0][0];
+}
+
+describe('umbrafab batch', () => {
+  it('writes one plate and five wedges for five latitudes, each wedge tilted by its latitude', async () => {
+    const out = mkdtempSync(join(tmpdir(), 'umbrafab-batch-'));
+    const lats = [30, 35, 40, 45, 50];
+    const r = await runCli(['batch', DEMO, '--latitudes', lats.join(','), '--out', out, '--no-progress']);
+    expect(r.err).toBe('');
+    expect(r.code).toBe(0);
+    const names = readdirSync(out).sort();
+    expect(names.filter((n) => n.endsWith('.dxf') && n.startsWith('plate'))).toEqual(['plate.dxf']);
+    expect(names.filter((n) => n.startsWith('wedge-'))).toEqual(lats.map((l) => `wedge-N${l}.stl`));
+    const summary = JSON.parse(readFileSync(join(out, 'batch.json'), 'utf8'));
+    expect(summary.plate.shared).toBe(true);
+    for (const lat of lats) {
+      // The tilt equals |latitude| (DESIGN §4), read back from the STL's seat facets.
+      expectClose(seatTiltDeg(readFileSync(join(out, `wedge-N${lat}.stl`))), lat, 0.01, `wedge-N${lat}.stl seat tilt`, '°');
+      expect(summary.latitudes.find((x: { latitudeDeg: number }) => x.latitudeDeg === lat).wedgeAngleDeg).toBe(lat);
+    }
+    // Summary table: a header and one row per latitude.
+    expect(r.out).toMatch(/latitude\s+wedge angle/);
+    for (const lat of lats) expect(r.out).toMatch(new RegExp(`^${lat}°\\s+${lat}\\.00°.*wedge-N${lat}\\.stl\\s+plate\\.dxf$`, 'm'));
+  });
+
+  it('makes one plate per latitude when the hemispheres differ', async () => {
+    const out = mkdtempSync(join(tmpdir(), 'umbrafab-batch-'));
+    const r = await runCli(['batch', DEMO, '--latitudes', '35,-35', '--out', out, '--no-progress']);
+    expect(r.code).toBe(0);
+    expect(readdirSync(out).filter((n) => n.endsWith('.dxf') && n.startsWith('plate')).sort()).toEqual(['plate-N35.dxf', 'plate-S35.dxf']);
+    expectClose(seatTiltDeg(readFileSync(join(out, 'wedge-S35.stl'))), 35, 0.01, 'southern wedge tilt', '°');
+  });
+
+  it('reads latitudes from a file with comments', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'umbrafab-batch-'));
+    const list = join(dir, 'lats.txt');
+    writeFileSync(list, '# shop list\n30, 32.5\n34 # south coast\n');
+    const r = await runCli(['batch', DEMO, '--latitudes-file', list, '--out', join(dir, 'out'), '--no-progress']);
+    expect(r.code).toBe(0);
+    expect(readdirSync(join(dir, 'out')).filter((n) => n.startsWith('wedge-'))).toEqual(['wedge-N30.stl', 'wedge-N32.5.stl', 'wedge-N34.stl']);
+  });
+
+  for (const [bad, why] of [
+    ['30,abc', /--latitudes item 2: got "abc"; allowed: a latitude in degrees from -89 to 89/],
+    ['30,95', /--latitudes item 2: got "95"; allowed/],
+    ['30,30', /listed twice/],
+    [',', /no latitude given/],
+  ] as const) {
+    it(`refuses --latitudes ${bad} clearly (exit 1), writing nothing`, async () => {
+      const out = mkdtempSync(join(tmpdir(), 'umbrafab-batch-'));
+      const r = await runCli(['batch', DEMO, '--latitudes', bad, '--out', out, '--no-progress']);
+      expect(r.code).toBe(1);
+      expect(r.err).toMatch(why);
+      expect(readdirSync(out)).toEqual([]);
+    });
+  }
+
+  it('refuses a run without latitudes', async () => {
+    const r = await runCli(['batch', DEMO, '--no-progress']);
+    expect(r.code).toBe(1);
+    expect(r.err).toMatch(/--latitudes: missing/);
+  });
+});
