@@ -1,0 +1,42 @@
+// Regenerates the README's pictures from the demo spec, so they never drift from the code:
+//   npx tsx scripts/readme-pictures.ts
+// writes docs/images/preview.png, docs/images/assembly.png and docs/images/template-page1.png
+// (the last one rasterised from template.pdf with poppler-utils' pdftoppm, when installed).
+import { execFileSync } from 'node:child_process';
+import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+
+const ROOT = resolve(import.meta.dirname, '..');
+const OUT = join(ROOT, 'docs/images');
+
+async function run(): Promise<void> {
+  const spec = readSpecFile(join(ROOT, 'fixtures/demo.yaml'));
+  const result = await buildFiles(spec);
+  const file = (name: string) => {
+    const f = result.files.find((x) => x.name === name);
+    if (!f) throw new Error(`the demo build wrote no ${name}`);
+    return f.bytes;
+  };
+  mkdirSync(OUT, { recursive: true });
+  writeFileSync(join(OUT, 'preview.png'), file('preview.png'));
+  writeFileSync(join(OUT, 'assembly.png'), file('assembly.png'));
+  const written = ['preview.png', 'assembly.png'];
+  try {
+    const dir = mkdtempSync(join(tmpdir(), 'umbrafab-readme-'));
+    writeFileSync(join(dir, 'template.pdf'), file('template.pdf'));
+    execFileSync('pdftoppm', ['-r', '50', '-png', '-f', '1', '-l', '1', '-singlefile', join(dir, 'template.pdf'), join(dir, 'page')]);
+    writeFileSync(join(OUT, 'template-page1.png'), readFileSync(join(dir, 'page.png')));
+    written.push('template-page1.png');
+  } catch (e) {
+    console.warn(`readme-pictures: template-page1.png skipped (pdftoppm from poppler-utils needed): ${(e as Error).message.split('\n')[0]}`);
+  }
+  console.log(`readme-pictures: wrote ${written.map((n) => `docs/images/${n}`).join(', ')}`);
+}
+
+run().catch((e) => {
+  console.error(e);
+  process.exit(1);
+});
