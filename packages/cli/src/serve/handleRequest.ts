@@ -1,0 +1,223 @@
+import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import type { IncomingMessage, ServerResponse } from 'node:http';
+import { basename, dirname } from 'node:path';
+import { isSpecError, parseSpec, type DialSpec } from '@umbrafab/geometry';
+import { writeFilesAtomic } from '../writeFilesAtomic.ts';
+import { isLoopbackHost } from './bindPolicy.ts';
+import type { BuildCache } from './buildCache.ts';
+import { formValuesToSpec, specToFormValues, type FormValue } from './formValues.ts';
+import { HttpError } from './httpError.ts';
+import { previewFrame, plateToPreview } from './previewFrame.ts';
+import { MAX_BODY_BYTES, readJsonBody } from './readJsonBody.ts';
+import { sceneMeshes } from './sceneMeshes.ts';
+import { specFields } from './specFields.ts';
+import { specToCommentedYaml } from './specYaml.ts';
+import { STATIC_ASSETS } from './staticAssets.ts';
+import { summaryRows } from './summaryRows.ts';
+import { sunView, type SunQuery } from './sunView.ts';
+
+/** Everything a request may use; fixed when the server starts. */
+export interface ServeContext {
+  readonly builds: BuildCache;
+  /** the spec file given on the command line (absolute), the only file "save spec" may write; null if none */
+  readonly specPath: string | null;
+  /** how the page names that file (as typed on the command line) */
+  readonly specLabel: string | null;
+  /** the spec the page opens with (raw, before validation) */
+  readonly initialSpec: unknown;
+  /** the problem with the initial spec file, if it could not be read */
+  readonly initialError: string | null;
+  /** the port actually bound (for the Host header check) */
+  readonly port: () => number;
+  /** false: only requests naming a loopback host are served (DNS-rebinding guard) */
+  readonly allowRemote: boolean;
+  readonly maxBodyBytes?: number;
+  readonly log: (line: string) => void;
+}
+
+const FILE_TYPES: Readonly<Record<string, string>> = {
+  dxf: 'application/dxf',
+  svg: 'image/svg+xml',
+  json: 'application/json',
+  stl: 'model/stl',
+  pdf: 'application/pdf',
+  png: 'image/png',
+  ngc: 'text/plain; charset=utf-8',
+  gcode: 'text/plain; charset=utf-8',
+  txt: 'text/plain; charset=utf-8',
+  csv: 'text/csv; charset=utf-8',
+  yaml: 'text/yaml; charset=utf-8',
+};
+
+let pageCsp: string | undefined;
+
+/**
+ * Serve one request. Routes (nothing else exists; any other URL is 404):
+ * - GET the page's files and three.js from a fixed table (STATIC_ASSETS);
+ * - GET  /api/setup: the form's fields (from the spec schema), its first values, the save target;
+ * - POST /api/build {fields}: validate with parseSpec and build with buildFiles (422 with the CLI's message when invalid);
+ * - GET  /api/files/<build id>/<name>: one file of a recent build, its bytes exactly;
+ * - POST /api/sun {fields, date, time, kind}: the sun and the gnomon's shadow;
+ * - POST /api/save {fields}: write the spec as commented YAML to the spec file given on the command line.
+ */
+export async function handleRequest(ctx: ServeContext, req: IncomingMessage, res: ServerResponse): Promise<void> {
+  try {
+    checkHost(ctx, req);
+    const url = new URL(req.url ?? '/', 'http://page.invalid');
+    const path = url.pathname;
+    const method = req.method ?? 'GET';
+    if (method === 'GET' || method === 'HEAD') {
+      const asset = STATIC_ASSETS[path];
+      if (asset) return send(res, 200, asset.type, readFileSync(asset.file), path === '/' ? { 'Content-Security-Policy': csp(asset.file) } : {});
+      if (path === '/api/setup') return sendJson(res, 200, setup(ctx));
+      if (path.startsWith('/api/files/')) return sendBuildFile(ctx, res, path);
+      throw new HttpError(404, `${path}: no such page or file`);
+    }
+    if (method !== 'POST') throw new HttpError(405, `${method}: allowed: GET or POST`);
+    checkOrigin(req);
+    const body = await readJsonBody(req, ctx.maxBodyBytes ?? MAX_BODY_BYTES);
+    if (path === '/api/build') return sendJson(res, 200, await build(ctx, body));
+    if (path === '/api/sun') return sendJson(res, 200, await sun(ctx, body));
+    if (path === '/api/save') return sendJson(res, 200, save(ctx, body));
+    throw new HttpError(404, `${path}: no such action`);
+  } catch (e) {
+    if (isSpecError(e)) return sendJson(res, 422, { ok: false, error: { field: e.field, message: e.message } });
+    if (e instanceof HttpError) {
+      // A body we did not read to the end: answer, then close the connection (Node ends the socket after the response).
+      if (e.status === 413) res.setHeader('Connection', 'close');
+      return sendJson(res, e.status, { ok: false, error: { field: null, message: e.message } });
+    }
+    ctx.log(`umbrafab serve: internal error: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
+    return sendJson(res, 500, { ok: false, error: { field: null, message: `internal error: ${e instanceof Error ? e.message : String(e)}` } });
+  }
+}
+
+/** Only loopback Host names unless --allow-remote: a page on another site cannot reach us through a rebound DNS name. */
+function checkHost(ctx: ServeContext, req: IncomingMessage): void {
+  if (ctx.allowRemote) return;
+  const host = String(req.headers.host ?? '');
+  const m = /^(\[[^\]]+\]|[^:]+)(?::(\d+))?$/.exec(host);
+  if (!m || !isLoopbackHost(m[1]) || (m[2] !== undefined && Number(m[2]) !== ctx.port())) {
+    throw new HttpError(403, `Host ${JSON.stringify(host)}: allowed: 127.0.0.1, localhost or [::1] with this server's port`);
+  }
+}
+
+/** A POST from another site's page carries its Origin: refuse it (the page itself sends its own origin or none). */
+function checkOrigin(req: IncomingMessage): void {
+  const origin = req.headers.origin;
+  if (origin === undefined) return;
+  let host = '';
+  try {
+    host = new URL(origin).host;
+  } catch {
+    /* "null" or junk: refused below */
+  }
+  if (host !== req.headers.host) throw new HttpError(403, `Origin ${origin}: allowed: this page only`);
+}
+
+function setup(ctx: ServeContext) {
+  return {
+    ok: true,
+    fields: specFields(),
+    values: specToFormValues(ctx.initialSpec),
+    specFile: ctx.specLabel,
+    canSave: ctx.specPath !== null,
+    initialError: ctx.initialError,
+    limits: { maxBodyBytes: ctx.maxBodyBytes ?? MAX_BODY_BYTES },
+  };
+}
+
+function fieldsOf(body: unknown, allowedKeys: readonly string[]): Record<string, FormValue> {
+  if (body === null || typeof body !== 'object' || Array.isArray(body)) throw new HttpError(400, 'request body: allowed: a JSON object');
+  const extra = Object.keys(body).filter((k) => !allowedKeys.includes(k));
+  if (extra.length) throw new HttpError(400, `request body: unknown key ${JSON.stringify(extra[0])}; allowed: ${allowedKeys.join(', ')}`);
+  const fields = (body as { fields?: unknown }).fields;
+  if (fields === null || typeof fields !== 'object' || Array.isArray(fields)) throw new HttpError(400, 'request body: "fields" must be an object of form values');
+  return fields as Record<string, FormValue>;
+}
+
+function specFrom(fields: Record<string, FormValue>): DialSpec {
+  return parseSpec(formValuesToSpec(fields));
+}
+
+async function build(ctx: ServeContext, body: unknown) {
+  const spec = specFrom(fieldsOf(body, ['fields']));
+  const b = await ctx.builds.build(spec);
+  const { layout, files } = b.result;
+  const svgFile = files.find((f) => f.name === 'preview.svg');
+  const svg = svgFile ? new TextDecoder().decode(svgFile.bytes) : '';
+  return {
+    ok: true,
+    id: b.id,
+    svg,
+    frame: previewFrame(svg, layout.plate.widthMm, layout.plate.lengthMm),
+    files: files.map((f) => ({ name: f.name, bytes: f.bytes.length, url: `/api/files/${b.id}/${encodeURIComponent(f.name)}` })),
+    summary: summaryRows(b.result),
+    notes: layout.notes,
+    scene: sceneMeshes(layout),
+  };
+}
+
+async function sun(ctx: ServeContext, body: unknown) {
+  const fields = fieldsOf(body, ['fields', 'date', 'time', 'kind']);
+  const q = body as SunQuery;
+  const b = await ctx.builds.build(specFrom(fields));
+  const view = sunView(b.result.layout, { date: q.date, time: q.time, kind: q.kind });
+  const frame = previewFrame(new TextDecoder().decode(b.result.files.find((f) => f.name === 'preview.svg')?.bytes ?? new Uint8Array()), b.result.layout.plate.widthMm, b.result.layout.plate.lengthMm);
+  const { plate } = b.result.layout;
+  const shadowPreview = view.shadowFace.map((poly) => poly.map(([x, y]) => plateToPreview(frame, [x + plate.substyleX, y + plate.faceOriginY])));
+  return { ok: true, id: b.id, sun: view, shadowPreview };
+}
+
+function save(ctx: ServeContext, body: unknown) {
+  const fields = fieldsOf(body, ['fields']);
+  if (ctx.specPath === null) throw new HttpError(409, 'save spec: no spec file was named when the server started; allowed: start it as `umbrafab serve my-dial.yaml` to save to that file');
+  const raw = formValuesToSpec(fields);
+  parseSpec(raw); // refuse to save a spec the CLI would refuse
+  const text = specToCommentedYaml(raw);
+  writeFilesAtomic(dirname(ctx.specPath), [{ name: basename(ctx.specPath), bytes: new TextEncoder().encode(text) }], true);
+  ctx.log(`umbrafab serve: saved the spec to ${ctx.specLabel}`);
+  return { ok: true, file: ctx.specLabel, bytes: Buffer.byteLength(text) };
+}
+
+function sendBuildFile(ctx: ServeContext, res: ServerResponse, path: string): void {
+  const m = /^\/api\/files\/([0-9a-f]{16})\/([^/]+)$/.exec(path);
+  let name = '';
+  try {
+    name = m ? decodeURIComponent(m[2]) : '';
+  } catch {
+    /* bad escape: not found */
+  }
+  const file = m ? ctx.builds.get(m[1])?.result.files.find((f) => f.name === name) : undefined;
+  if (!file) throw new HttpError(404, `${path}: no such file in a recent build (build again and download from the list)`);
+  const ext = file.name.split('.').pop() ?? '';
+  send(res, 200, FILE_TYPES[ext] ?? 'application/octet-stream', file.bytes, { 'Content-Disposition': `attachment; filename="${file.name.replace(/[^\w.-]/g, '_')}"` });
+}
+
+function sendJson(res: ServerResponse, status: number, value: unknown): void {
+  send(res, status, 'application/json; charset=utf-8', Buffer.from(JSON.stringify(value)));
+}
+
+function send(res: ServerResponse, status: number, type: string, bytes: Uint8Array, extra: Record<string, string> = {}): void {
+  res.writeHead(status, {
+    'Content-Type': type,
+    'Content-Length': String(bytes.length),
+    'Cache-Control': 'no-store',
+    'X-Content-Type-Options': 'nosniff',
+    'Referrer-Policy': 'no-referrer',
+    ...extra,
+  });
+  res.end(res.req.method === 'HEAD' ? undefined : bytes);
+}
+
+/** The page's Content-Security-Policy: its own scripts and the one inline import map (by hash), nothing from elsewhere. */
+function csp(indexFile: string): string {
+  if (!pageCsp) {
+    const html = readFileSync(indexFile, 'utf8');
+    const map = /<script type="importmap">([\s\S]*?)<\/script>/.exec(html)?.[1] ?? '';
+    const hash = createHash('sha256').update(map).digest('base64');
+    pageCsp = `default-src 'self'; script-src 'self' 'sha256-${hash}'; style-src 'self' 'unsafe-inline'; img-src 'self' data: blob:; connect-src 'self'; object-src 'none'; base-uri 'none'; frame-ancestors 'none'; form-action 'none'`;
+  }
+  return pageCsp;
+}

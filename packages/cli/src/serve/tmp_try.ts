@@ -1,0 +1,10 @@
+import { parseSpec } from '@umbrafab/geometry';
+import { readFileSync } from 'node:fs';
+import { parse } from 'yaml';
+import { specToCommentedYaml } from './specYaml.ts';
+import { specFields } from './specFields.ts';
+const s = parseSpec(parse(readFileSync('fixtures/demo.yaml', 'utf8')));
+const y = specToCommentedYaml(s);
+console.log(y);
+console.log(JSON.stringify(parseSpec(parse(y))) === JSON.stringify(s));
+console.log(specFields().map(f=>`${f.key} ${f.kind} ${f.unit} ${JSON.stringify(f.default)} ${f.required}`).join('\n'));
