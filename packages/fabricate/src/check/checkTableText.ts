@@ -11,6 +11,12 @@ function signed(v: number, d: number): string {
   return s.startsWith('-') ? s : `+${s}`;
 }
 
+/** Signed, with 4 decimals, or in exponent form when smaller than that shows. */
+function tiny(v: number): string {
+  if (v !== 0 && Math.abs(v) < 5e-5) return `${v < 0 ? '' : '+'}${v.toExponential(1)}`;
+  return signed(v, 4);
+}
+
 const COLUMNS = ['mark', 'lit days', 'worst mm', 'worst s', 'mean mm', 'worst day', 'penumbra mm', 'clock-label min', 'tilt 1° min', 'az 1° min'] as const;
 
 function row(m: MarkCheck): string[] {
@@ -53,7 +59,7 @@ export function checkTableText(result: CheckResult): string {
       : 'clock-label: standard clock time when the sun reaches the mark minus its solar-time label: equation of time and longitude, kept apart from the geometric error',
   );
   const w = result.worst;
-  if (w) lines.push(`worst geometric error: ${signed(w.errorMm, 4)} mm (${signed(w.errorS, 2)} s) at ${w.label} ${w.style} on ${w.date}; tolerance ${fx(result.toleranceMm, 3)} mm`);
+  if (w) lines.push(`worst geometric error: ${tiny(w.errorMm)} mm (${tiny(w.errorS)} s) at ${w.label} ${w.style} on ${w.date}; tolerance ${fx(result.toleranceMm, 3)} mm`);
   if (result.pass) lines.push('PASS: every lit mark lies within the tolerance of the simulated shadow on every day');
   else {
     for (const f of result.failures) {

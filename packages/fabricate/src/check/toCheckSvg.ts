@@ -40,7 +40,7 @@ export function toCheckSvg(result: CheckResult): string {
     rec.push({ kind: 'text', x: W - M.right + 4, y: py(t) + 4, text: `${t > 0 ? '+' : '−'}${result.toleranceMm} mm tolerance`, cls: 'small', anchor: 'start' });
   }
   for (const e of [peak, peak / 2, -peak / 2, -peak]) {
-    rec.push({ kind: 'text', x: M.left - 6, y: py(e) + 4, text: formatMm(e), cls: 'small', anchor: 'end' });
+    rec.push({ kind: 'text', x: M.left - 6, y: py(e) + 4, text: formatMm(e).replace(' mm', ''), cls: 'small', anchor: 'end' });
   }
   days.forEach((d, i) => {
     if (d.date.endsWith('-01') || (i === 0 && result.everyDays > 1)) {
@@ -76,8 +76,9 @@ export function toCheckSvg(result: CheckResult): string {
 /** Millimetres with enough digits for the scale (µm-level errors still readable). */
 function formatMm(v: number): string {
   const a = Math.abs(v);
-  const d = a === 0 ? 0 : a >= 0.1 ? 3 : a >= 0.001 ? 4 : 7;
-  return `${v < 0 ? '−' : ''}${a.toFixed(d)}`;
+  if (a !== 0 && a < 1e-4) return `${v < 0 ? '−' : ''}${a.toExponential(1)} mm`;
+  const d = a === 0 ? 0 : a >= 0.1 ? 3 : 4;
+  return `${v < 0 ? '−' : ''}${a.toFixed(d)} mm`;
 }
 
 function esc(s: string): string {

@@ -37,7 +37,8 @@ export function shadowOnLine(edges: readonly Edge3[], sun: Vec3, a: Vec2, b: Vec
   if (!(sun[2] > 0)) return null;
   const ly0 = Math.min(a[1], b[1]);
   const ly1 = Math.max(a[1], b[1]);
-  const lineX = (y: number) => (b[1] === a[1] ? (a[0] + b[0]) / 2 : a[0] + ((y - a[1]) * (b[0] - a[0])) / (b[1] - a[1]));
+  const lineSlope = b[1] === a[1] ? 0 : (b[0] - a[0]) / (b[1] - a[1]);
+  const lineX0 = b[1] === a[1] ? (a[0] + b[0]) / 2 : a[0];
   let worst = 0;
   let covered = 0;
   let sumX = 0;
@@ -49,13 +50,14 @@ export function shadowOnLine(edges: readonly Edge3[], sun: Vec3, a: Vec2, b: Vec
     const lo = Math.max(Math.min(pa[1], pb[1]), ly0);
     const hi = Math.min(Math.max(pa[1], pb[1]), ly1);
     if (!(hi > lo)) continue;
-    const shadowX = (y: number) => pa[0] + ((y - pa[1]) * (pb[0] - pa[0])) / dy;
-    for (const y of [lo, hi]) {
-      const e = shadowX(y) - lineX(y);
-      if (Math.abs(e) > Math.abs(worst)) worst = e;
-    }
+    // Both lines are straight: x at y = pa_x + (y − pa_y)·slope (written out, no closures in this hot loop).
+    const slope = (pb[0] - pa[0]) / dy;
+    const eLo = pa[0] + (lo - pa[1]) * slope - (lineX0 + (b[1] === a[1] ? 0 : (lo - a[1]) * lineSlope));
+    const eHi = pa[0] + (hi - pa[1]) * slope - (lineX0 + (b[1] === a[1] ? 0 : (hi - a[1]) * lineSlope));
+    if (Math.abs(eLo) > Math.abs(worst)) worst = eLo;
+    if (Math.abs(eHi) > Math.abs(worst)) worst = eHi;
     covered += hi - lo;
-    sumX += shadowX((lo + hi) / 2) * (hi - lo);
+    sumX += (pa[0] + ((lo + hi) / 2 - pa[1]) * slope) * (hi - lo);
   }
   if (!(covered > 0)) return null;
   const len = ly1 - ly0;

@@ -55,6 +55,6 @@ export function dialFrame(installation: DialInstallation): DialFrame {
 
 /** A horizon-frame (ENU) vector expressed in the dial frame. */
 export function toDialFrame(frame: DialFrame, enu: Vec3): Vec3 {
-  const d = (a: Vec3) => a[0] * enu[0] + a[1] * enu[1] + a[2] * enu[2];
-  return [d(frame.x), d(frame.y), d(frame.z)];
+  const { x, y, z } = frame;
+  return [x[0] * enu[0] + x[1] * enu[1] + x[2] * enu[2], y[0] * enu[0] + y[1] * enu[1] + y[2] * enu[2], z[0] * enu[0] + z[1] * enu[1] + z[2] * enu[2]];
 }

@@ -1,0 +1,37 @@
+import { describe, expect, test } from 'vitest';
+import { checkDial, layoutDial, parseSpec } from '@umbrafab/geometry';
+import { checkTableText } from './checkTableText.ts';
+import { toCheckJson } from './toCheckJson.ts';
+import { toCheckSvg } from './toCheckSvg.ts';
+
+const layout = layoutDial(parseSpec({ site: { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' }, hours: { from: '09:00', to: '15:00', step: 60 } }));
+const clean = checkDial(layout, { everyDays: 30 });
+const tilted = checkDial(layout, { everyDays: 30, tiltErrorDeg: 3 });
+
+describe('check writers', () => {
+  test('check.json: rounded to 6 places, byte-stable, nulls kept for unlit days', () => {
+    const a = toCheckJson(clean);
+    expect(a).toBe(toCheckJson(checkDial(layout, { everyDays: 30 })));
+    const j = JSON.parse(a);
+    expect(j.marks.length).toBe(clean.marks.length);
+    expect(j.days.length).toBe(13);
+    expect(a.endsWith('}\n')).toBe(true);
+    expect(/\d\.\d{7,}/.test(a)).toBe(false);
+  });
+
+  test('check.svg: one polyline per reached mark, the tolerance band, byte-stable', () => {
+    const svg = toCheckSvg(tilted);
+    expect(svg).toBe(toCheckSvg(tilted));
+    expect(svg.match(/<path class="(am|pm|noon)"/g)?.length).toBe(tilted.marks.filter((m) => m.reachedDays > 0).length);
+    expect(svg).toMatch(/\+0\.05 mm tolerance/);
+    expect(svg).toMatch(/FAIL<\/text>/);
+  });
+
+  test('table: a row per mark, PASS when clean, one FAIL line per failing mark naming it and the day', () => {
+    const t = checkTableText(clean).split('\n');
+    expect(t.filter((l) => /^\d\d:\d\d (west|east)/.test(l)).length).toBe(clean.marks.length);
+    expect(t.at(-1)).toMatch(/^PASS/);
+    const f = checkTableText(tilted);
+    expect(f.match(/^FAIL: mark \d\d:\d\d (west|east): shadow [+-]\d+\.\d{3} mm \([+-]\d+\.\d s\) off the line on 2027-\d\d-\d\d/gm)?.length).toBe(tilted.failures.length);
+  });
+});
