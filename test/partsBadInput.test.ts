@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { stringify } from 'yaml';
 import { describe, expect, it } from 'vitest';
+import { parseSpec } from '../packages/geometry/src/index.ts';
 import { runCli } from './helpers/runCli.ts';
 
 const good = {
@@ -28,7 +29,7 @@ const cases: { name: string; spec: unknown; field: string; message: RegExp }[] =
   { name: 'a wedge that cannot be printed (seat vertical at 89.5°)', spec: patched({ 'site.latitude': 89.5 }), field: 'site.latitude', message: /\|latitude\| must be at most 89° for a printable wedge/ },
   { name: 'a wedge base too thin for its countersinks', spec: patched({ 'parts.wedge.base': 2 }), field: 'parts.wedge.countersink', message: /straight bore/ },
   { name: 'wedge holes that do not fit a narrow wedge', spec: patched({ 'hours.from': '09:00', 'hours.to': '15:00', 'parts.wedge.holes': 6, 'parts.wedge.countersink': 60, 'parts.wedge.holeDiameter': 30, 'parts.wedge.base': 40 }), field: 'parts.wedge.holes', message: /do not fit across/ },
-  { name: 'a cut gnomon thicker than the sheet', spec: patched({ 'process.method': 'laser', 'plate.thickness': 3, 'gnomon.thickness': 6 }), field: 'gnomon.thickness', message: /gnomon.thickness 6 mm contradicts plate.thickness 3 mm.*parts.gnomonFrom/ },
+  { name: 'a cut gnomon thicker than the sheet', spec: patched({ 'process.method': 'laser', 'parts.gnomonFrom': 'sheet', 'plate.thickness': 3, 'gnomon.thickness': 6 }), field: 'gnomon.thickness', message: /gnomon.thickness 6 mm contradicts plate.thickness 3 mm.*parts.gnomonFrom/ },
   { name: 'a sheet gnomon on a printed dial', spec: patched({ 'parts.gnomonFrom': 'sheet' }), field: 'parts.gnomonFrom', message: /allowed: "separate" with process.method "print"/ },
   { name: 'an unknown part file', spec: patched({ 'parts.write': ['gnomon.stl', 'base.stl'] }), field: 'parts.write', message: /got \["gnomon.stl","base.stl"\]; allowed: "auto" or a list of "gnomon.stl", "gnomon.dxf", "wedge.stl", "body.stl"/ },
   { name: 'a part file listed twice', spec: patched({ 'parts.write': ['wedge.stl', 'wedge.stl'] }), field: 'parts.write', message: /at most once/ },
@@ -36,6 +37,22 @@ const cases: { name: string; spec: unknown; field: string; message: RegExp }[] =
   { name: 'a nodus notch bigger than the style', spec: patched({ 'parts.nodus': true, 'parts.nodusSize': 50, 'gnomon.height': 20 }), field: 'parts.nodusSize', message: /notch that fits the style/ },
   { name: 'a misspelt parts field', spec: patched({ 'parts.bodyWedgee': true }), field: 'parts.bodyWedgee', message: /did you mean parts.bodyWedge\?/ },
 ];
+
+describe('gnomon stock rule (parts.gnomonFrom)', () => {
+  const laser = { site: good.site, process: { method: 'laser' } };
+  it('cut processes take t = plate.thickness by default', () => {
+    const s = parseSpec({ ...laser, plate: { thickness: 6 } });
+    expect([s.parts.gnomonFrom, s.gnomon.thickness]).toEqual(['sheet', 6]);
+    expect(parseSpec({ ...laser, plate: { thickness: 6 }, gnomon: { thickness: 6 } }).parts.gnomonFrom).toBe('sheet');
+  });
+  it('an explicit different gnomon.thickness without parts.gnomonFrom means a separate gnomon', () => {
+    const s = parseSpec({ ...laser, plate: { thickness: 3 }, gnomon: { thickness: 6 } });
+    expect([s.parts.gnomonFrom, s.gnomon.thickness]).toEqual(['separate', 6]);
+  });
+  it('print makes the gnomon separately', () => {
+    expect(parseSpec({ site: good.site, process: { method: 'print' }, gnomon: { thickness: 5 } }).parts.gnomonFrom).toBe('separate');
+  });
+});
 
 describe('umbrafab build: bad parts input gets exit 1 and an error naming the field', () => {
   it.each(cases)('$name → $field', async (c) => {

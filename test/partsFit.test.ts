@@ -49,7 +49,7 @@ describe('closed-form volumes (prism V = A·t, right prism: base area times leng
     ['print south', readSpecFile(join(ROOT, 'fixtures/specs/parts-south.yaml'))],
   ] as const).map(([name, spec]) => ({ name, spec }));
 
-  it.each(specs)('$name: gnomon volume = t · (L·h + Σ tab length · depth − notch s²/4) within 0.1 %%', ({ name: _n, spec }) => {
+  it.each(specs)('$name: gnomon volume = t · (L·h + Σ tab length · depth − notch s²/4) within 0.1 per cent', ({ name: _n, spec }) => {
     const layout = layoutDial(spec);
     const plan = partsPlan(layout);
     const g = layout.gnomon;
@@ -64,7 +64,7 @@ describe('closed-form volumes (prism V = A·t, right prism: base area times leng
     console.log(`${_n}: gnomon ${v.toFixed(3)} mm³, closed form ${expected.toFixed(3)} mm³`);
   });
 
-  it.each(specs)('$name: wedge volume = section area · width − holes − arrow within 0.1 %%', ({ name: _n, spec }) => {
+  it.each(specs)('$name: wedge volume = section area · width − holes − arrow within 0.1 per cent', ({ name: _n, spec }) => {
     const layout = layoutDial(spec);
     const plan = partsPlan(layout);
     const w = plan.wedge;

@@ -80,11 +80,15 @@ const CUT_METHODS: readonly string[] = ['laser', 'waterjet', 'router'];
 /**
  * Normalise the gnomon's stock (DESIGN §2: "when the gnomon is cut from the
  * plate's own sheet stock, t is the material thickness"). Rule:
- * `parts.gnomonFrom` defaults to "sheet" for laser, waterjet and router and
- * to "separate" for print. With "sheet", gnomon.thickness becomes
- * plate.thickness; a gnomon.thickness written in the spec that differs is an
- * error naming both fields. "sheet" with process.method print is an error
- * (a printed plate has no sheet to cut from).
+ * - `parts.gnomonFrom: sheet` (explicit): gnomon.thickness becomes
+ *   plate.thickness; a gnomon.thickness written in the spec that differs is
+ *   an error naming both fields; with process.method print it is an error
+ *   (a printed plate has no sheet to cut the gnomon from).
+ * - `parts.gnomonFrom: separate` (explicit): gnomon.thickness as given.
+ * - not given: "sheet" for laser, waterjet and router, and "separate" for
+ *   print; except that a cut-process spec which writes its own
+ *   gnomon.thickness, different from plate.thickness, keeps it and gets
+ *   "separate" (the gnomon comes from other stock; report.json says so).
  *
  * @param s the spec after zod (defaults filled in)
  * @param raw the spec as written, to tell an explicit gnomon.thickness from the default
@@ -93,19 +97,20 @@ export function normaliseGnomonStock<
   S extends { readonly gnomon: { readonly thickness: number }; readonly plate: { readonly thickness: number }; readonly process: { readonly method: string }; readonly parts: PartsSpec },
 >(s: S, raw: unknown): { gnomon: S['gnomon']; parts: PartsSpec & { readonly gnomonFrom: GnomonSource } } {
   const method = s.process.method;
-  const from: GnomonSource = s.parts.gnomonFrom ?? (CUT_METHODS.includes(method) ? 'sheet' : 'separate');
+  const given = (raw as { gnomon?: { thickness?: unknown } } | null)?.gnomon?.thickness;
+  const sheet = s.plate.thickness;
+  const contradicts = given !== undefined && given !== sheet;
+  const from: GnomonSource = s.parts.gnomonFrom ?? (CUT_METHODS.includes(method) && !contradicts ? 'sheet' : 'separate');
   const parts = { ...s.parts, gnomonFrom: from };
   if (from === 'separate') return { gnomon: s.gnomon, parts };
   if (!CUT_METHODS.includes(method)) {
     throw new SpecError('parts.gnomonFrom', 'sheet', `allowed: "separate" with process.method ${JSON.stringify(method)} (only laser, waterjet and router cut the gnomon from the plate's sheet)`);
   }
-  const given = (raw as { gnomon?: { thickness?: unknown } } | null)?.gnomon?.thickness;
-  const sheet = s.plate.thickness;
-  if (given !== undefined && given !== sheet) {
+  if (contradicts) {
     throw new SpecError(
       'gnomon.thickness',
       given,
-      `allowed: ${sheet} mm (= plate.thickness) when the gnomon is cut from the sheet (parts.gnomonFrom "sheet"${s.parts.gnomonFrom === undefined ? `, the default for ${method}` : ''}); or omit gnomon.thickness, or set parts.gnomonFrom: separate`,
+      `allowed: ${sheet} mm (= plate.thickness) when the gnomon is cut from the sheet (parts.gnomonFrom "sheet"); or omit gnomon.thickness, or set parts.gnomonFrom: separate`,
       `gnomon.thickness ${formatValue(given)} mm contradicts plate.thickness ${sheet} mm`,
     );
   }
