@@ -166,7 +166,7 @@ describe('serve: requests', () => {
       writeFileSync(bad, JSON.stringify(rawSpec));
       const cli = await runCli(['build', bad, '--out', join(dir, 'never')]);
       expect(cli.code).toBe(1);
-      const r = await postJson(server, '/api/build', { fields: { ...values, [key]: value } });
+      const r = await postJson(server, '/api/view', { fields: { ...values, [key]: value } });
       expect(r.status).toBe(422);
       expect(r.json.error.field).toBe(field);
       expect(`umbrafab: ${r.json.error.message}`).toBe(cli.err);
@@ -174,13 +174,14 @@ describe('serve: requests', () => {
   });
 
   it('serves every output file byte for byte as buildFiles and `umbrafab build` write them', async () => {
-    const r = await postJson(server, '/api/build', { fields: values });
+    const r = await postJson(server, '/api/view', { fields: values });
     expect(r.status).toBe(200);
+    const list = (await (await fetch(server.url + r.json.filesUrl.slice(1))).json()) as any;
     const direct = await buildFiles(readSpecFile(DEMO));
     const out = join(dir, 'cli-out');
     expect((await runCli(['build', DEMO, '--out', out])).code).toBe(0);
-    expect(r.json.files.map((f: any) => f.name)).toEqual(direct.files.map((f) => f.name));
-    for (const f of r.json.files) {
+    expect(list.files.map((f: any) => f.name)).toEqual(direct.files.map((f) => f.name));
+    for (const f of list.files) {
       const res = await fetch(server.url + f.url.slice(1));
       expect(res.status, f.name).toBe(200);
       expect(res.headers.get('content-disposition')).toBe(`attachment; filename="${f.name}"`);
@@ -193,7 +194,7 @@ describe('serve: requests', () => {
 
   it('refuses a body over the limit with 413, whether announced or streamed', async () => {
     const big = Buffer.alloc(MAX_BODY_BYTES + 1, 0x20);
-    const announced = await raw(server, { method: 'POST', path: '/api/build', headers: { 'Content-Type': 'application/json', 'Content-Length': String(big.length) }, body: big });
+    const announced = await raw(server, { method: 'POST', path: '/api/view', headers: { 'Content-Type': 'application/json', 'Content-Length': String(big.length) }, body: big });
     expect(announced.status).toBe(413);
     expect(JSON.parse(announced.body.toString()).error.message).toMatch(/allowed: at most 262144 bytes/);
     const streamed = await raw(server, {
@@ -216,7 +217,8 @@ describe('serve: requests', () => {
   });
 
   it('never reads a path from a request: traversal attempts are 404 and leak nothing', async () => {
-    const id = (await postJson(server, '/api/build', { fields: values })).json.id;
+    const id = (await postJson(server, '/api/view', { fields: values })).json.id;
+    expect((await raw(server, { path: `/api/files/${id}/plate.dxf` })).status).toBe(200);
     const secret = readFileSync(join(ROOT, 'package.json'), 'utf8');
     for (const path of [
       '/../package.json',
@@ -258,9 +260,10 @@ describe('serve: requests', () => {
   it('writes no file while building, drawing the sun and downloading', async () => {
     const before = snapshot(dir);
     const parentBefore = readdirSync(join(dir, '..')).filter((n) => n.startsWith('umbrafab-serve-')).length;
-    const b = await postJson(server, '/api/build', { fields: { ...values, 'gnomon.height': 44 } });
+    const b = await postJson(server, '/api/view', { fields: { ...values, 'gnomon.height': 44 } });
     await postJson(server, '/api/sun', { fields: values, date: '2027-06-21', time: '10:00', kind: 'clock' });
-    await fetch(server.url + b.json.files[0].url.slice(1));
+    const list = (await (await fetch(server.url + b.json.filesUrl.slice(1))).json()) as any;
+    for (const f of list.files) expect((await fetch(server.url + f.url.slice(1))).status).toBe(200);
     expect(snapshot(dir)).toEqual(before);
     expect(readdirSync(join(dir, '..')).filter((n) => n.startsWith('umbrafab-serve-')).length).toBe(parentBefore);
     expect(existsSync(join(ROOT, 'out', 'dial'))).toBe(false);
@@ -314,7 +317,7 @@ describe('serve: the sun through the geometry package', () => {
     expect(sun.state).toBe('lit');
     expect(sun.hourAngleDeg).toBeCloseTo(45, 6);
     expect(Math.abs(sun.declinationDeg)).toBeLessThan(0.4);
-    const b = await postJson(server, '/api/build', { fields: values });
+    const b = await postJson(server, '/api/view', { fields: values });
     const mark = b.json.summary.find((s: any) => s.key === 'mark15');
     // The 45° check (common practice, DESIGN §2): at |H| = 45° the line lies one gnomon height from its style edge.
     expect(mark.value).toMatch(/^51\.5 mm/);

@@ -1,7 +1,7 @@
 import { layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec } from '@umbrafab/geometry';
 import { toReportJson } from '@umbrafab/fabricate';
 import { PRODUCERS } from './outputs/index.ts';
-import { utf8 } from './outputs/outputTypes.ts';
+import { utf8, type BuildContext } from './outputs/outputTypes.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
 /** Everything one build produces, in memory (no I/O): the CLI writes it, other front ends serve it. */
@@ -18,11 +18,8 @@ export const GENERATOR = 'umbrafab 0.1.0';
  * report.json. The same spec always gives byte-identical files (no clock, no
  * randomness, fixed rounding).
  */
-export async function buildFiles(spec: DialSpec): Promise<BuildResult> {
-  const layout = layoutDial(spec);
-  const extras = timeFaceExtras(layout); // date lines, mean-time curves, engraved equation of time (issue 5)
-  const drawing = plateDrawing(layout, extras.lines, extras.text);
-  const ctx = { spec, layout, drawing };
+export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContext(spec)): Promise<BuildResult> {
+  const { layout } = ctx;
   const files: OutputFile[] = [];
   const sections: Record<string, unknown> = {};
   for (const produce of PRODUCERS) {
@@ -39,6 +36,14 @@ export async function buildFiles(spec: DialSpec): Promise<BuildResult> {
   const report = { generator: GENERATOR, spec, ...sections, notes: layout.notes, files: names };
   files.push({ name: 'report.json', bytes: utf8(toReportJson(report)) });
   return { layout, files, report };
+}
+
+/** The geometry every producer reads, computed once per spec (the local page draws its views from it before the full build). */
+export function buildContext(spec: DialSpec): BuildContext {
+  const layout = layoutDial(spec);
+  const extras = timeFaceExtras(layout); // date lines, mean-time curves, engraved equation of time (issue 5)
+  const drawing = plateDrawing(layout, extras.lines, extras.text);
+  return { spec, layout, drawing };
 }
 
 function isPlainObject(v: unknown): v is Record<string, unknown> {

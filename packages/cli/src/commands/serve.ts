@@ -22,17 +22,19 @@ export const serveCommand: CommandModule = {
       if (code === 'EADDRNOTAVAIL' || code === 'ENOTFOUND') throw new UsageError(`--host: ${args.host} is not an address of this machine`);
       throw e;
     }
-    if (server.warning) io.err(`umbrafab: ${server.warning}`);
-    io.out(`umbrafab: the dial page is at ${server.url} (Ctrl-C to stop)${args.spec ? `; "save spec" writes ${args.spec}` : ''}`);
-    await new Promise<void>((done) => {
+    const running = server;
+    const stopped = new Promise<void>((done) => {
       const stop = () => {
         process.off('SIGINT', stop);
         process.off('SIGTERM', stop);
-        void server.close().then(done);
+        void running.close().then(done);
       };
       process.on('SIGINT', stop);
       process.on('SIGTERM', stop);
     });
+    if (server.warning) io.err(`umbrafab: ${server.warning}`);
+    io.out(`umbrafab: the dial page is at ${server.url} (Ctrl-C to stop)${args.spec ? `; "save spec" writes ${args.spec}` : ''}`);
+    await stopped;
     return 0;
   },
 };

@@ -1,25 +1,36 @@
 import { createHash } from 'node:crypto';
 import type { DialSpec } from '@umbrafab/geometry';
-import { buildFiles, type BuildResult } from '../buildFiles.ts';
+import { buildContext } from '../buildFiles.ts';
+import type { BuildContext } from '../outputs/outputTypes.ts';
+import { plateOutputs } from '../outputs/plateOutputs.ts';
+import type { OutputFile } from '../writeFilesAtomic.ts';
+import type { FullBuilder } from './fullBuilder.ts';
 
-/** One build kept in memory so its files can be downloaded by name. */
+/** One spec the page has shown, kept in memory: its geometry, its face SVG, and (on demand) every file of the build. */
 export interface CachedBuild {
   /** short content id: the same validated spec always gets the same id */
   readonly id: string;
   readonly spec: DialSpec;
-  readonly result: BuildResult;
+  /** the layout and plate drawing every producer reads (buildContext) */
+  readonly ctx: BuildContext;
+  /** preview.svg exactly as `umbrafab build` writes it (the plate producer on the same context) */
+  readonly previewSvg: string;
+  /** every file of `umbrafab build` for this spec (buildFiles, in the builder's worker), built once on first call */
+  readonly full: () => Promise<readonly OutputFile[]>;
 }
 
 /**
- * A small in-memory store of recent builds, newest last, at most `size`.
- * Downloads are looked up here by id and exact file name: nothing is read
- * from or written to disk, so a name from the page can never reach a path.
+ * A small in-memory store of recent specs, newest last, at most `size`.
+ * The views (layout, face SVG) are computed at once; the full build, which
+ * takes about a second with every picture and program, only when the page
+ * asks for the file list or a file. Downloads are looked up here by id and
+ * exact file name: nothing is read from or written to disk, so a name from
+ * the page can never reach a path.
  */
-export function buildCache(size = 12) {
+export function buildCache(builder: FullBuilder, size = 12) {
   const builds = new Map<string, CachedBuild>();
   return {
-    /** Build (or reuse) the files for a validated spec with the CLI's `buildFiles`. */
-    async build(spec: DialSpec): Promise<CachedBuild> {
+    async views(spec: DialSpec): Promise<CachedBuild> {
       const id = specId(spec);
       const hit = builds.get(id);
       if (hit) {
@@ -27,8 +38,18 @@ export function buildCache(size = 12) {
         builds.set(id, hit);
         return hit;
       }
-      const result = await buildFiles(spec);
-      const entry: CachedBuild = { id, spec, result };
+      builder.warm();
+      const ctx = buildContext(spec);
+      const plate = await plateOutputs(ctx);
+      const svg = plate.files.find((f) => f.name === 'preview.svg');
+      let full: Promise<readonly OutputFile[]> | undefined;
+      const entry: CachedBuild = {
+        id,
+        spec,
+        ctx,
+        previewSvg: svg ? new TextDecoder().decode(svg.bytes) : '',
+        full: () => (full ??= builder.build(spec)),
+      };
       builds.set(id, entry);
       while (builds.size > size) builds.delete(builds.keys().next().value as string);
       return entry;

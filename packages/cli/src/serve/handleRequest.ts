@@ -56,8 +56,10 @@ let pageCsp: string | undefined;
  * Serve one request. Routes (nothing else exists; any other URL is 404):
  * - GET the page's files and three.js from a fixed table (STATIC_ASSETS);
  * - GET  /api/setup: the form's fields (from the spec schema), its first values, the save target;
- * - POST /api/build {fields}: validate with parseSpec and build with buildFiles (422 with the CLI's message when invalid);
- * - GET  /api/files/<build id>/<name>: one file of a recent build, its bytes exactly;
+ * - POST /api/view {fields}: validate with parseSpec (422 with the CLI's message when invalid) and return the views:
+ *   preview.svg as the build writes it, the numbers, the placed parts for 3D;
+ * - GET  /api/files/<id>: the full build's file list (buildFiles, run once per spec on first request);
+ * - GET  /api/files/<id>/<name>: one file of that build, its bytes exactly;
  * - POST /api/sun {fields, date, time, kind}: the sun and the gnomon's shadow;
  * - POST /api/save {fields}: write the spec as commented YAML to the spec file given on the command line.
  */
@@ -71,13 +73,13 @@ export async function handleRequest(ctx: ServeContext, req: IncomingMessage, res
       const asset = STATIC_ASSETS[path];
       if (asset) return send(res, 200, asset.type, readFileSync(asset.file), path === '/' ? { 'Content-Security-Policy': csp(asset.file) } : {});
       if (path === '/api/setup') return sendJson(res, 200, setup(ctx));
-      if (path.startsWith('/api/files/')) return sendBuildFile(ctx, res, path);
+      if (path.startsWith('/api/files/')) return await sendBuildFile(ctx, res, path);
       throw new HttpError(404, `${path}: no such page or file`);
     }
     if (method !== 'POST') throw new HttpError(405, `${method}: allowed: GET or POST`);
     checkOrigin(req);
     const body = await readJsonBody(req, ctx.maxBodyBytes ?? MAX_BODY_BYTES);
-    if (path === '/api/build') return sendJson(res, 200, await build(ctx, body));
+    if (path === '/api/view') return sendJson(res, 200, await view(ctx, body));
     if (path === '/api/sun') return sendJson(res, 200, await sun(ctx, body));
     if (path === '/api/save') return sendJson(res, 200, save(ctx, body));
     throw new HttpError(404, `${path}: no such action`);
@@ -141,31 +143,37 @@ function specFrom(fields: Record<string, FormValue>): DialSpec {
   return parseSpec(formValuesToSpec(fields));
 }
 
-async function build(ctx: ServeContext, body: unknown) {
+async function view(ctx: ServeContext, body: unknown) {
   const spec = specFrom(fieldsOf(body, ['fields']));
-  const b = await ctx.builds.build(spec);
-  const { layout, files } = b.result;
-  const svgFile = files.find((f) => f.name === 'preview.svg');
-  const svg = svgFile ? new TextDecoder().decode(svgFile.bytes) : '';
+  const b = await ctx.builds.views(spec);
+  const { layout } = b.ctx;
   return {
     ok: true,
     id: b.id,
-    svg,
-    frame: previewFrame(svg, layout.plate.widthMm, layout.plate.lengthMm),
-    files: files.map((f) => ({ name: f.name, bytes: f.bytes.length, url: `/api/files/${b.id}/${encodeURIComponent(f.name)}` })),
-    summary: summaryRows(b.result),
+    svg: b.previewSvg,
+    frame: previewFrame(b.previewSvg, layout.plate.widthMm, layout.plate.lengthMm),
+    summary: summaryRows(layout),
     notes: layout.notes,
     scene: sceneMeshes(layout),
+    filesUrl: `/api/files/${b.id}`,
   };
+}
+
+async function fileList(ctx: ServeContext, id: string) {
+  const b = ctx.builds.get(id);
+  if (!b) throw new HttpError(404, `build ${id}: not a recent build (change a field to build again)`);
+  const files = await b.full();
+  return { ok: true, id, files: files.map((f) => ({ name: f.name, bytes: f.bytes.length, url: `/api/files/${id}/${encodeURIComponent(f.name)}` })) };
 }
 
 async function sun(ctx: ServeContext, body: unknown) {
   const fields = fieldsOf(body, ['fields', 'date', 'time', 'kind']);
   const q = body as SunQuery;
-  const b = await ctx.builds.build(specFrom(fields));
-  const view = sunView(b.result.layout, { date: q.date, time: q.time, kind: q.kind });
-  const frame = previewFrame(new TextDecoder().decode(b.result.files.find((f) => f.name === 'preview.svg')?.bytes ?? new Uint8Array()), b.result.layout.plate.widthMm, b.result.layout.plate.lengthMm);
-  const { plate } = b.result.layout;
+  const b = await ctx.builds.views(specFrom(fields));
+  const { layout } = b.ctx;
+  const view = sunView(layout, { date: q.date, time: q.time, kind: q.kind });
+  const frame = previewFrame(b.previewSvg, layout.plate.widthMm, layout.plate.lengthMm);
+  const { plate } = layout;
   const shadowPreview = view.shadowFace.map((poly) => poly.map(([x, y]) => plateToPreview(frame, [x + plate.substyleX, y + plate.faceOriginY])));
   return { ok: true, id: b.id, sun: view, shadowPreview };
 }
@@ -181,7 +189,9 @@ function save(ctx: ServeContext, body: unknown) {
   return { ok: true, file: ctx.specLabel, bytes: Buffer.byteLength(text) };
 }
 
-function sendBuildFile(ctx: ServeContext, res: ServerResponse, path: string): void {
+async function sendBuildFile(ctx: ServeContext, res: ServerResponse, path: string): Promise<void> {
+  const list = /^\/api\/files\/([0-9a-f]{16})$/.exec(path);
+  if (list) return sendJson(res, 200, await fileList(ctx, list[1]));
   const m = /^\/api\/files\/([0-9a-f]{16})\/([^/]+)$/.exec(path);
   let name = '';
   try {
@@ -189,7 +199,8 @@ function sendBuildFile(ctx: ServeContext, res: ServerResponse, path: string): vo
   } catch {
     /* bad escape: not found */
   }
-  const file = m ? ctx.builds.get(m[1])?.result.files.find((f) => f.name === name) : undefined;
+  const b = m ? ctx.builds.get(m[1]) : undefined;
+  const file = b ? (await b.full()).find((f) => f.name === name) : undefined;
   if (!file) throw new HttpError(404, `${path}: no such file in a recent build (build again and download from the list)`);
   const ext = file.name.split('.').pop() ?? '';
   send(res, 200, FILE_TYPES[ext] ?? 'application/octet-stream', file.bytes, { 'Content-Disposition': `attachment; filename="${file.name.replace(/[^\w.-]/g, '_')}"` });

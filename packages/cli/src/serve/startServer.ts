@@ -7,6 +7,7 @@ import { parseSpecText } from '../readSpec.ts';
 import { starterSpecYaml } from '../starterSpec.ts';
 import { bindPolicy } from './bindPolicy.ts';
 import { buildCache } from './buildCache.ts';
+import { fullBuilder } from './fullBuilder.ts';
 import { handleRequest } from './handleRequest.ts';
 import { MAX_BODY_BYTES } from './readJsonBody.ts';
 import { specFields } from './specFields.ts';
@@ -65,8 +66,9 @@ export async function startServer(options: ServeOptions = {}): Promise<RunningSe
   } else initialSpec = starter();
 
   let server: Server | undefined;
+  const builder = fullBuilder();
   const ctx = {
-    builds: buildCache(),
+    builds: buildCache(builder),
     specPath,
     specLabel: options.specPath ?? null,
     initialSpec,
@@ -97,7 +99,7 @@ export async function startServer(options: ServeOptions = {}): Promise<RunningSe
     close: () =>
       new Promise<void>((ok) => {
         srv.closeAllConnections();
-        srv.close(() => ok());
+        srv.close(() => void builder.close().then(ok));
       }),
   };
 }

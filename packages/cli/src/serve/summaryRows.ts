@@ -1,4 +1,4 @@
-import type { BuildResult } from '../buildFiles.ts';
+import type { DialLayout } from '@umbrafab/geometry';
 
 /** One line of the page's numbers panel: already formatted, nothing left to compute in the browser. */
 export interface SummaryRow {
@@ -12,10 +12,9 @@ const mm = (v: number) => `${Number(v.toFixed(2))} mm`;
 /**
  * The key numbers of a build, read from its layout (the same values
  * report.json carries): plate size, gnomon, tilt, the 45° check line, time
- * correction, counts.
+ * correction, mark count.
  */
-export function summaryRows(result: BuildResult): SummaryRow[] {
-  const { layout, files } = result;
+export function summaryRows(layout: DialLayout): SummaryRow[] {
   const { plate, gnomon, time, spec } = layout;
   const at = (label: string) => layout.marks.filter((m) => m.label === label);
   const rows: SummaryRow[] = [
@@ -35,7 +34,6 @@ export function summaryRows(result: BuildResult): SummaryRow[] {
     { key: 'meridian', label: 'standard meridian', value: `${time.standardMeridianDeg}°` },
     { key: 'longitudeCorrection', label: 'longitude correction', value: `${Number(time.longitudeCorrectionMin.toFixed(2))} min` },
     { key: 'cut', label: 'process', value: `${spec.process.method}, kerf ${spec.process.kerf} mm` },
-    { key: 'files', label: 'files', value: `${files.length} (${(files.reduce((s, f) => s + f.bytes.length, 0) / 1024).toFixed(1)} KiB)` },
   );
   return rows;
 }

@@ -200,7 +200,12 @@ function showFieldError(error) {
 async function rebuild() {
   const seq = ++state.seq;
   setStatus('building…', 'busy');
-  const r = await post('/api/build', { fields: state.values });
+  const t = { start: performance.now() };
+  // The views and the sun for the same spec, asked for together.
+  const sunSeq = ++state.sunSeq;
+  const sunAnswer = post('/api/sun', { fields: state.values, ...sunQuery() });
+  const r = await post('/api/view', { fields: state.values });
+  t.view = performance.now();
   if (seq !== state.seq) return;
   probe.builds++;
   if (!r.ok) {
@@ -215,14 +220,42 @@ async function rebuild() {
   probe.lastError = null;
   showFieldError(null);
   state.build = r;
+  document.body.dataset.view = r.id;
   $('face').classList.remove('stale');
   $('model').classList.remove('stale');
   drawFace(r);
   drawNumbers(r);
-  drawFiles(r);
+  t.face = performance.now();
   drawModel(r);
-  await refreshSun();
-  setStatus(`built ${r.files.length} files`, 'good');
+  t.model = performance.now();
+  await showSun(await sunAnswer, sunSeq);
+  t.sun = performance.now();
+  probe.timings = { waitMs: state.changeAt === null ? 0 : t.start - state.changeAt, viewRequestMs: t.view - t.start, faceMs: t.face - t.view, modelMs: t.model - t.face, sunMs: t.sun - t.model };
+  state.sunDrawnAt = t.sun;
+  if (seq !== state.seq) return;
+  setStatus('views up to date', 'good');
+  // The full build (every file, about a second) once the fields are still for a moment.
+  $('files').textContent = '';
+  $('files-state').textContent = 'building the files…';
+  clearTimeout(state.filesTimer);
+  state.filesTimer = setTimeout(() => loadFiles(r.filesUrl, seq), 800);
+}
+
+async function loadFiles(url, seq) {
+  const res = await fetch(url);
+  const r = await res.json().catch(() => ({ ok: false, error: { message: `${res.status} ${res.statusText}` } }));
+  if (seq !== state.seq) return;
+  if (!r.ok) {
+    $('files-state').textContent = '';
+    showFieldError(r.error);
+    setStatus('the full build failed (see the form)', 'bad');
+    return;
+  }
+  drawFiles(r);
+  const total = r.files.reduce((s, f) => s + f.bytes, 0);
+  $('files-state').textContent = `${r.files.length} files, ${(total / 1024).toFixed(1)} KiB`;
+  probe.filesReady = r.id;
+  document.body.dataset.files = r.id;
 }
 
 function finishRedraw() {
@@ -231,6 +264,7 @@ function finishRedraw() {
     requestAnimationFrame(() => {
       if (state.changeAt !== null) {
         probe.lastRedrawMs = performance.now() - state.changeAt;
+        if (probe.timings) probe.timings.paintMs = performance.now() - (state.sunDrawnAt ?? performance.now());
         state.changeAt = null;
       }
       probe.redraws++;
@@ -327,7 +361,10 @@ function sunQuery() {
 async function refreshSun() {
   if (!state.build) return;
   const seq = ++state.sunSeq;
-  const r = await post('/api/sun', { fields: state.values, ...sunQuery() });
+  await showSun(await post('/api/sun', { fields: state.values, ...sunQuery() }), seq);
+}
+
+async function showSun(r, seq) {
   if (seq !== state.sunSeq) return;
   probe.suns++;
   if (!r.ok) {
@@ -338,6 +375,7 @@ async function refreshSun() {
     return;
   }
   state.sun = r;
+  probe.sun = r.sun;
   drawShadow(r.shadowPreview);
   drawSun3d(r.sun);
   drawSunNumbers(r.sun);
@@ -458,8 +496,14 @@ function resizeModel() {
   render();
 }
 
+/** Draw the 3D view on the next frame (several changes in one frame cost one render: WebGL may run on the CPU). */
 function render() {
-  if (view.renderer) view.renderer.render(view.scene, view.camera);
+  if (!view.renderer || view.pending) return;
+  view.pending = true;
+  requestAnimationFrame(() => {
+    view.pending = false;
+    view.renderer.render(view.scene, view.camera);
+  });
 }
 
 const PART_LOOK = {
@@ -529,7 +573,7 @@ function faceTexture(r, plane) {
   const url = URL.createObjectURL(new Blob([r.svg], { type: 'image/svg+xml' }));
   img.onload = () => {
     const fr = r.frame;
-    const scale = Math.min(8, 2048 / fr.viewWidthMm);
+    const scale = Math.min(6, 1200 / fr.viewWidthMm);
     const c = document.createElement('canvas');
     c.width = Math.round(fr.plateWidthMm * scale);
     c.height = Math.round(fr.plateLengthMm * scale);
