@@ -5,7 +5,7 @@ import { buildFiles } from '../packages/cli/src/buildFiles.ts';
 
 // geomagnetism is a dependency of packages/geometry (not of the root): resolve it from there.
 const requireFromGeometry = createRequire(new URL('../packages/geometry/package.json', import.meta.url));
-const geomagnetism = requireFromGeometry('geomagnetism') as typeof import('geomagnetism').default;
+const geomagnetism = requireFromGeometry('geomagnetism') as { model(date: Date): { point(latLon: [number, number]): { decl: number } } };
 
 const sites = [
   { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' },

@@ -5,7 +5,8 @@ import { buildFiles } from '../packages/cli/src/buildFiles.ts';
 
 // astronomy-engine is a dependency of packages/geometry (not of the root): resolve it from there.
 const requireFromGeometry = createRequire(new URL('../packages/geometry/package.json', import.meta.url));
-const { Body, Observer, SearchHourAngle } = requireFromGeometry('astronomy-engine') as typeof import('astronomy-engine');
+type AstronomyEngine = typeof import('../packages/geometry/node_modules/astronomy-engine/astronomy.js');
+const { Body, Observer, SearchHourAngle } = requireFromGeometry('astronomy-engine') as AstronomyEngine;
 
 type Row = { date: string; clock: string; daylightSaving: boolean; utcOffsetHours: number };
 

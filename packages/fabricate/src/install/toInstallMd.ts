@@ -54,6 +54,7 @@ export function toInstallMd(sheet: InstallSheet): string {
   out.push('## 3. Fine alignment at local apparent noon', '');
   out.push('At the clock times below the Sun crosses the site\'s meridian: the shadow of a plumb line then falls exactly north–south. Align the style on it (or turn the dial until the shadow lies in the noon band). Clock times are local, with daylight saving when in force.', '');
   out.push('| date | local apparent noon | clock |', '|---|---|---|');
+  if (sheet.noon.length === 0) out.push('| – | no local apparent noon falls on these local dates (the site lies about 12 h from its zone\'s meridian) | – |');
   for (const r of sheet.noon) out.push(`| ${r.date} | ${r.clock} | ${utcOffset(r.utcOffsetHours)}${r.daylightSaving ? ' (summer time)' : ''} |`);
   out.push('');
 

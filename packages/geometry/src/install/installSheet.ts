@@ -1,4 +1,4 @@
-import { SpecError } from '../errors.ts';
+import { isSpecError, SpecError } from '../errors.ts';
 import { DEG } from '../guards.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import { describeDeclination } from '../sun/describeDeclination.ts';
@@ -84,7 +84,8 @@ export const INSTALL_CAUTIONS: readonly string[] = [
  *   `describeDeclination`;
  * - local apparent noon (`localApparentNoon`, clock time with daylight
  *   saving when in force) for each day of the `install.weeks` weeks from
- *   that date, to align the style on a plumb line's shadow;
+ *   that date, to align the style on a plumb line's shadow (a date on
+ *   which apparent noon falls outside the local day gets no row);
  * - per mark, the days of `calendar.year` on which the Sun reaches it:
  *   above the horizon at the mark's hour angle H (sin h = sin φ sin δ +
  *   cos φ cos δ cos H > 0, geometric, δ at 12:00 UT of each day) and in front
@@ -123,7 +124,14 @@ export function installSheet(layout: DialLayout): InstallSheet {
   const noon: NoonRow[] = [];
   for (let d = 0; d < 7 * spec.install.weeks; d++) {
     const local = formatIsoDate(startMs + d * MS_PER_DAY);
-    const n = localApparentNoon(site, local);
+    let n;
+    try {
+      n = localApparentNoon(site, local);
+    } catch (e) {
+      // Apparent noon falls outside this local date (a site about 12 h from its zone's meridian): no row.
+      if (isSpecError(e)) continue;
+      throw e;
+    }
     noon.push({ date: local, clock: n.clock, daylightSaving: n.daylightSaving, utcOffsetHours: offsetHoursAt(spec.site.timezone, n.utc.getTime()) });
   }
 
