@@ -13,7 +13,7 @@ const good = {
 };
 
 function patched(patch: Record<string, unknown>): unknown {
-  const copy = structuredClone(good) as Record<string, Record<string, unknown>>;
+  const copy = structuredClone(good) as unknown as Record<string, Record<string, unknown>>;
   for (const [path, value] of Object.entries(patch)) {
     const keys = path.split('.');
     let node: Record<string, unknown> = copy;

@@ -121,7 +121,7 @@ export function partsPlan(layout: DialLayout): PartsPlan {
   };
 
   return {
-    files: partFiles(parts.write, method, gnomonFrom, parts.body),
+    files: partFiles(parts.write, method, parts.body),
     gnomonFrom,
     elevatedPole: layout.hemisphere,
     tiltDeg: Math.abs(spec.site.latitude),
@@ -137,9 +137,10 @@ export function partsPlan(layout: DialLayout): PartsPlan {
 /** Fixed file order for "auto" and for explicit lists alike. */
 const ORDER: readonly PartFile[] = ['gnomon.stl', 'gnomon.dxf', 'wedge.stl', 'body.stl'];
 
-function partFiles(write: 'auto' | readonly PartFile[], method: string, from: GnomonSource, body: boolean): PartFile[] {
+function partFiles(write: 'auto' | readonly PartFile[], method: string, body: boolean): PartFile[] {
   if (write !== 'auto') return ORDER.filter((f) => write.includes(f));
-  const out: PartFile[] = [from === 'sheet' && method !== 'print' ? 'gnomon.dxf' : 'gnomon.stl', 'wedge.stl'];
+  // Cut processes cut the gnomon too (from the plate's sheet, or from other stock of its thickness).
+  const out: PartFile[] = [method === 'print' ? 'gnomon.stl' : 'gnomon.dxf', 'wedge.stl'];
   if (body) out.push('body.stl');
   return ORDER.filter((f) => out.includes(f));
 }

@@ -39,7 +39,7 @@ export const partsSection = z
       .refine((v) => v === 'auto' || new Set(v).size === v.length, { error: 'allowed: each file name at most once' })
       .default('auto')
       .describe(
-        'part files to write: "auto" (print: gnomon.stl + wedge.stl; laser, waterjet, router: gnomon.dxf + wedge.stl; body.stl too with parts.body) or a list of gnomon.stl, gnomon.dxf, wedge.stl, body.stl',
+        'part files to write: "auto" (print: gnomon.stl + wedge.stl; laser, waterjet, router: gnomon.dxf + wedge.stl; body.stl too with parts.body: true) or a list of gnomon.stl, gnomon.dxf, wedge.stl, body.stl',
       ),
     body: flag.default(false).describe('with write "auto", also write body.stl: the whole dial printed in one piece'),
     gnomonFrom: z
