@@ -1,6 +1,6 @@
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { layoutDial, plateDrawing, type PlateDrawing, type Vec2 } from '../packages/geometry/src/index.ts';
+import { layoutDial, plateDrawing, timeFaceExtras, type PlateDrawing, type Vec2 } from '../packages/geometry/src/index.ts';
 import { buildFiles } from '../packages/cli/src/buildFiles.ts';
 import { readSpecFile } from '../packages/cli/src/readSpec.ts';
 import { expectClose } from './helpers/closeTo.ts';
@@ -19,7 +19,7 @@ const CASES = [
   { name: 'demo with both programs (laser, aluminium, north)', file: 'fixtures/specs/engrave-demo-both.yaml', programs: ['engrave.ngc', 'engrave-laser.gcode'] },
   { name: 'router on brass, 60 deg V-bit (auto: ngc)', file: 'fixtures/specs/engrave-router-brass.yaml', programs: ['engrave.ngc'] },
   { name: 'waterjet, steel, southern hemisphere (auto: ngc as the second step)', file: 'fixtures/specs/engrave-waterjet-south.yaml', programs: ['engrave.ngc'] },
-  { name: 'laser, plywood, southern hemisphere, both', file: 'fixtures/specs/engrave-laser-south.yaml', programs: ['engrave.ngc', 'engrave-laser.gcode'] },
+  { name: 'laser, plywood, southern hemisphere, nodus with date lines, both', file: 'fixtures/specs/engrave-laser-south.yaml', programs: ['engrave.ngc', 'engrave-laser.gcode'] },
 ] as const;
 
 /** Every engraved path of the drawing (lines at their width, text strokes at the stroke width). */
@@ -117,7 +117,10 @@ const dedupe = (pts: readonly Vec2[]): Vec2[] =>
 
 describe.each(CASES)('umbrafab build engraving: $name', ({ file, programs }) => {
   const spec = readSpecFile(join(ROOT, file));
-  const drawing = plateDrawing(layoutDial(spec));
+  // The drawing as buildFiles makes it: the layout plus the time work's curves and labels.
+  const layout = layoutDial(spec);
+  const extras = timeFaceExtras(layout);
+  const drawing = plateDrawing(layout, extras.lines, extras.text);
   const paths = engravedPaths(drawing);
   // What is engraved: every path of the drawing, less its parts over holes and slots.
   const overMm = paths.map((p) => overThroughCutsMm(drawing, p.points, p.closed));
@@ -130,6 +133,17 @@ describe.each(CASES)('umbrafab build engraving: $name', ({ file, programs }) => 
     return new TextDecoder().decode(f!.bytes);
   };
   const engraving = async (): Promise<Record<string, any>> => (await built).report.engraving as Record<string, any>;
+
+  it('engraves every line of the drawing: marks, curves and text', async () => {
+    const ops = new Set(((await built).report.engraving as { programs: string[] }).programs.length > 0 ? ['marks', 'text', ...(drawing.lines.some((l) => l.kind === 'curve') ? ['curves'] : [])] : []);
+    const first = programs[0];
+    const comments = (await text(first)).split('\n').filter((l) => /^\((cut|stroke) \d+\//.test(l));
+    // One cut per path clear of holes and slots, at least one per path crossing them (its pieces).
+    const crossing = overMm.filter((v) => v > 0).length;
+    expect(comments.length).toBeGreaterThanOrEqual(paths.length);
+    expect(comments.length).toBeLessThanOrEqual(paths.length + 2 * crossing);
+    for (const op of ops) expect(comments.some((c) => c.includes(`: ${op} `)), op).toBe(true);
+  });
 
   it('writes exactly the programs engrave.programs asks for', async () => {
     const names = (await built).files.map((f) => f.name).filter((n) => n.startsWith('engrave'));

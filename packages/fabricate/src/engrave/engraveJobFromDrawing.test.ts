@@ -30,7 +30,7 @@ describe('engraveJobFromDrawing', () => {
       ['marks', 'hour 09:00 west', 0.8],
       ['marks', 'hour 12:00 west piece 1/2', 0.8],
       ['marks', 'hour 12:00 west piece 2/2', 0.8],
-      ['curves', 'curve solstice', 0.3],
+      ['curves', 'solstice', 0.3],
       ['text', 'numeral X stroke 1/2', 0.45],
       ['text', 'numeral X stroke 2/2', 0.45],
     ]);

@@ -16,7 +16,7 @@ export interface EngraveStockInput {
  * - every drawn line, each with its own width: the hour, half and quarter
  *   marks (operation 'marks', label e.g. 'hour 09:00 west') and any curve the
  *   drawing holds, such as date lines or mean-time curves (operation
- *   'curves', label 'curve …');
+ *   'curves', labelled as in the drawing, e.g. 'date line June solstice');
  * - every stroke of the numerals and of the title text (operation 'text',
  *   label 'numeral 10' / 'title Windlecombe Quay'), at the text's stroke width.
  *
@@ -34,11 +34,13 @@ export function engraveJobFromDrawing(drawing: PlateDrawing, stock: EngraveStock
   const clip = (path: Omit<EngravePath, 'points' | 'closed'>, points: EngravePath['points'], closed: boolean): EngravePath[] => {
     const r = clipToPlate(points, closed, drawing.holes, drawing.slots);
     if (!r.touched) return [{ ...path, points, closed }];
-    return r.pieces.map((piece, k) => ({ ...path, points: piece, closed: false, label: `${path.label} piece ${k + 1}/${r.pieces.length}` }));
+    const n = r.pieces.length;
+    return r.pieces.map((piece, k) => ({ ...path, points: piece, closed: false, label: n > 1 ? `${path.label} piece ${k + 1}/${n}` : path.label }));
   };
   const lines = drawing.lines.flatMap((line): EngravePath[] => {
     const operation: EngraveOperation = line.kind === 'curve' ? 'curves' : 'marks';
-    return clip({ widthMm: line.widthMm, operation, label: `${line.kind} ${line.label}` }, line.path.points, line.path.closed);
+    const label = line.kind === 'curve' ? line.label : `${line.kind} ${line.label}`;
+    return clip({ widthMm: line.widthMm, operation, label }, line.path.points, line.path.closed);
   });
   const text = drawing.text.flatMap((block) =>
     block.strokes.flatMap((stroke, i): EngravePath[] =>
