@@ -109,7 +109,7 @@ export const partsOutputs: Producer = async ({ spec, layout, drawing }) => {
   if (wedge !== null && plan.files.includes('wedge.stl')) {
     files.push({
       name: 'wedge.stl',
-      bytes: toStl(wedge.mesh, { header: stlHeader([`umbrafab wedge ${latText}, +y and arrow -> ${pole}`, `seat ${plan.wedge.seatWidthMm}x${plan.wedge.seatLengthMm} mm`, spec.name]) }),
+      bytes: toStl(wedge.mesh, { header: stlHeader([`umbrafab wedge ${latText}, arrow/+y to ${pole}, seat ${plan.wedge.seatWidthMm.toFixed(1)}x${plan.wedge.seatLengthMm.toFixed(1)} mm`, spec.name]) }),
     });
     parts.wedge = figures(wedge.mesh);
   }
