@@ -54,6 +54,11 @@ export interface Mark {
   readonly y0Mm: number;
   readonly y1Mm: number;
   readonly widthMm: number;
+  /**
+   * Set when the line lies inside the gnomon's footprint (the noon band of a
+   * solar-time dial is the fin itself): listed for the record, not engraved.
+   */
+  readonly underGnomon?: true;
 }
 
 /** Single-stroke text placed on the face: each stroke an open polyline in face coordinates. */

@@ -1,5 +1,5 @@
 import { defaultPictureDate, sunForPicture, viewAssembly } from '@umbrafab/geometry';
-import { svgWidthMm, templateTiles, toAssemblySvg, toPng, toTemplatePdf, CALIBRATION_BAR_MM } from '@umbrafab/fabricate';
+import { svgWidthMm, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM } from '@umbrafab/fabricate';
 import { plateOutputs } from './plateOutputs.ts';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
 
@@ -13,32 +13,38 @@ export const picturesOutputs: Producer = async (ctx) => {
   const { spec, layout, drawing } = ctx;
   const pics = spec.pictures;
   const ppm = pics.pxPerMm;
+  if (!pics.write && !spec.template.write) return { files: [], report: {} };
   const preview = await previewSvgOf(ctx);
-  const previewPng = toPng(preview, { pxPerMm: ppm });
 
   const date = pics.date ?? defaultPictureDate(layout);
   const sun = sunForPicture(layout, date, pics.time);
   const picture = viewAssembly(layout, drawing, sun, { viewAzimuthDeg: pics.viewAzimuth, viewElevationDeg: pics.viewElevation });
   const assemblySvg = toAssemblySvg(picture, { title: `${spec.name} on its ${Math.abs(spec.site.latitude)}° wedge, ${date}, shadow on ${pics.time}` });
-  const assemblyPng = toPng(assemblySvg, { pxPerMm: ppm });
-
   const tOpts = { paper: spec.template.paper, orientation: spec.template.orientation, overlapMm: spec.template.overlap, marginMm: spec.template.margin };
-  const pdf = await toTemplatePdf(
-    { drawing, marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name },
-    tOpts,
-  );
+  // The two PNGs render on worker threads while the PDF is laid out here.
+  const [previewPng, assemblyPng, pdf] = await Promise.all([
+    pics.write ? toPngAsync(preview, { pxPerMm: ppm }) : undefined,
+    pics.write ? toPngAsync(assemblySvg, { pxPerMm: ppm }) : undefined,
+    spec.template.write
+      ? toTemplatePdf({ drawing, marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name }, tOpts)
+      : undefined,
+  ]);
   const tiles = templateTiles(drawing, tOpts);
   const size = (png: Uint8Array) => ({ widthPx: readU32(png, 16), heightPx: readU32(png, 20) });
   const r3 = (v: number) => Math.round(v * 1000) / 1000;
   return {
     files: [
-      { name: 'preview.png', bytes: previewPng },
-      { name: 'assembly.svg', bytes: utf8(assemblySvg) },
-      { name: 'assembly.png', bytes: assemblyPng },
-      { name: 'template.pdf', bytes: pdf },
+      ...(previewPng && assemblyPng
+        ? [
+            { name: 'preview.png', bytes: previewPng },
+            { name: 'assembly.svg', bytes: utf8(assemblySvg) },
+            { name: 'assembly.png', bytes: assemblyPng },
+          ]
+        : []),
+      ...(pdf ? [{ name: 'template.pdf', bytes: pdf }] : []),
     ],
     report: {
-      pictures: {
+      pictures: previewPng && assemblyPng ? {
         pxPerMm: ppm,
         preview: { widthMm: svgWidthMm(preview), ...size(previewPng) },
         assembly: {
@@ -58,15 +64,15 @@ export const picturesOutputs: Producer = async (ctx) => {
           viewAzimuthDeg: pics.viewAzimuth,
           viewElevationDeg: pics.viewElevation,
         },
-      },
-      template: {
+      } : undefined,
+      template: pdf ? {
         paper: tiles.paper,
         orientation: tiles.orientation,
         sheets: { columns: tiles.columns, rows: tiles.rows },
         overlapMm: tiles.overlapMm,
         calibrationBarMm: CALIBRATION_BAR_MM,
         scale: '1:1',
-      },
+      } : undefined,
     },
   };
 };

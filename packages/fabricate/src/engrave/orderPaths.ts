@@ -100,11 +100,18 @@ export function travelLowerBoundMm(paths: readonly OrderablePath[], start: Vec2 
   const n = paths.length;
   if (n === 0) return 0;
   const ends: (readonly Vec2[])[] = [[start], ...paths.map(endsOf)];
-  const w = (i: number, j: number): number => {
-    let best = Infinity;
-    for (const a of ends[i]) for (const b of ends[j]) best = Math.min(best, distanceMm(a, b));
-    return best;
-  };
+  // Node-to-node weights (the shortest distance between any of their ends),
+  // computed once into a flat matrix: both bounds read each weight often.
+  const W = new Float64Array((n + 1) * (n + 1));
+  for (let i = 0; i <= n; i += 1) {
+    for (let j = i + 1; j <= n; j += 1) {
+      let best = Infinity;
+      for (const a of ends[i]) for (const b of ends[j]) best = Math.min(best, Math.hypot(a[0] - b[0], a[1] - b[1]));
+      W[i * (n + 1) + j] = best;
+      W[j * (n + 1) + i] = best;
+    }
+  }
+  const w = (i: number, j: number): number => W[i * (n + 1) + j];
   // Prim's algorithm over nodes 0 (start) … n.
   const inTree = new Array<boolean>(n + 1).fill(false);
   const key = new Array<number>(n + 1).fill(Infinity);
@@ -154,22 +161,41 @@ function improve(paths: readonly OrderablePath[], initial: readonly PathVisit[],
   const seq = [...initial];
   const n = seq.length;
   const EPS = 1e-9;
-  const entry = (k: number): Vec2 => entryOf(paths[seq[k].index], seq[k].reversed);
-  const exit = (k: number): Vec2 => exitOf(paths[seq[k].index], seq[k].reversed);
-  const prevExit = (k: number): Vec2 => (k === 0 ? start : exit(k - 1));
+  // Entry and exit points of each position in the sequence, kept in flat
+  // arrays and refreshed only where a move changed them (the inner 2-opt loop
+  // is O(n²) per round, so it must not allocate).
+  const enX = new Float64Array(n);
+  const enY = new Float64Array(n);
+  const exX = new Float64Array(n);
+  const exY = new Float64Array(n);
+  const refresh = (k: number): void => {
+    const p = paths[seq[k].index];
+    const a = entryOf(p, seq[k].reversed);
+    const b = exitOf(p, seq[k].reversed);
+    enX[k] = a[0];
+    enY[k] = a[1];
+    exX[k] = b[0];
+    exY[k] = b[1];
+  };
+  for (let k = 0; k < n; k += 1) refresh(k);
+  const d = (ax: number, ay: number, bx: number, by: number): number => Math.hypot(ax - bx, ay - by);
   for (let round = 0; round < maxRounds; round += 1) {
     let improved = false;
     // Single-path direction flips.
     for (let i = 0; i < n; i += 1) {
       const p = paths[seq[i].index];
       if (p.closed) continue;
-      const before = prevExit(i);
+      const bx = i === 0 ? start[0] : exX[i - 1];
+      const by = i === 0 ? start[1] : exY[i - 1];
       const flipped = !seq[i].reversed;
-      const next = i + 1 < n ? entry(i + 1) : undefined;
-      const oldCost = distanceMm(before, entry(i)) + (next ? distanceMm(exit(i), next) : 0);
-      const newCost = distanceMm(before, entryOf(p, flipped)) + (next ? distanceMm(exitOf(p, flipped), next) : 0);
+      const fe = entryOf(p, flipped);
+      const fx = exitOf(p, flipped);
+      const hasNext = i + 1 < n;
+      const oldCost = d(bx, by, enX[i], enY[i]) + (hasNext ? d(exX[i], exY[i], enX[i + 1], enY[i + 1]) : 0);
+      const newCost = d(bx, by, fe[0], fe[1]) + (hasNext ? d(fx[0], fx[1], enX[i + 1], enY[i + 1]) : 0);
       if (newCost < oldCost - EPS) {
         seq[i] = { index: seq[i].index, reversed: flipped };
+        refresh(i);
         improved = true;
       }
     }
@@ -178,10 +204,11 @@ function improve(paths: readonly OrderablePath[], initial: readonly PathVisit[],
     // and leaves at entry(i), and the rapids inside the run keep their lengths.
     for (let i = 0; i < n - 1; i += 1) {
       for (let k = i + 1; k < n; k += 1) {
-        const before = prevExit(i);
-        const next = k + 1 < n ? entry(k + 1) : undefined;
-        const oldCost = distanceMm(before, entry(i)) + (next ? distanceMm(exit(k), next) : 0);
-        const newCost = distanceMm(before, exit(k)) + (next ? distanceMm(entry(i), next) : 0);
+        const bx = i === 0 ? start[0] : exX[i - 1];
+        const by = i === 0 ? start[1] : exY[i - 1];
+        const hasNext = k + 1 < n;
+        const oldCost = d(bx, by, enX[i], enY[i]) + (hasNext ? d(exX[k], exY[k], enX[k + 1], enY[k + 1]) : 0);
+        const newCost = d(bx, by, exX[k], exY[k]) + (hasNext ? d(enX[i], enY[i], enX[k + 1], enY[k + 1]) : 0);
         if (newCost < oldCost - EPS) {
           const run = seq.slice(i, k + 1).reverse().map((v): PathVisit => {
             const p = paths[v.index];
@@ -189,6 +216,7 @@ function improve(paths: readonly OrderablePath[], initial: readonly PathVisit[],
             return turns ? { index: v.index, reversed: !v.reversed } : v;
           });
           seq.splice(i, run.length, ...run);
+          for (let j = i; j <= k; j += 1) refresh(j);
           improved = true;
         }
       }

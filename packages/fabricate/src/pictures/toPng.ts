@@ -1,4 +1,4 @@
-import { Resvg } from '@resvg/resvg-js';
+import { Resvg, renderAsync } from '@resvg/resvg-js';
 
 /** Options of `toPng`. */
 export interface PngOptions {
@@ -27,14 +27,30 @@ export function toPng(svg: string, options: Partial<PngOptions> = {}): Uint8Arra
   if (!(Number.isFinite(o.pxPerMm) && o.pxPerMm > 0 && o.pxPerMm <= 50)) {
     throw new Error(`pxPerMm = ${o.pxPerMm} is not allowed: it must be a number greater than 0 and at most 50`);
   }
-  const widthMm = svgWidthMm(svg);
-  const widthPx = Math.max(1, Math.round(widthMm * o.pxPerMm));
-  const r = new Resvg(svg, {
-    fitTo: { mode: 'width', value: widthPx },
+  const r = new Resvg(svg, resvgOptions(svg, o));
+  return new Uint8Array(r.render().asPng());
+}
+
+/**
+ * The same PNG as `toPng`, rendered on a libuv worker thread (resvg's
+ * renderAsync), so several pictures can render at once on a multi-core CPU.
+ */
+export async function toPngAsync(svg: string, options: Partial<PngOptions> = {}): Promise<Uint8Array> {
+  const o = { ...PNG_DEFAULTS, ...options };
+  if (!(Number.isFinite(o.pxPerMm) && o.pxPerMm > 0 && o.pxPerMm <= 50)) {
+    throw new Error(`pxPerMm = ${o.pxPerMm} is not allowed: it must be a number greater than 0 and at most 50`);
+  }
+  const img = await renderAsync(svg, resvgOptions(svg, o));
+  return new Uint8Array(img.asPng());
+}
+
+function resvgOptions(svg: string, o: PngOptions) {
+  const widthPx = Math.max(1, Math.round(svgWidthMm(svg) * o.pxPerMm));
+  return {
+    fitTo: { mode: 'width' as const, value: widthPx },
     font: { loadSystemFonts: false },
     background: '#ffffff',
-  });
-  return new Uint8Array(r.render().asPng());
+  };
 }
 
 /** The root element's width in mm (mm, cm, in, px or unitless px). */

@@ -48,7 +48,7 @@ export function plateDrawing(layout: DialLayout, extraLines: readonly DrawnLine[
   const movePath = (p: Path): Path => ({ kind: 'path', points: p.points.map(move), closed: p.closed });
   const seg = (a: Vec2, b: Vec2): Path => ({ kind: 'path', points: [move(a), move(b)], closed: false });
 
-  const lines: DrawnLine[] = layout.marks.map((m) => ({
+  const lines: DrawnLine[] = layout.marks.filter((m) => !m.underGnomon).map((m) => ({
     label: `${m.label} ${m.style}`,
     kind: m.kind,
     widthMm: m.widthMm,

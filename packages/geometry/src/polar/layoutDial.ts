@@ -125,6 +125,12 @@ export function layoutDial(spec: DialSpec): DialLayout {
   }
   marks.sort((a, b) => a.xMm - b.xMm || a.y1Mm - b.y1Mm);
   if (spec.marks.followPenumbra) marks.splice(0, marks.length, ...penumbraMarkWidths(marks));
+  // A line that runs under the fin (the noon band of a solar dial lies
+  // exactly at the fin's faces, ±t/2) cannot be seen or read: it stays in the
+  // report but is not engraved.
+  marks.forEach((m, i) => {
+    if (Math.abs(m.xMm) - m.widthMm / 2 < t / 2) marks[i] = { ...m, underGnomon: true };
+  });
 
   const spanTop = Math.max(...marks.map((m) => m.y1Mm));
   const gnomonY0 = spanBottom - spec.gnomon.overhang;

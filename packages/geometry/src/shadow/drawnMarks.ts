@@ -10,7 +10,7 @@ export interface DrawnMark {
   readonly b: Vec2;
 }
 
-/** The layout's own marks as drawn lines (x = xMm from y0Mm to y1Mm). */
+/** The layout's own engraved marks as drawn lines (x = xMm from y0Mm to y1Mm); lines under the fin are not drawn. */
 export function drawnMarksFromLayout(layout: DialLayout): DrawnMark[] {
-  return layout.marks.map((m) => ({ mark: m, a: [m.xMm, m.y0Mm], b: [m.xMm, m.y1Mm] }));
+  return layout.marks.filter((m) => !m.underGnomon).map((m) => ({ mark: m, a: [m.xMm, m.y0Mm], b: [m.xMm, m.y1Mm] }));
 }

@@ -48,7 +48,9 @@ export function marksFromPlate(layout: DialLayout, lines: readonly PlateLine[]):
     .map(([a, b]) => [[a[0] - ox, a[1] - oy] as Vec2, [b[0] - ox, b[1] - oy] as Vec2] as const);
   const mid = (a: Vec2, b: Vec2): Vec2 => [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
   const pairs: { i: number; j: number; d: number }[] = [];
-  layout.marks.forEach((m, i) => {
+  // Lines under the fin (the noon band) are not drawn, so they are not looked for.
+  const engraved = layout.marks.filter((m) => !m.underGnomon);
+  engraved.forEach((m, i) => {
     const mm = mid([m.xMm, m.y0Mm], [m.xMm, m.y1Mm]);
     segs.forEach(([a, b], j) => {
       const sm = mid(a, b);
@@ -64,7 +66,7 @@ export function marksFromPlate(layout: DialLayout, lines: readonly PlateLine[]):
     markOf.set(p.i, p.j);
     usedLine.add(p.j);
   }
-  const drawn: DrawnMark[] = layout.marks.map((m, i) => {
+  const drawn: DrawnMark[] = engraved.map((m, i) => {
     const j = markOf.get(i);
     if (j === undefined) {
       throw new SpecError(

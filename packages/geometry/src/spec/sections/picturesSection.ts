@@ -18,6 +18,7 @@ const HHMM = /^([01]\d|2[0-3]):([0-5]\d)$/;
 
 export const picturesSection = z
   .strictObject({
+    write: z.boolean({ error: 'allowed: true or false' }).default(true).describe('write preview.png, assembly.svg and assembly.png'),
     pxPerMm: bounded(1, 20, ' px/mm').default(4).describe('pixels per millimetre of preview.png and assembly.png (4 px/mm is about 100 dpi)'),
     date: z
       .string({ error: 'allowed: a date "YYYY-MM-DD" in quotes, e.g. "2027-06-21"' })

@@ -21,6 +21,7 @@ function mm(min: number, max: number) {
 
 export const templateSection = z
   .strictObject({
+    write: z.boolean({ error: 'allowed: true or false' }).default(true).describe('write template.pdf'),
     paper: z
       .enum(TEMPLATE_PAPERS, { error: `allowed: ${TEMPLATE_PAPERS.map((p) => JSON.stringify(p)).join(', ')}` })
       .default('A4')
