@@ -6,10 +6,15 @@ import { join, resolve } from 'node:path';
 import { startServer } from '../packages/cli/src/serve/startServer.ts';
 import { launchChromium } from '../test/browserChromium.ts';
 
+// page.evaluate functions run in the browser; the project compiles without the DOM library.
+declare const window: any;
+declare const document: any;
+
 const ROOT = resolve(import.meta.dirname, '..');
 const OUT = join(ROOT, 'docs/images/page.png');
 
-const server = await startServer({ specPath: join(ROOT, 'fixtures/demo.yaml'), port: 0, log: () => {} });
+process.chdir(ROOT);
+const server = await startServer({ specPath: 'fixtures/demo.yaml', port: 0, log: () => {} });
 const { context, close } = await launchChromium({ width: 1440, height: 900 });
 try {
   const page = await context.newPage();
@@ -18,7 +23,9 @@ try {
   page.on('console', (m) => m.type() === 'error' && problems.push(m.text()));
   await page.goto(server.url);
   await page.waitForFunction(() => (window as any).umbrafab?.ready === true, null, { timeout: 60_000 });
-  await page.waitForTimeout(500); // let the face texture settle in the 3D view
+  // The download list of the spec on show (the full build runs in the server's worker).
+  await page.waitForFunction(() => document.body.dataset.files !== undefined && document.body.dataset.files === document.body.dataset.view, null, { timeout: 60_000 });
+  await page.waitForTimeout(300); // one more frame for the face texture in the 3D view
   mkdirSync(join(ROOT, 'docs/images'), { recursive: true });
   await page.screenshot({ path: OUT });
   const probe = await page.evaluate(() => (window as any).umbrafab);

@@ -7,6 +7,10 @@ import { startServer, type RunningServer } from '../packages/cli/src/serve/start
 import { CHROMIUM, launchChromium } from './browserChromium.ts';
 import { runCli } from './helpers/runCli.ts';
 
+// The functions passed to page.evaluate run in the browser; the project compiles without the DOM library.
+declare const window: any;
+declare const document: any;
+
 const ROOT = resolve(import.meta.dirname, '..');
 const SOLAR = join(ROOT, 'fixtures/specs/serve-solar.yaml');
 
@@ -43,7 +47,7 @@ describe.skipIf(!existsSync(CHROMIUM))('the dial page in a real browser (Debian 
     await page.goto(server.url);
     await page.waitForFunction(() => (window as any).umbrafab?.ready === true, null, { timeout: 60_000 });
     const probe = await page.evaluate(() => ({ ...(window as any).umbrafab }));
-    const nav = await page.evaluate(() => performance.getEntriesByType('navigation')[0]?.toJSON());
+    const nav = await page.evaluate(() => (performance as any).getEntriesByType('navigation')[0]?.toJSON());
     console.log(
       `page load: ${Date.now() - t0} ms from goto to ready (in-page: ${Math.round(probe.loadMs)} ms from script start to the first drawn views; DOMContentLoaded ${Math.round(nav?.domContentLoadedEventEnd ?? NaN)} ms); WebGL ${probe.webgl}, ${probe.triangles} triangles`,
     );
@@ -114,9 +118,9 @@ describe.skipIf(!existsSync(CHROMIUM))('the dial page in a real browser (Debian 
     const probe = await page.evaluate(() => ({ ...(window as any).umbrafab }));
     console.log(`time change → redrawn shadow: ${Math.round(probe.lastRedrawMs)} ms`);
     const m = await page.evaluate(() => {
-      const svg = document.querySelector('#face svg') as SVGSVGElement;
-      const mark = [...svg.querySelectorAll('#lines path')].find((p) => p.querySelector('title')?.textContent === '15:00 east') as SVGPathElement;
-      const shadow = svg.querySelector('#shadow') as SVGPathElement;
+      const svg = document.querySelector('#face svg') ;
+      const mark = [...svg.querySelectorAll('#lines path')].find((p: any) => p.querySelector('title')?.textContent === '15:00 east') ;
+      const shadow = svg.querySelector('#shadow') ;
       const markBox = mark.getBoundingClientRect();
       const shadowBox = shadow.getBoundingClientRect();
       const viewBoxWidth = svg.viewBox.baseVal.width;

@@ -64,11 +64,6 @@ export function specFields(): readonly SpecField[] {
   return cached;
 }
 
-/** The spec schema as JSON Schema (draft 2020-12), input side: what the page may send. */
-export function specJsonSchema(): unknown {
-  return specSchema.toJSONSchema({ io: 'input', unrepresentable: 'any' });
-}
-
 function walk(node: Node, path: readonly string[], parentRequired: boolean): SpecField[] {
   const out: SpecField[] = [];
   for (const [name, child] of Object.entries(node.properties ?? {})) {

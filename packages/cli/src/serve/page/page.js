@@ -463,7 +463,7 @@ function initModel() {
     s.position.set(x * 470, y * 470, 1);
     scene.add(s);
   }
-  const sun = new THREE.Mesh(new THREE.SphereGeometry(9, 24, 16), new THREE.MeshBasicMaterial({ color: 0xf2b33d }));
+  const sun = new THREE.Mesh(new THREE.SphereGeometry(7, 24, 16), new THREE.MeshBasicMaterial({ color: 0xf2b33d }));
   const ray = new THREE.Line(new THREE.BufferGeometry(), new THREE.LineDashedMaterial({ color: 0xc98a1a, dashSize: 8, gapSize: 6 }));
   scene.add(sun, ray);
   Object.assign(view, { renderer, scene, camera, controls, light, sun: { ball: sun, ray } });
@@ -598,7 +598,7 @@ function drawSun3d(s) {
   view.sun.ball.visible = !!up;
   view.sun.ray.visible = !!up;
   if (dir && view.centre) {
-    const far = view.centre.clone().add(dir.clone().multiplyScalar(view.radius * 1.6));
+    const far = view.centre.clone().add(dir.clone().multiplyScalar(view.radius * 1.05));
     view.sun.ball.position.copy(far);
     view.sun.ray.geometry.setFromPoints([view.centre, far]);
     view.sun.ray.computeLineDistances();
