@@ -1,67 +1,33 @@
-import { METHOD_DEFAULTS } from '@umbrafab/geometry';
+import { parseSpec } from '@umbrafab/geometry';
+import { specToCommentedYaml } from './serve/specYaml.ts';
 
 /**
- * The commented starter spec written by `umbrafab init`. The site is a
- * placeholder of our own (an invented harbour village); every other value is
- * the schema's default, spelled out so a maker sees what can be changed.
+ * The commented starter spec written by `umbrafab init`: every field of the
+ * schema with its default and, beside it, the schema's own describe() text,
+ * so it never drifts from what `build` accepts. The site is a placeholder of
+ * our own (an invented harbour village); change it first.
  * @param year the calendar year to write (the CLI passes the coming year)
  */
 export function starterSpecYaml(year: number): string {
-  const laser = METHOD_DEFAULTS.laser;
-  return `# umbrafab dial spec: one polar sundial, everything in mm and degrees.
-# Change the site first; every other line shows its default.
+  const spec = parseSpec({
+    name: 'Harbour Steps dial',
+    site: { latitude: 43.55, longitude: -5.92, timezone: 'Europe/Madrid', place: 'Harbour Steps' },
+    calendar: { year },
+  });
+  // Fields whose default follows another field (kerf and clearance follow
+  // process.method; the gnomon's stock follows the method and the sheet) are
+  // left out, so changing the method or the sheet keeps them right.
+  const { kerf: _kerf, clearance: _clearance, ...process } = spec.process;
+  const { gnomonFrom: _from, ...parts } = spec.parts as typeof spec.parts & { gnomonFrom?: string };
+  const { thickness: _t, ...gnomon } = spec.gnomon;
+  const body = specToCommentedYaml({ ...spec, gnomon, parts, process }).replace(/^(#[^\n]*\n)+\n?/, '');
+  return `# umbrafab dial spec: one polar sundial. Lengths in mm, angles in degrees.
+# Change site: first (latitude north positive, longitude east positive, an
+# IANA time zone); every other line shows its default and may be deleted.
+# Not written because their defaults follow other fields: process.kerf and
+# process.clearance (by process.method), gnomon.thickness (the plate's sheet
+# when a laser, waterjet or router cuts the gnomon from it; 3 mm printed).
+# Then: umbrafab build <this file> --out <folder>
 
-name: "Harbour Steps dial"      # engraved in the title block (1-60 characters)
-
-site:
-  latitude: 43.55               # degrees, north positive (-90 to 90)
-  longitude: -5.92              # degrees, east positive (-180 to 180)
-  timezone: "Europe/Madrid"     # IANA zone name; its standard meridian sets the longitude correction
-  # place: "Harbour Steps"      # optional place name for the title block
-
-dial:
-  reads: solar                  # solar (apparent solar time) or standard (lines moved to the zone meridian)
-  numerals: arabic              # arabic (7..12..5), arabic24 (7..17) or roman
-  numeralHeight: 8              # mm; reduced automatically if neighbours would touch
-  textHeight: 3.5               # mm, title block
-
-gnomon:
-  height: 50                    # mm, style edge above the dial face
-  thickness: 3                  # mm, the fin's thickness (both edges cast shadows)
-  overhang: 5                   # mm of style beyond the hour marks at each end
-  tabs: 2                       # tabs through the plate
-  tabLength: 15                 # mm per tab
-
-hours:
-  from: "07:00"                 # first mark
-  to: "17:00"                   # last mark
-  step: 15                      # minutes: 60, 30 or 15
-  maxHourAngle: 75              # degrees; a polar dial cannot show |hour angle| >= 90
-
-marks:                          # lengths along the style and line widths, mm
-  hour: { length: 80, width: 0.8 }
-  half: { length: 55, width: 0.6 }
-  quarter: { length: 30, width: 0.4 }
-
-plate:
-  width: auto                   # mm or auto (sized to the hours, numerals and margins)
-  length: auto                  # mm or auto
-  margin: 12                    # mm clear border
-  thickness: 3                  # mm sheet
-  material: aluminium           # aluminium, brass, stainless, steel, acrylic, hardwood, plywood, slate, pla, petg
-  cornerRadius: 4               # mm
-
-holes:
-  count: 4                      # 0, 2 (sides) or 4 (corners)
-  diameter: 5.5                 # mm (clears M5)
-  inset: 10                     # mm from the plate edges to the hole centres
-
-calendar:
-  year: ${year}                    # year of the time tables; outputs never depend on today's date
-
-process:
-  method: laser                 # laser, waterjet, router or print
-  kerf: ${laser.kerf}                    # mm cut width (defaults: laser 0.15, waterjet 0.9, router 3.175, print 0)
-  clearance: ${laser.clearance}                # mm fit clearance per side for the gnomon tabs
-`;
+${body}`;
 }
