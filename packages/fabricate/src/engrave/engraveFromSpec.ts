@@ -106,7 +106,7 @@ export function engraveTitleLines(spec: DialSpec): readonly string[] {
 function ngcProgram(job: EngraveJob, s: EngraveSettings, spec: DialSpec): { text: string; report: NgcReport } {
   checkMillJob(job, s, spec);
   const plan = planNgc(job, s);
-  const text = toNgc(job, s);
+  const text = toNgc(job, s, {}, plan);
   const cuts = plan.toolpaths.cuts;
   const e: TimeEstimate = plan.estimate;
   const usesFlat = cuts.some((c) => c.tool === 'flat');
@@ -141,7 +141,7 @@ function ngcProgram(job: EngraveJob, s: EngraveSettings, spec: DialSpec): { text
 
 function laserProgram(job: EngraveJob, s: EngraveSettings): { text: string; report: LaserReport } {
   const plan = planLaser(job, s);
-  const text = toLaserGcode(job, s);
+  const text = toLaserGcode(job, s, {}, plan);
   const e = plan.estimate;
   return {
     text,

@@ -64,9 +64,10 @@ export function planLaser(job: EngraveJob, settings: EngraveSettings, options: G
  * @returns program text, '\n' line ends, byte-stable for the same input
  * @example toLaserGcode(job, resolveEngraveSettings('acrylic'))
  */
-export function toLaserGcode(job: EngraveJob, settings: EngraveSettings, options: GcodeWriterOptions = {}): string {
+export function toLaserGcode(job: EngraveJob, settings: EngraveSettings, options: GcodeWriterOptions = {}, planned?: LaserPlan): string {
   const o = resolveWriterOptions(options);
-  const plan = planLaser(job, settings, o);
+  // A caller that already planned (for the report's figures) passes the plan, so the paths are ordered once.
+  const plan = planned ?? planLaser(job, settings, o);
   const s = settings;
   const header: GcodeRecord[] = [
     { kind: 'comment', text: 'umbrafab engrave-laser.gcode: laser scoring program, GRBL laser mode [$32=1]' },

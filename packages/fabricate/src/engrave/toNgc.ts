@@ -116,9 +116,10 @@ function toolName(tool: EngraveTool, s: EngraveSettings): string {
  * @throws Error naming the field for a V-bit too narrow, a depth the stock does not allow, a bad path
  * @example toNgc(job, resolveEngraveSettings('brass'))
  */
-export function toNgc(job: EngraveJob, settings: EngraveSettings, options: GcodeWriterOptions = {}): string {
+export function toNgc(job: EngraveJob, settings: EngraveSettings, options: GcodeWriterOptions = {}, planned?: NgcPlan): string {
   const o = resolveWriterOptions(options);
-  const plan = planNgc(job, settings, o);
+  // A caller that already planned (for the report's figures) passes the plan, so the paths are ordered once.
+  const plan = planned ?? planNgc(job, settings, o);
   const s = settings;
   const cuts = plan.toolpaths.cuts;
   const usesFlat = cuts.some((c) => c.tool === 'flat');
