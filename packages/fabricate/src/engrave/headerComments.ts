@@ -24,6 +24,26 @@ export function stockComments(job: EngraveJob, process: EngraveProcess): readonl
   ];
 }
 
+/**
+ * Cautions at the top of every program (common practice; the machine maker's
+ * instructions, the shop's rules and local codes come first).
+ */
+export function safetyComments(process: EngraveProcess): readonly GcodeRecord[] {
+  const lines =
+    process === 'mill'
+      ? [
+          'CAUTION: dry-run this program above the stock and cut a test groove on scrap first',
+          'CAUTION: clamp the stock, guard the machine, wear eye and hearing protection',
+          'CAUTION: feeds and speeds are common-practice starting points, not tuned to your machine',
+        ]
+      : [
+          'CAUTION: laser mode [GRBL $32=1] required; never engrave PVC, vinyl or other chlorinated plastics',
+          'CAUTION: run fume extraction, wear eye protection rated for the laser, never leave it unattended',
+          'CAUTION: bare aluminium, brass and steel reflect CO2 and diode lasers; follow the maker manual',
+        ];
+  return lines.map((text) => ({ kind: 'comment', text }) as const);
+}
+
 /** Header comments on the time estimate, the rapid travel and the spec summary lines. */
 export function figureComments(f: {
   readonly rapidTravelMm: { readonly inputOrder: number; readonly ordered: number; readonly lowerBound: number };

@@ -5,7 +5,7 @@ import { formatNumber } from './formatNumber.ts';
 import { serializeGcode, type GcodeRecord } from './gcodeRecords.ts';
 import type { EngraveSettings } from './materialPresets.ts';
 import { orderPaths } from './orderPaths.ts';
-import { figureComments, stockComments } from './headerComments.ts';
+import { figureComments, safetyComments, stockComments } from './headerComments.ts';
 import { resolveWriterOptions, type GcodeWriterOptions } from './writerOptions.ts';
 
 /**
@@ -72,6 +72,7 @@ export function toLaserGcode(job: EngraveJob, settings: EngraveSettings, options
   const header: GcodeRecord[] = [
     { kind: 'comment', text: 'umbrafab engrave-laser.gcode: laser scoring program, GRBL laser mode [$32=1]' },
     ...stockComments(job, 'laser'),
+    ...safetyComments('laser'),
     {
       kind: 'comment',
       text: `laser: M4 dynamic power, ${formatNumber(s.laserPowerPct, 3, true)} % = S${formatNumber(plan.powerS, 3, true)} of S${formatNumber(s.laserMaxS, 3, true)}, speed ${formatNumber(s.laserSpeedMmPerMin, 3, true)} mm/min, S0 during travel`,

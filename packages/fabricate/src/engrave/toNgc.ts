@@ -3,7 +3,7 @@ import { estimateTime, type TimeEstimate } from './estimateTime.ts';
 import { formatNumber } from './formatNumber.ts';
 import { serializeGcode, type GcodeRecord } from './gcodeRecords.ts';
 import type { EngraveSettings } from './materialPresets.ts';
-import { figureComments, stockComments } from './headerComments.ts';
+import { figureComments, safetyComments, stockComments } from './headerComments.ts';
 import { buildToolpaths, type EngraveCut, type EngraveTool, type EngraveToolpaths } from './toolpaths.ts';
 import { resolveWriterOptions, type GcodeWriterOptions } from './writerOptions.ts';
 
@@ -127,6 +127,7 @@ export function toNgc(job: EngraveJob, settings: EngraveSettings, options: Gcode
   const header: GcodeRecord[] = [
     { kind: 'comment', text: 'umbrafab engrave.ngc: engraving program, RS-274/NGC' },
     ...stockComments(job, 'mill'),
+    ...safetyComments('mill'),
     { kind: 'comment', text: `T1: ${toolName('vbit', s)} - load before start` },
     ...(usesFlat ? [{ kind: 'comment', text: `T2: ${toolName('flat', s)}, depth ${fmt(s.flatDepthMm)} mm` } as const] : []),
     {

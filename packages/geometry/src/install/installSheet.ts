@@ -73,6 +73,7 @@ export const INSTALL_CAUTIONS: readonly string[] = [
   'Mount and anchor the dial and its pedestal or wall bracket according to local building codes; check that the support carries the weight and the wind load.',
   'Heavy plates and stone or metal pedestals are lifted by two people or with lifting gear; wear gloves against sharp cut edges.',
   'Round or cover the gnomon\'s top corners where people, children or animals pass close by.',
+  'Making the parts: follow the machine maker\'s instructions and your shop\'s rules; never laser-cut PVC, vinyl or other chlorinated plastics (chlorine gas); run fume extraction for lasers and ventilate 3D printing; dry-run every G-code program above the stock; wear eye and hearing protection at waterjets, routers and mills.',
 ];
 
 /**
