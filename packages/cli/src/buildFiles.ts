@@ -1,7 +1,7 @@
 import { layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec } from '@umbrafab/geometry';
 import { toReportJson } from '@umbrafab/fabricate';
-import { PRODUCERS } from './outputs/index.ts';
-import { utf8, type BuildContext } from './outputs/outputTypes.ts';
+import { PRODUCERS, START_ORDER } from './outputs/index.ts';
+import { utf8, type BuildContext, type ProducerResult } from './outputs/outputTypes.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
 /** Everything one build produces, in memory (no I/O): the CLI writes it, other front ends serve it. */
@@ -22,8 +22,22 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   const { layout } = ctx;
   const files: OutputFile[] = [];
   const sections: Record<string, unknown> = {};
-  for (const produce of PRODUCERS) {
-    const r = await produce(ctx);
+  // Producers whose work runs mostly on worker threads (PNG rendering) start
+  // first, so that their threads overlap the others' work on this one; the
+  // results are still taken in PRODUCERS order, and the first failure in that
+  // order is the one reported, so output and messages stay deterministic.
+  const started: Promise<ProducerResult>[] = new Array(PRODUCERS.length);
+  for (const i of START_ORDER) {
+    try {
+      started[i] = Promise.resolve(PRODUCERS[i](ctx));
+    } catch (e) {
+      started[i] = Promise.reject(e);
+    }
+  }
+  const settled = await Promise.allSettled(started);
+  for (const s of settled) if (s.status === 'rejected') throw s.reason;
+  for (const s of settled) {
+    const r = (s as PromiseFulfilledResult<ProducerResult>).value;
     files.push(...r.files);
     for (const [key, value] of Object.entries(r.report)) {
       const prev = sections[key];

@@ -11,3 +11,6 @@ import type { Producer } from './outputTypes.ts';
  * top-level key are merged shallowly (later producers add keys).
  */
 export const PRODUCERS: readonly Producer[] = [plateOutputs, partsOutputs, engraveOutputs, timeOutputs, picturesOutputs];
+
+/** Indices of PRODUCERS in the order they are started: the pictures (PNGs render on worker threads) first. */
+export const START_ORDER: readonly number[] = [PRODUCERS.indexOf(picturesOutputs), ...PRODUCERS.map((_, i) => i).filter((i) => PRODUCERS[i] !== picturesOutputs)];

@@ -1,6 +1,6 @@
 import { defaultPictureDate, sunForPicture, viewAssembly } from '@umbrafab/geometry';
 import { svgWidthMm, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM } from '@umbrafab/fabricate';
-import { plateOutputs } from './plateOutputs.ts';
+import { previewSvgText } from './plateOutputs.ts';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
 
 /**
@@ -14,7 +14,9 @@ export const picturesOutputs: Producer = async (ctx) => {
   const pics = spec.pictures;
   const ppm = pics.pxPerMm;
   if (!pics.write && !spec.template.write) return { files: [], report: {} };
-  const preview = await previewSvgOf(ctx);
+  const preview = previewSvgText(ctx);
+  // Start rendering before anything else, on a worker thread.
+  const previewPngJob = pics.write ? toPngAsync(preview, { pxPerMm: ppm }) : undefined;
 
   const date = pics.date ?? defaultPictureDate(layout);
   const sun = sunForPicture(layout, date, pics.time);
@@ -23,7 +25,7 @@ export const picturesOutputs: Producer = async (ctx) => {
   const tOpts = { paper: spec.template.paper, orientation: spec.template.orientation, overlapMm: spec.template.overlap, marginMm: spec.template.margin };
   // The two PNGs render on worker threads while the PDF is laid out here.
   const [previewPng, assemblyPng, pdf] = await Promise.all([
-    pics.write ? toPngAsync(preview, { pxPerMm: ppm }) : undefined,
+    previewPngJob,
     pics.write ? toPngAsync(assemblySvg, { pxPerMm: ppm }) : undefined,
     spec.template.write
       ? toTemplatePdf({ drawing, marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name }, tOpts)
@@ -76,14 +78,6 @@ export const picturesOutputs: Producer = async (ctx) => {
     },
   };
 };
-
-/** The very preview.svg the build writes (the plate outputs are deterministic, so the bytes are the same). */
-async function previewSvgOf(ctx: BuildContext): Promise<string> {
-  const r = await plateOutputs(ctx);
-  const f = r.files.find((x) => x.name === 'preview.svg');
-  if (!f) throw new Error('plate outputs wrote no preview.svg');
-  return new TextDecoder().decode(f.bytes);
-}
 
 /** Big-endian uint32 (PNG IHDR width at byte 16, height at 20). */
 function readU32(b: Uint8Array, at: number): number {

@@ -1,11 +1,11 @@
 import { kerfCompensate, toDxf, toSvg } from '@umbrafab/fabricate';
-import { utf8, type Producer } from './outputTypes.ts';
+import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
 
 /** plate.dxf and preview.svg, and the report's marks, plate, gnomon and time sections. */
 export const plateOutputs: Producer = ({ spec, layout, drawing }) => {
   const cut = kerfCompensate(drawing, spec.process.kerf);
   const dxf = toDxf(drawing, { method: spec.process.method, kerfMm: spec.process.kerf });
-  const svg = toSvg(drawing, { caption: `${spec.name} - preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+  const svg = previewSvgText({ spec, layout, drawing });
   return {
     files: [
       { name: 'plate.dxf', bytes: utf8(dxf) },
@@ -43,3 +43,8 @@ export const plateOutputs: Producer = ({ spec, layout, drawing }) => {
     },
   };
 };
+
+/** The text of preview.svg (shared with the pictures, which render it to PNG). */
+export function previewSvgText({ spec, layout, drawing }: BuildContext): string {
+  return toSvg(drawing, { caption: `${spec.name} - preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+}
