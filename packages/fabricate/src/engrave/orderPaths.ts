@@ -106,7 +106,7 @@ export function travelLowerBoundMm(paths: readonly OrderablePath[], start: Vec2 
   for (let i = 0; i <= n; i += 1) {
     for (let j = i + 1; j <= n; j += 1) {
       let best = Infinity;
-      for (const a of ends[i]) for (const b of ends[j]) best = Math.min(best, Math.hypot(a[0] - b[0], a[1] - b[1]));
+      for (const a of ends[i]) for (const b of ends[j]) best = Math.min(best, Math.sqrt((a[0] - b[0]) ** 2 + (a[1] - b[1]) ** 2));
       W[i * (n + 1) + j] = best;
       W[j * (n + 1) + i] = best;
     }
@@ -178,7 +178,12 @@ function improve(paths: readonly OrderablePath[], initial: readonly PathVisit[],
     exY[k] = b[1];
   };
   for (let k = 0; k < n; k += 1) refresh(k);
-  const d = (ax: number, ay: number, bx: number, by: number): number => Math.hypot(ax - bx, ay - by);
+  const d = (ax: number, ay: number, bx: number, by: number): number => {
+    // sqrt of the sum of squares: Math.hypot is several times slower, and this loop runs O(n²) per round.
+    const dx = ax - bx;
+    const dy = ay - by;
+    return Math.sqrt(dx * dx + dy * dy);
+  };
   for (let round = 0; round < maxRounds; round += 1) {
     let improved = false;
     // Single-path direction flips.
