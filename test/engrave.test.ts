@@ -4,7 +4,7 @@ import { layoutDial, plateDrawing, timeFaceExtras, type PlateDrawing, type Vec2 
 import { buildFiles } from '../packages/cli/src/buildFiles.ts';
 import { readSpecFile } from '../packages/cli/src/readSpec.ts';
 import { expectClose } from './helpers/closeTo.ts';
-import { motions, runRs274, type CanonMotion } from './helpers/rs274.ts';
+import { feedRuns, motions, runRs274, xyLength, type CanonMotion } from './helpers/rs274.ts';
 
 // Outside validator: Debian's linuxcnc-uspace `rs274 -g`, the standalone
 // RS274NGC interpreter (DESIGN.md §7). Every program `umbrafab build` writes
@@ -89,23 +89,6 @@ function onPlate(d: PlateDrawing, x: number, y: number): boolean {
   for (const h of d.holes) if (Math.hypot(x - h.cx, y - h.cy) < h.radiusMm - EPS_MM) return false;
   for (const s of d.slots) if (Math.abs(x - s.cx) < s.widthMm / 2 - EPS_MM && Math.abs(y - s.cy) < s.heightMm / 2 - EPS_MM) return false;
   return true;
-}
-
-const xyLength = (m: CanonMotion): number => Math.hypot(m.to.x - m.from.x, m.to.y - m.from.y);
-
-/** Runs of consecutive feed moves, split by traverses. */
-function feedRuns(ms: readonly CanonMotion[]): CanonMotion[][] {
-  const runs: CanonMotion[][] = [];
-  let run: CanonMotion[] = [];
-  for (const m of ms) {
-    if (m.kind === 'STRAIGHT_FEED') run.push(m);
-    else if (run.length > 0) {
-      runs.push(run);
-      run = [];
-    }
-  }
-  if (run.length > 0) runs.push(run);
-  return runs;
 }
 
 const samePoints = (a: readonly Vec2[], b: readonly Vec2[]): boolean =>

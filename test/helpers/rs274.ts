@@ -154,3 +154,21 @@ export function motions(commands: readonly CanonCommand[]): CanonMotion[] {
   });
   return out;
 }
+
+/** XY length of one motion, mm. */
+export const xyLength = (m: CanonMotion): number => Math.hypot(m.to.x - m.from.x, m.to.y - m.from.y);
+
+/** Runs of consecutive feed moves, split by traverses. */
+export function feedRuns(ms: readonly CanonMotion[]): CanonMotion[][] {
+  const runs: CanonMotion[][] = [];
+  let run: CanonMotion[] = [];
+  for (const m of ms) {
+    if (m.kind === 'STRAIGHT_FEED') run.push(m);
+    else if (run.length > 0) {
+      runs.push(run);
+      run = [];
+    }
+  }
+  if (run.length > 0) runs.push(run);
+  return runs;
+}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { expectClose } from '../../../../test/helpers/closeTo.ts';
-import { motions, runRs274, type CanonMotion } from '../../../../test/helpers/rs274.ts';
+import { feedRuns, motions, runRs274, xyLength, type CanonMotion } from '../../../../test/helpers/rs274.ts';
 import type { EngraveJob } from './engraveInput.ts';
 import { resolveEngraveSettings, type EngraveSettings } from './materialPresets.ts';
 import { polylineLengthMm } from './polylineLength.ts';
@@ -13,23 +13,6 @@ import { vbitDepthMm } from './vbitDepth.ts';
 // its canonical output is what the checks read.
 
 const EPS_MM = 1e-4; // rs274 prints 4 decimals
-
-/** Runs of consecutive feed moves, split by traverses. */
-function feedRuns(ms: readonly CanonMotion[]): CanonMotion[][] {
-  const runs: CanonMotion[][] = [];
-  let run: CanonMotion[] = [];
-  for (const m of ms) {
-    if (m.kind === 'STRAIGHT_FEED') run.push(m);
-    else if (run.length > 0) {
-      runs.push(run);
-      run = [];
-    }
-  }
-  if (run.length > 0) runs.push(run);
-  return runs;
-}
-
-const xyLength = (m: CanonMotion): number => Math.hypot(m.to.x - m.from.x, m.to.y - m.from.y);
 
 function checkMillProgram(job: EngraveJob, s: EngraveSettings, text: string): { ms: CanonMotion[]; finalDepthLengthMm: number; deepestMm: number } {
   const { commands } = runRs274(text, 'engrave.ngc');
