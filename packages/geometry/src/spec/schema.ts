@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { boundedNumber } from './boundedNumber.ts';
 import { checkSection } from './sections/checkSection.ts';
 import { engraveSection } from './sections/engraveSection.ts';
 import { installSection } from './sections/installSection.ts';
@@ -17,17 +18,8 @@ import { picturesSection } from './sections/picturesSection.ts';
  * fixed: other tools read them.
  */
 
-/** A number field with bounds, unit and default; the error names what is allowed. */
-function num(opts: { min: number; max: number; unit: string; exclusiveMin?: boolean; int?: boolean }) {
-  const { min, max, unit, exclusiveMin, int } = opts;
-  const u = unit === '' ? '' : unit === '°' ? unit : ` ${unit}`;
-  const allowed = `allowed: ${int ? 'a whole number' : 'a number'} ${exclusiveMin ? 'greater than' : 'from'} ${min}${u}${max === Infinity ? '' : ` ${exclusiveMin ? 'up to' : 'to'} ${max}${u}`}`;
-  let s = z.number({ error: allowed });
-  s = exclusiveMin ? s.gt(min, { error: allowed }) : s.gte(min, { error: allowed });
-  if (max !== Infinity) s = s.lte(max, { error: allowed });
-  if (int) s = s.int({ error: allowed });
-  return s;
-}
+/** A number field with bounds and unit; the error names what is allowed. */
+const num = boundedNumber;
 
 function oneOf<const T extends readonly [string, ...string[]]>(values: T) {
   return z.enum(values, { error: `allowed: ${values.map((v) => JSON.stringify(v)).join(', ')}` });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { boundedNumber } from '../boundedNumber.ts';
 
 /**
  * The `check:` section of the dial spec: how `umbrafab check` simulates the
@@ -6,16 +7,8 @@ import { z } from 'zod';
  * with its unit; errors use the "allowed: …" style of schema.ts.
  */
 
-/** A bounded number; the error says what is allowed (the style of schema.ts's num()). */
-function bounded(min: number, max: number, unit: string, opts: { exclusiveMin?: boolean; int?: boolean } = {}) {
-  const u = unit === '°' ? unit : unit === '' ? '' : ` ${unit}`;
-  const allowed = `allowed: ${opts.int ? 'a whole number' : 'a number'} ${opts.exclusiveMin ? 'greater than' : 'from'} ${min}${u} ${opts.exclusiveMin ? 'up to' : 'to'} ${max}${u}`;
-  let s = z.number({ error: allowed });
-  s = opts.exclusiveMin ? s.gt(min, { error: allowed }) : s.gte(min, { error: allowed });
-  s = s.lte(max, { error: allowed });
-  if (opts.int) s = s.int({ error: allowed });
-  return s;
-}
+/** A bounded number with its unit (see boundedNumber). */
+const bounded = (min: number, max: number, unit: string, opts: { exclusiveMin?: boolean; int?: boolean } = {}) => boundedNumber({ min, max, unit, ...opts });
 
 export const CHECK_REFRACTION = ['none', 'normal'] as const;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { boundedNumber } from '../boundedNumber.ts';
 
 /**
  * The `engrave:` section of the dial spec: which engraving programs
@@ -23,19 +24,8 @@ import { z } from 'zod';
 export const ENGRAVE_PROGRAM_CHOICES = ['auto', 'ngc', 'laser', 'both', 'none'] as const;
 export type EngraveProgramChoice = (typeof ENGRAVE_PROGRAM_CHOICES)[number];
 
-/**
- * A number field with bounds and unit; the error says what is allowed, in the
- * style of schema.ts's `num()` (kept local: schema.ts imports this file).
- */
-function num(opts: { min: number; max: number; unit: string; exclusiveMin?: boolean; exclusiveMax?: boolean }) {
-  const { min, max, unit, exclusiveMin, exclusiveMax } = opts;
-  const u = unit === '' ? '' : ` ${unit}`;
-  const allowed = `allowed: a number ${exclusiveMin ? 'greater than' : 'from'} ${min}${u} ${exclusiveMax ? 'and less than' : exclusiveMin ? 'up to' : 'to'} ${max}${u}`;
-  let s = z.number({ error: allowed });
-  s = exclusiveMin ? s.gt(min, { error: allowed }) : s.gte(min, { error: allowed });
-  s = exclusiveMax ? s.lt(max, { error: allowed }) : s.lte(max, { error: allowed });
-  return s;
-}
+/** A number field with bounds and unit (see boundedNumber). */
+const num = boundedNumber;
 
 const PRESET = 'default: the engraving preset of plate.material';
 

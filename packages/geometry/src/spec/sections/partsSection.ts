@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { boundedNumber } from '../boundedNumber.ts';
 import { SpecError, formatValue } from '../../errors.ts';
 
 /**
@@ -17,16 +18,8 @@ export type PartFile = (typeof PART_FILES)[number];
 export const GNOMON_SOURCES = ['sheet', 'separate'] as const;
 export type GnomonSource = (typeof GNOMON_SOURCES)[number];
 
-/** A bounded number; the error says what is allowed (the style of schema.ts). */
-function length(min: number, max: number, opts: { exclusiveMin?: boolean; int?: boolean; unit?: string } = {}) {
-  const unit = opts.unit ?? ' mm';
-  const allowed = `allowed: ${opts.int ? 'a whole number' : 'a number'} ${opts.exclusiveMin ? 'greater than' : 'from'} ${min}${unit} ${opts.exclusiveMin ? 'up to' : 'to'} ${max}${unit}`;
-  let s = z.number({ error: allowed });
-  s = opts.exclusiveMin ? s.gt(min, { error: allowed }) : s.gte(min, { error: allowed });
-  s = s.lte(max, { error: allowed });
-  if (opts.int) s = s.int({ error: allowed });
-  return s;
-}
+/** A bounded length in mm (see boundedNumber). */
+const length = (min: number, max: number, opts: { exclusiveMin?: boolean; int?: boolean } = {}) => boundedNumber({ min, max, unit: 'mm', ...opts });
 
 const flag = z.boolean({ error: 'allowed: true or false' });
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { boundedNumber } from '../boundedNumber.ts';
 
 /**
  * The `pictures:` section of the dial spec: preview.png and the assembly
@@ -7,11 +8,8 @@ import { z } from 'zod';
  * its unit.
  */
 
-/** A bounded number with its unit; the error says what is allowed (the style of schema.ts). */
-function bounded(min: number, max: number, unit: string) {
-  const allowed = `allowed: a number from ${min}${unit} to ${max}${unit}`;
-  return z.number({ error: allowed }).gte(min, { error: allowed }).lte(max, { error: allowed });
-}
+/** A bounded number with its unit (see boundedNumber). */
+const bounded = (min: number, max: number, unit: string) => boundedNumber({ min, max, unit });
 
 const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
 const HHMM = /^([01]\d|2[0-3]):([0-5]\d)$/;
@@ -19,7 +17,7 @@ const HHMM = /^([01]\d|2[0-3]):([0-5]\d)$/;
 export const picturesSection = z
   .strictObject({
     write: z.boolean({ error: 'allowed: true or false' }).default(true).describe('write preview.png, assembly.svg and assembly.png'),
-    pxPerMm: bounded(1, 20, ' px/mm').default(4).describe('pixels per millimetre of preview.png and assembly.png (4 px/mm is about 100 dpi)'),
+    pxPerMm: bounded(1, 20, 'px/mm').default(4).describe('pixels per millimetre of preview.png and assembly.png (4 px/mm is about 100 dpi)'),
     date: z
       .string({ error: 'allowed: a date "YYYY-MM-DD" in quotes, e.g. "2027-06-21"' })
       .regex(DATE, { error: 'allowed: a date "YYYY-MM-DD" in quotes, e.g. "2027-06-21"' })

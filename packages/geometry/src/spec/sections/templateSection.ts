@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { boundedNumber } from '../boundedNumber.ts';
 
 /**
  * The `template:` section of the dial spec: the printable 1:1 paper template
@@ -13,11 +14,8 @@ export type TemplatePaper = (typeof TEMPLATE_PAPERS)[number];
 export const TEMPLATE_ORIENTATIONS = ['auto', 'portrait', 'landscape'] as const;
 export type TemplateOrientation = (typeof TEMPLATE_ORIENTATIONS)[number];
 
-/** A bounded length in mm; the error says what is allowed (the style of schema.ts). */
-function mm(min: number, max: number) {
-  const allowed = `allowed: a number from ${min} mm to ${max} mm`;
-  return z.number({ error: allowed }).gte(min, { error: allowed }).lte(max, { error: allowed });
-}
+/** A bounded length in mm (see boundedNumber). */
+const mm = (min: number, max: number) => boundedNumber({ min, max, unit: 'mm' });
 
 export const templateSection = z
   .strictObject({
