@@ -1,8 +1,8 @@
 import { readFileSync } from 'node:fs';
 import cliProgress from 'cli-progress';
-import { layoutDial, plateDrawing, type DialLayout, type DialSpec } from '@umbrafab/geometry';
+import { WEDGE_MAX_TILT_DEG, type DialLayout, type DialSpec } from '@umbrafab/geometry';
 import { toReportJson } from '@umbrafab/fabricate';
-import { GENERATOR } from '../buildFiles.ts';
+import { buildContext, GENERATOR } from '../buildFiles.ts';
 import { partsOutputs } from '../outputs/partsOutputs.ts';
 import { plateOutputs } from '../outputs/plateOutputs.ts';
 import { utf8 } from '../outputs/outputTypes.ts';
@@ -11,8 +11,8 @@ import { writeFilesAtomic, type OutputFile } from '../writeFilesAtomic.ts';
 import { specBaseName } from './build.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
-/** The steepest wedge that can be printed (parts/wedgeSolid WEDGE_MAX_TILT_DEG). */
-const MAX_LATITUDE_DEG = 89;
+/** The steepest wedge that can be printed. */
+const MAX_LATITUDE_DEG = WEDGE_MAX_TILT_DEG;
 /** Show a progress bar from this many latitudes on ("long runs"). */
 const PROGRESS_FROM = 4;
 
@@ -54,8 +54,8 @@ export const batchCommand: CommandModule = {
     try {
       for (const lat of latitudes) {
         const spec: DialSpec = { ...base, site: { ...base.site, latitude: lat } };
-        const layout = layoutDial(spec);
-        const ctx = { spec, layout, drawing: plateDrawing(layout) };
+        const ctx = buildContext(spec);
+        const { layout } = ctx;
         const plate = (await plateOutputs(ctx)).files;
         const parts = await partsOutputs(ctx);
         const wedge = parts.report.wedge as { angleDeg?: number } | undefined;
