@@ -1,6 +1,7 @@
 import { defaultPictureDate, sunForPicture, viewAssembly } from '@umbrafab/geometry';
 import { svgWidthMm, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM } from '@umbrafab/fabricate';
 import { previewSvgText } from './plateOutputs.ts';
+import type { OutputFile } from '../writeFilesAtomic.ts';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
 
 /**
@@ -10,74 +11,79 @@ import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
  * the report's `pictures` and `template` sections.
  */
 export const picturesOutputs: Producer = async (ctx) => {
+  // The pictures start first: their PNGs render on worker threads while the PDF is laid out here.
+  const pictures = ctx.spec.pictures.write ? pictureOutputs(ctx) : undefined;
+  const template = ctx.spec.template.write ? templateOutputs(ctx) : undefined;
+  const [p, t] = await Promise.all([pictures, template]);
+  return {
+    files: [...(p?.files ?? []), ...(t?.files ?? [])],
+    report: { pictures: p?.report, template: t?.report },
+  };
+};
+
+/** preview.png, assembly.svg and assembly.png, and the report's `pictures` section. */
+async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: Record<string, unknown> }> {
   const { spec, layout, drawing } = ctx;
   const pics = spec.pictures;
   const ppm = pics.pxPerMm;
-  if (!pics.write && !spec.template.write) return { files: [], report: {} };
   const preview = previewSvgText(ctx);
   // Start rendering before anything else, on a worker thread.
-  const previewPngJob = pics.write ? toPngAsync(preview, { pxPerMm: ppm }) : undefined;
-
+  const previewPngJob = toPngAsync(preview, { pxPerMm: ppm });
   const date = pics.date ?? defaultPictureDate(layout);
   const sun = sunForPicture(layout, date, pics.time);
   const picture = viewAssembly(layout, drawing, sun, { viewAzimuthDeg: pics.viewAzimuth, viewElevationDeg: pics.viewElevation });
   const assemblySvg = toAssemblySvg(picture, { title: `${spec.name} on its ${Math.abs(spec.site.latitude)}° wedge, ${date}, shadow on ${pics.time}` });
-  const tOpts = { paper: spec.template.paper, orientation: spec.template.orientation, overlapMm: spec.template.overlap, marginMm: spec.template.margin };
-  // The two PNGs render on worker threads while the PDF is laid out here.
-  const [previewPng, assemblyPng, pdf] = await Promise.all([
-    previewPngJob,
-    pics.write ? toPngAsync(assemblySvg, { pxPerMm: ppm }) : undefined,
-    spec.template.write
-      ? toTemplatePdf({ drawing, marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name }, tOpts)
-      : undefined,
-  ]);
-  const tiles = templateTiles(drawing, tOpts);
+  const [previewPng, assemblyPng] = await Promise.all([previewPngJob, toPngAsync(assemblySvg, { pxPerMm: ppm })]);
   const size = (png: Uint8Array) => ({ widthPx: readU32(png, 16), heightPx: readU32(png, 20) });
   const r3 = (v: number) => Math.round(v * 1000) / 1000;
   return {
     files: [
-      ...(previewPng && assemblyPng
-        ? [
-            { name: 'preview.png', bytes: previewPng },
-            { name: 'assembly.svg', bytes: utf8(assemblySvg) },
-            { name: 'assembly.png', bytes: assemblyPng },
-          ]
-        : []),
-      ...(pdf ? [{ name: 'template.pdf', bytes: pdf }] : []),
+      { name: 'preview.png', bytes: previewPng },
+      { name: 'assembly.svg', bytes: utf8(assemblySvg) },
+      { name: 'assembly.png', bytes: assemblyPng },
     ],
     report: {
-      pictures: previewPng && assemblyPng ? {
-        pxPerMm: ppm,
-        preview: { widthMm: svgWidthMm(preview), ...size(previewPng) },
-        assembly: {
-          widthMm: picture.widthMm,
-          heightMm: picture.heightMm,
-          ...size(assemblyPng),
-          date,
-          dialTime: sun.dialTime,
-          clock: sun.clock,
-          daylightSaving: sun.daylightSaving,
-          utc: sun.utc,
-          sunAltitudeDeg: r3(sun.altitudeDeg),
-          sunAzimuthDeg: r3(sun.azimuthDeg),
-          shadowStyle: picture.shadow.style,
-          shadowEdgeXMm: r3(picture.shadow.edgeXMm),
-          wedgeTiltDeg: r3((picture.assembly.tiltRad * 180) / Math.PI),
-          viewAzimuthDeg: pics.viewAzimuth,
-          viewElevationDeg: pics.viewElevation,
-        },
-      } : undefined,
-      template: pdf ? {
-        paper: tiles.paper,
-        orientation: tiles.orientation,
-        sheets: { columns: tiles.columns, rows: tiles.rows },
-        overlapMm: tiles.overlapMm,
-        calibrationBarMm: CALIBRATION_BAR_MM,
-        scale: '1:1',
-      } : undefined,
+      pxPerMm: ppm,
+      preview: { widthMm: svgWidthMm(preview), ...size(previewPng) },
+      assembly: {
+        widthMm: picture.widthMm,
+        heightMm: picture.heightMm,
+        ...size(assemblyPng),
+        date,
+        dialTime: sun.dialTime,
+        clock: sun.clock,
+        daylightSaving: sun.daylightSaving,
+        utc: sun.utc,
+        sunAltitudeDeg: r3(sun.altitudeDeg),
+        sunAzimuthDeg: r3(sun.azimuthDeg),
+        shadowStyle: picture.shadow.style,
+        shadowEdgeXMm: r3(picture.shadow.edgeXMm),
+        wedgeTiltDeg: r3((picture.assembly.tiltRad * 180) / Math.PI),
+        viewAzimuthDeg: pics.viewAzimuth,
+        viewElevationDeg: pics.viewElevation,
+      },
     },
   };
-};
+}
+
+/** template.pdf and the report's `template` section. */
+async function templateOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: Record<string, unknown> }> {
+  const { spec, layout, drawing } = ctx;
+  const tOpts = { paper: spec.template.paper, orientation: spec.template.orientation, overlapMm: spec.template.overlap, marginMm: spec.template.margin };
+  const pdf = await toTemplatePdf({ drawing, marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name }, tOpts);
+  const tiles = templateTiles(drawing, tOpts);
+  return {
+    files: [{ name: 'template.pdf', bytes: pdf }],
+    report: {
+      paper: tiles.paper,
+      orientation: tiles.orientation,
+      sheets: { columns: tiles.columns, rows: tiles.rows },
+      overlapMm: tiles.overlapMm,
+      calibrationBarMm: CALIBRATION_BAR_MM,
+      scale: '1:1',
+    },
+  };
+}
 
 /** Big-endian uint32 (PNG IHDR width at byte 16, height at 20). */
 function readU32(b: Uint8Array, at: number): number {
