@@ -46,14 +46,3 @@ export function clipPolygonAbovePlane(points: readonly Vec3[], height: (p: Vec3)
   }
   return out;
 }
-
-/** Signed area of a 2D polygon (positive when CCW), shoelace formula. */
-export function signedArea(points: readonly Vec2[]): number {
-  let a = 0;
-  for (let i = 0; i < points.length; i++) {
-    const p = points[i];
-    const q = points[(i + 1) % points.length];
-    a += p[0] * q[1] - q[0] * p[1];
-  }
-  return a / 2;
-}

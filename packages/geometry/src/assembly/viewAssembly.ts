@@ -5,7 +5,8 @@ import type { PlateDrawing } from '../plate/plateDrawing.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { Vec2 } from '../types.ts';
 import type { AssemblyView, Facet, PictureItem } from './assemblyTypes.ts';
-import { clipPolygonAbovePlane, clipPolygonConvex, signedArea } from './clipPolygon.ts';
+import { shoelaceArea } from '../parts/ring2d.ts';
+import { clipPolygonAbovePlane, clipPolygonConvex } from './clipPolygon.ts';
 import { gnomonShadowOnFace, type FaceShadow } from './gnomonShadowOnFace.ts';
 import { faceToWorld, placeAssembly, roundedRectOutline, worldToFaceDirection, type Assembly } from './placeAssembly.ts';
 import type { PictureSun } from './sunForPicture.ts';
@@ -95,7 +96,7 @@ export function viewAssembly(layout: DialLayout, drawing: PlateDrawing, sun: Pic
     for (const f of part.facets) {
       if (dot3(f.normal, s) <= 1e-9) continue;
       let q: Vec2[] = f.points.map((p) => [p[0] - (p[2] / s[2]) * s[0], p[1] - (p[2] / s[2]) * s[1]]);
-      const a = signedArea(q);
+      const a = shoelaceArea(q);
       if (Math.abs(a) < 1e-9) continue;
       if (a < 0) q = q.reverse();
       q = clipPolygonConvex(q, groundRect);
