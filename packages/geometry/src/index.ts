@@ -10,6 +10,7 @@ export * from './polar/markOffset.ts';
 export * from './polar/numeralText.ts';
 export * from './polar/layoutDial.ts';
 export * from './plate/plateDrawing.ts';
+export * from './sheet/sheetPart.ts';
 export * from './polar/markField.ts';
 export * from './polar/clipPolyline.ts';
 export * from './polar/calendarLines.ts';
