@@ -71,7 +71,7 @@ describe.each(cases.map((c, i) => ({ ...c, i })))('plate.dxf read back by ezdxf:
   });
 
   it('grows the outer profile and shrinks slots and holes by kerf/2', () => {
-    // Kerf compensation, common practice (DESIGN §5).
+    // Kerf compensation, common practice (docs/design.md §5).
     const cut = dump.entities.filter((e) => e.layer === 'CUT_PROFILE');
     const polys = cut.filter((e) => e.type === 'LWPOLYLINE');
     const bbox = (e: (typeof polys)[number]) => {

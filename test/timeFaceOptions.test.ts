@@ -15,7 +15,7 @@ describe('face options for clock time', () => {
     expect(() => layoutDial(parseSpec({ site: { latitude: 22.57, longitude: 88.36, timezone: 'Asia/Kolkata' }, dial: { summerNumerals: true } }))).toThrow(/dial\.summerNumerals/);
   });
 
-  it('marks.followPenumbra widens marks as 1/cos² H (DESIGN §3), capped at half the gap to a neighbour', () => {
+  it('marks.followPenumbra widens marks as 1/cos² H (docs/design.md §3), capped at half the gap to a neighbour', () => {
     const plain = layoutDial(parseSpec({ site, hours: { step: 60 } }));
     const wide = layoutDial(parseSpec({ site, hours: { step: 60 }, marks: { followPenumbra: true } }));
     let exact = 0;
@@ -33,7 +33,7 @@ describe('face options for clock time', () => {
     const built = await buildFiles(spec);
     const curves = built.report.meanTimeCurves as { clockTime: string; polylines: [number, number][][] }[];
     expect(curves.map((c) => c.clockTime)).toEqual(['08:00', '09:00', '10:00', '11:00', '12:00', '13:00', '14:00', '15:00', '16:00']);
-    // 13:00: H = 15° − 3.41° + E/4 (DESIGN §3); E max 16.44 min on Nov 3 (sun module, see timeNoonAndEot test).
+    // 13:00: H = 15° − 3.41° + E/4 (docs/design.md §3); E max 16.44 min on Nov 3 (sun module, see timeNoonAndEot test).
     const xs = curves.find((c) => c.clockTime === '13:00')!.polylines.flat().map((p) => p[0]);
     const h = 50;
     const t = 3;
