@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { boundedNumber } from './boundedNumber.ts';
 import { checkSection } from './sections/checkSection.ts';
+import { cutFilesSection } from './sections/cutFilesSection.ts';
 import { engraveSection } from './sections/engraveSection.ts';
 import { installSection } from './sections/installSection.ts';
 import { partsSection } from './sections/partsSection.ts';
@@ -135,6 +136,7 @@ export const specSchema = z.strictObject({
   check: checkSection,
   template: templateSection,
   pictures: picturesSection,
+  cutFiles: cutFilesSection,
   process: z
     .strictObject({
       method: oneOf(METHODS).default('laser').describe('laser, waterjet, router or print'),
