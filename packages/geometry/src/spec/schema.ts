@@ -154,7 +154,7 @@ export type DialSpec = Omit<z.output<typeof specSchema>, 'process'> & {
 };
 
 /**
- * Per-method allowances (DESIGN §5, typical values, common practice):
+ * Per-method allowances (docs/design.md §5, typical values, common practice):
  * laser kerf 0.1–0.25 mm, waterjet 0.8–1.0 mm, router kerf = tool diameter
  * (1/8" = 3.175 mm end mill), print none; fit clearance 0.2 mm per side for
  * prints, 0.1 mm for cut parts.
