@@ -33,3 +33,4 @@ export * from './parts/index.ts';
 export * from './spec/sections/partsSection.ts';
 export * from './shadow/index.ts';
 export * from './assembly/index.ts';
+export * from './planar/index.ts';
