@@ -8,6 +8,7 @@ export * from './engrave/index.ts';
 export * from './stl/index.ts';
 export * from './dxf/toGnomonDxf.ts';
 export * from './dxf/offsetRingMiter.ts';
+export * from './dxf/toPartsDxf.ts';
 export * from './install/toInstallMd.ts';
 export * from './install/markdownText.ts';
 export * from './template/index.ts';

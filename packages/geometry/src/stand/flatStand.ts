@@ -1,7 +1,10 @@
 import type { Vec3 } from '../parts/mesh.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { SheetPart } from '../sheet/sheetPart.ts';
-import type { Circle, Path, Vec2 } from '../types.ts';
+import { relievedSlot, relieveTabRoots } from '../sheet/cornerRelief.ts';
+import { CHORD_TOLERANCE_MM } from '../sheet/arcPoints.ts';
+import { reliefToolRadius } from '../sheet/sheetParts.ts';
+import type { Circle, Path, RoundedRect, Vec2 } from '../types.ts';
 import { mountingFixings } from './mountingFixings.ts';
 import { standDimensions, type StandSizing } from './standDimensions.ts';
 import type { FlatStand, PartPlacement, StandInstance, StandJoint } from './standTypes.ts';
@@ -13,15 +16,58 @@ export interface SizedStand extends FlatStand {
 
 const path = (points: readonly Vec2[]): Path => ({ kind: 'path', points, closed: true });
 
+/** Options of `flatStand`. */
+export interface FlatStandOptions {
+  /** radius of the round tool the inside corners are relieved for, mm (default: reliefToolRadius(spec), the router's tool radius); 0 = none */
+  readonly reliefToolRadiusMm: number;
+  /** largest gap between an arc and its polyline, mm (default cutFiles.chordTolerance) */
+  readonly chordToleranceMm: number;
+}
+
+/** A nominal slot: centre, unit axis along the tab's length, length and width (tab + 2 · clearance). */
+interface NominalSlot {
+  readonly centre: Vec2;
+  readonly axis: Vec2;
+  readonly lengthMm: number;
+  readonly widthMm: number;
+}
+
+/** The cut-out of an axis-aligned nominal slot, relieved for the tool (dog-bones or round ends), clockwise as SheetPart's inner paths are. */
+function slotCut(slot: NominalSlot, toolRadiusMm: number, toleranceMm: number): Path {
+  const along = Math.abs(slot.axis[0]) > 0.5;
+  const rect: RoundedRect = { kind: 'rect', cx: slot.centre[0], cy: slot.centre[1], widthMm: along ? slot.lengthMm : slot.widthMm, heightMm: along ? slot.widthMm : slot.lengthMm, cornerRadiusMm: 0 };
+  const p = relievedSlot(rect, toolRadiusMm, toleranceMm).path;
+  return { ...p, points: [...p.points].reverse() };
+}
+
 /**
- * A slot as a clockwise rectangle (DXF inner-profile convention of SheetPart)
- * centred on `c`, its first edge p0→p1 running `lengthMm` along the unit
- * vector `a`, `widthMm` across.
+ * T-bone relief at the tab roots along a straight edge of a counter-clockwise
+ * outline that runs through `on` with direction `dir` (material on its left):
+ * the outline is turned so the edge lies level with the material above it,
+ * relieved as the gnomon's tab roots are (relieveTabRoots), and turned back.
  */
-function slotPath(c: Vec2, a: Vec2, lengthMm: number, widthMm: number): Path {
-  const r: Vec2 = [a[1], -a[0]]; // right of a: the clockwise turn
-  const p = (sa: number, sr: number): Vec2 => [c[0] + a[0] * sa * lengthMm / 2 + r[0] * sr * widthMm / 2, c[1] + a[1] * sa * lengthMm / 2 + r[1] * sr * widthMm / 2];
-  return path([p(-1, -1), p(1, -1), p(1, 1), p(-1, 1)]);
+function relieveAlong(outline: readonly Vec2[], on: Vec2, dir: Vec2, toolRadiusMm: number, toleranceMm: number): Vec2[] {
+  if (!(toolRadiusMm > 0)) return [...outline];
+  // Rotate by −angle(dir): the edge runs along +x, the material (left of dir) above it.
+  const c = dir[0];
+  const s = -dir[1];
+  const rot = ([x, y]: Vec2): Vec2 => [x * c - y * s, x * s + y * c];
+  const back = ([x, y]: Vec2): Vec2 => [x * c + y * s, -x * s + y * c];
+  const turned = outline.map(rot);
+  const z = rot(on)[1];
+  // Snap the edge's corners onto one level (they are collinear only to rounding).
+  const snapped = turned.map(([x, y]): Vec2 => [x, Math.abs(y - z) < 1e-7 ? z : y]);
+  return relieveTabRoots(snapped, toolRadiusMm, z, toleranceMm).map((p, i) => {
+    const k = snapped.indexOf(p);
+    return k >= 0 ? outline[k] : back(p);
+  });
+}
+
+/** Index of the corner equal to `p` (to 1 nm) in an outline. */
+function indexOf(outline: readonly Vec2[], p: Vec2): number {
+  const i = outline.findIndex((q) => Math.abs(q[0] - p[0]) < 1e-6 && Math.abs(q[1] - p[1]) < 1e-6);
+  if (i < 0) throw new Error(`flatStand: corner (${p[0]}, ${p[1]}) lost in the relieved outline`);
+  return i;
 }
 
 /** A counter-clockwise rectangle from its lower-left corner. */
@@ -55,8 +101,10 @@ function rectPath(w: number, h: number): Path {
  *
  * @example flatStand(layoutDial(spec)).parts.map((p) => p.name) // ['stand-cheek', 'stand-foot', 'stand-rail', 'stand-cross']
  */
-export function flatStand(layout: DialLayout): SizedStand {
+export function flatStand(layout: DialLayout, options: Partial<FlatStandOptions> = {}): SizedStand {
   const z = standDimensions(layout);
+  const tool = options.reliefToolRadiusMm ?? reliefToolRadius(layout.spec);
+  const tol = options.chordToleranceMm ?? layout.spec.cutFiles?.chordTolerance ?? CHORD_TOLERANCE_MM;
   const T = z.thicknessMm;
   const c = z.clearanceMm;
   const phi = z.tiltRad;
@@ -78,20 +126,20 @@ export function flatStand(layout: DialLayout): SizedStand {
   const footCentres = [fb / 2, uB - fb / 2];
   const footTab = fb / 2;
   const outer: Vec2[] = [[0, T]];
-  const footTabVertex: number[] = [];
+  const footTabRoot: Vec2[] = [];
   for (const u of footCentres) {
-    footTabVertex.push(outer.length);
+    footTabRoot.push([u - footTab / 2, T]);
     outer.push([u - footTab / 2, T], [u - footTab / 2, 0], [u + footTab / 2, 0], [u + footTab / 2, T]);
   }
   outer.push([uB, T], [uB, vB]);
-  const railTabVertex: number[] = new Array(z.rails.length);
+  const railTabRoot: Vec2[] = new Array(z.rails.length);
   for (let k = z.rails.length - 1; k >= 0; k--) {
     const r = z.rails[k];
     const sc = r.lowerEdgeMm + r.widthMm / 2;
     const half = r.widthMm / 4;
     const hi = seatLine(sc + half);
     const lo = seatLine(sc - half);
-    railTabVertex[k] = outer.length;
+    railTabRoot[k] = hi;
     outer.push(hi, [hi[0] + T * n2[0], hi[1] + T * n2[1]], [lo[0] + T * n2[0], lo[1] + T * n2[1]], lo);
   }
   if (uA > 1e-9) outer.push([uA, vA]);
@@ -107,25 +155,32 @@ export function flatStand(layout: DialLayout): SizedStand {
   const hs = H / 2; // the cross member's height; its tabs are half that
   const vsc = T + H / 2; // slot centre height
   const crossTab = hs / 2;
+  const crossSlot: NominalSlot = { centre: [us, vsc], axis: [0, 1], lengthMm: crossTab + 2 * c, widthMm: T + 2 * c };
+  // Inside corners relieved for a round tool: the tab roots along the foot line and along the seat line.
+  const cheekOutline = relieveAlong(relieveAlong(outer, [0, T], [1, 0], tool, tol), seatLine(0), [-cos, -sin], tool, tol);
+  const footTabVertex = footTabRoot.map((p) => indexOf(cheekOutline, p));
+  const railTabVertex = railTabRoot.map((p) => indexOf(cheekOutline, p));
   const cheek: SheetPart = {
     name: 'stand-cheek',
     material,
     thicknessMm: T,
     quantity: 2,
-    outer: path(outer),
-    inner: [slotPath([us, vsc], [0, 1], crossTab + 2 * c, T + 2 * c)],
+    outer: path(cheekOutline),
+    inner: [slotCut(crossSlot, tool, tol)],
   };
 
   // ---- feet
   const Lf = z.footLengthMm;
-  const footInner: (Path | Circle)[] = [-1, 1].map((s) => slotPath([Lf / 2 + s * xc, fb / 2], [0, 1], footTab + 2 * c, T + 2 * c));
+  const footSlots = [-1, 1].map((s): NominalSlot => ({ centre: [Lf / 2 + s * xc, fb / 2], axis: [0, 1], lengthMm: footTab + 2 * c, widthMm: T + 2 * c }));
+  const footInner: (Path | Circle)[] = footSlots.map((sl) => slotCut(sl, tool, tol));
   if (z.anchor) for (const s of [-1, 1]) footInner.push({ kind: 'circle', cx: Lf / 2 + s * z.anchorOffsetMm, cy: fb / 2, radiusMm: z.anchorDiameterMm / 2 });
   const foot: SheetPart = { name: 'stand-foot', material, thicknessMm: T, quantity: 2, outer: rectPath(Lf, fb), inner: footInner };
 
   // ---- seat rails, drilled at the plate's own hole centres
   const fixings = mountingFixings(layout);
-  const railParts = z.rails.map((r): SheetPart => {
-    const inner: (Path | Circle)[] = [-1, 1].map((s) => slotPath([W / 2 + s * xc, r.widthMm / 2], [0, -1], r.widthMm / 2 + 2 * c, T + 2 * c));
+  const railSlots = z.rails.map((r) => [-1, 1].map((s): NominalSlot => ({ centre: [W / 2 + s * xc, r.widthMm / 2], axis: [0, -1], lengthMm: r.widthMm / 2 + 2 * c, widthMm: T + 2 * c })));
+  const railParts = z.rails.map((r, k): SheetPart => {
+    const inner: (Path | Circle)[] = railSlots[k].map((sl) => slotCut(sl, tool, tol));
     for (const f of fixings) {
       const y = f.plateMm[1] - r.lowerEdgeMm;
       if (y > 0 && y < r.widthMm) inner.push({ kind: 'circle', cx: f.plateMm[0], cy: y, radiusMm: f.diameterMm / 2 });
@@ -147,7 +202,10 @@ export function flatStand(layout: DialLayout): SizedStand {
   const y0 = hs / 4;
   const y1 = (3 * hs) / 4;
   const crossOuter: Vec2[] = [[T, 0], [2 * xc, 0], [2 * xc, y0], [Lc, y0], [Lc, y1], [2 * xc, y1], [2 * xc, hs], [T, hs], [T, y1], [0, y1], [0, y0], [T, y0]];
-  const cross: SheetPart = { name: 'stand-cross', material, thicknessMm: T, outer: path(crossOuter), inner: [] };
+  // Its tabs' inside corners lie on the cheeks' inner faces: x = T (walked down) and x = 2·xc (walked up).
+  const crossOutline = relieveAlong(relieveAlong(crossOuter, [T, 0], [0, -1], tool, tol), [2 * xc, 0], [0, 1], tool, tol);
+  const crossTabVertex = [indexOf(crossOutline, [T, y1]), indexOf(crossOutline, [2 * xc, y0])];
+  const cross: SheetPart = { name: 'stand-cross', material, thicknessMm: T, outer: path(crossOutline), inner: [] };
 
   // ---- intended placements (stand frame: x across, y toward the pole, z up)
   const X: Vec3 = [1, 0, 0];
@@ -169,13 +227,13 @@ export function flatStand(layout: DialLayout): SizedStand {
   ];
   const joints: StandJoint[] = [];
   for (const [i, cheekId] of ['cheek-1', 'cheek-2'].entries()) {
-    joints.push({ tab: { instance: cheekId, vertex: footTabVertex[0] }, slot: { instance: 'foot-front', inner: i, reversed: false }, entersFrom: 'front' });
-    joints.push({ tab: { instance: cheekId, vertex: footTabVertex[1] }, slot: { instance: 'foot-rear', inner: i, reversed: false }, entersFrom: 'front' });
-    z.rails.forEach((_, k) => joints.push({ tab: { instance: cheekId, vertex: railTabVertex[k] }, slot: { instance: `rail-${k + 1}`, inner: i, reversed: false }, entersFrom: 'back' }));
+    joints.push({ tab: { instance: cheekId, vertex: footTabVertex[0] }, slot: { instance: 'foot-front', inner: i, ...footSlots[i] }, entersFrom: 'front' });
+    joints.push({ tab: { instance: cheekId, vertex: footTabVertex[1] }, slot: { instance: 'foot-rear', inner: i, ...footSlots[i] }, entersFrom: 'front' });
+    z.rails.forEach((_, k) => joints.push({ tab: { instance: cheekId, vertex: railTabVertex[k] }, slot: { instance: `rail-${k + 1}`, inner: i, ...railSlots[k][i] }, entersFrom: 'back' }));
   }
   // The cross member's −x end tab runs down (r0→r1 = −z), its +x end tab up.
-  joints.push({ tab: { instance: 'cross', vertex: 8 }, slot: { instance: 'cheek-1', inner: 0, reversed: true }, entersFrom: 'front' });
-  joints.push({ tab: { instance: 'cross', vertex: 2 }, slot: { instance: 'cheek-2', inner: 0, reversed: false }, entersFrom: 'back' });
+  joints.push({ tab: { instance: 'cross', vertex: crossTabVertex[0] }, slot: { instance: 'cheek-1', inner: 0, ...crossSlot, axis: [0, -1] }, entersFrom: 'front' });
+  joints.push({ tab: { instance: 'cross', vertex: crossTabVertex[1] }, slot: { instance: 'cheek-2', inner: 0, ...crossSlot }, entersFrom: 'back' });
 
   const [su, sv] = seatLine(0);
   const seat = place([-W / 2, su + T * n2[0], sv + T * n2[1]], X, up, nrm);

@@ -6,3 +6,7 @@ export * from './flatStand.ts';
 export * from './sheetPartMesh.ts';
 export * from './placeStandPart.ts';
 export * from './standSolid.ts';
+export * from './standSheetParts.ts';
+export * from './fastenerTable.ts';
+export * from './pieceRows.ts';
+export * from './sheetPartAreaMm2.ts';

@@ -1,5 +1,6 @@
 import type { Vec3 } from '../parts/mesh.ts';
 import type { SheetPart } from '../sheet/sheetPart.ts';
+import type { Vec2 } from '../types.ts';
 
 /**
  * Plain-data types of the flat-pack stand.
@@ -37,15 +38,23 @@ export interface StandInstance {
  * - tab: four consecutive corners of the tab part's outer profile starting at
  *   `vertex`: root r0, tip t0, tip t1, root r1 (r0→r1 the shoulder, r0→t0 the
  *   way the tab points, |r0 t0| its depth);
- * - slot: the closed path inner[`inner`] of the slotted part, a rectangle whose
- *   first edge p0→p1 runs along the tab's length (`reversed`: the tab's
- *   r0→r1 runs p1→p0);
+ * - slot: the cut-out inner[`inner`] of the slotted part (with its corner
+ *   relief), made for the nominal rectangle given here in the slotted part's
+ *   drawing: its centre, the unit axis the tab's r0→r1 runs along, its length
+ *   (tab length + 2 · clearance) and width (sheet thickness + 2 · clearance);
  * - entersFrom: the side of the slotted part the tab comes in from, its drawn
  *   face ('front', so the tab points along −normal) or the other ('back').
  */
 export interface StandJoint {
   readonly tab: { readonly instance: string; readonly vertex: number };
-  readonly slot: { readonly instance: string; readonly inner: number; readonly reversed: boolean };
+  readonly slot: {
+    readonly instance: string;
+    readonly inner: number;
+    readonly centre: Vec2;
+    readonly axis: Vec2;
+    readonly lengthMm: number;
+    readonly widthMm: number;
+  };
   readonly entersFrom: 'front' | 'back';
 }
 
