@@ -123,7 +123,12 @@ export function flatStand(layout: DialLayout, options: Partial<FlatStandOptions>
   const vB = vA + L * sin;
   const seatLine = (s: number): Vec2 => [uA + s * cos, vA + s * sin];
   const n2: Vec2 = [-sin, cos]; // the seat's normal in the cheek's plane
-  const footCentres = [fb / 2, uB - fb / 2];
+  // The high end: square to the seat for a depth D below it (no acute spike, and
+  // room for the last tab's relief), then plumb down to the foot line.
+  const D = Math.min(Math.max(2 * T, 8), (vB - T) / 2);
+  const B2: Vec2 = [uB + D * sin, vB - D * cos];
+  const uEnd = B2[0];
+  const footCentres = [fb / 2, uEnd - fb / 2];
   const footTab = fb / 2;
   const outer: Vec2[] = [[0, T]];
   const footTabRoot: Vec2[] = [];
@@ -131,7 +136,7 @@ export function flatStand(layout: DialLayout, options: Partial<FlatStandOptions>
     footTabRoot.push([u - footTab / 2, T]);
     outer.push([u - footTab / 2, T], [u - footTab / 2, 0], [u + footTab / 2, 0], [u + footTab / 2, T]);
   }
-  outer.push([uB, T], [uB, vB]);
+  outer.push([uEnd, T], B2, [uB, vB]);
   const railTabRoot: Vec2[] = new Array(z.rails.length);
   for (let k = z.rails.length - 1; k >= 0; k--) {
     const r = z.rails[k];
@@ -142,15 +147,17 @@ export function flatStand(layout: DialLayout, options: Partial<FlatStandOptions>
     railTabRoot[k] = hi;
     outer.push(hi, [hi[0] + T * n2[0], hi[1] + T * n2[1]], [lo[0] + T * n2[0], lo[1] + T * n2[1]], lo);
   }
-  if (uA > 1e-9) outer.push([uA, vA]);
-  outer.push([0, vA]);
+  // A toe steps down by one sheet thickness from the seat's lower corner, so
+  // that corner stays convex and the first seat tab keeps its relief room.
+  if (uA > 1e-9) outer.push([uA, vA], [uA, vA - T], [0, vA - T]);
+  else outer.push([0, vA]);
 
   // The cross member: at the middle of the run when it has room there, else in the middle of the toe.
   const slotHalf = T / 2 + c;
   const roomInRun = L * cos / 2 >= slotHalf + 2 * T;
   const us = roomInRun ? uA + (L * cos) / 2 : uA / 2;
-  const topAt = (u: number) => (u <= uA ? vA : vA + (u - uA) * Math.tan(phi));
-  const bandTop = Math.min(topAt(us - slotHalf), roomInRun ? Infinity : vA);
+  const topAt = (u: number) => (u <= uA ? vA - T : vA + (u - uA) * Math.tan(phi));
+  const bandTop = Math.min(topAt(us - slotHalf), roomInRun ? Infinity : vA - T);
   const H = bandTop - T;
   const hs = H / 2; // the cross member's height; its tabs are half that
   const vsc = T + H / 2; // slot centre height
@@ -218,7 +225,7 @@ export function flatStand(layout: DialLayout, options: Partial<FlatStandOptions>
     { id: 'cheek-1', part: cheek.name, placement: place([-xc, 0, 0], Y, Z, X) },
     { id: 'cheek-2', part: cheek.name, placement: place([xc, 0, 0], Y, Z, X) },
     { id: 'foot-front', part: foot.name, placement: place([-Lf / 2, 0, T / 2], X, Y, Z) },
-    { id: 'foot-rear', part: foot.name, placement: place([-Lf / 2, uB - fb, T / 2], X, Y, Z) },
+    { id: 'foot-rear', part: foot.name, placement: place([-Lf / 2, uEnd - fb, T / 2], X, Y, Z) },
     ...z.rails.map((r, k): StandInstance => {
       const [u, v] = seatLine(r.lowerEdgeMm);
       return { id: `rail-${k + 1}`, part: railPartName[k], placement: place([-W / 2, u + (T / 2) * n2[0], v + (T / 2) * n2[1]], X, up, nrm) };
@@ -253,12 +260,12 @@ export function flatStand(layout: DialLayout, options: Partial<FlatStandOptions>
       footLengthMm: Lf,
       anchorOffsetMm: z.anchorOffsetMm,
       lowEndMm: z.lowEndMm,
-      footprintLengthMm: z.footprintLengthMm,
+      footprintLengthMm: uEnd,
       toeMm: z.toeMm,
       heightMm: z.heightMm,
     },
     seat,
-    footprint: { xMinMm: -halfX, xMaxMm: halfX, yMinMm: 0, yMaxMm: uB },
+    footprint: { xMinMm: -halfX, xMaxMm: halfX, yMinMm: 0, yMaxMm: uEnd },
     sizing: z,
   };
 }
