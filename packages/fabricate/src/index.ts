@@ -13,3 +13,4 @@ export * from './install/markdownText.ts';
 export * from './template/index.ts';
 export * from './pictures/index.ts';
 export * from './check/index.ts';
+export * from './process/assertToolFits.ts';

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { boundedNumber } from './boundedNumber.ts';
 import { freeText } from './freeText.ts';
 import { checkSection } from './sections/checkSection.ts';
+import { cutFilesSection } from './sections/cutFilesSection.ts';
 import { engraveSection } from './sections/engraveSection.ts';
 import { installSection } from './sections/installSection.ts';
 import { partsSection } from './sections/partsSection.ts';
@@ -136,6 +137,7 @@ export const specSchema = z.strictObject({
   check: checkSection,
   template: templateSection,
   pictures: picturesSection,
+  cutFiles: cutFilesSection,
   process: z
     .strictObject({
       method: oneOf(METHODS).default('laser').describe('laser, waterjet, router or print'),
