@@ -1,4 +1,4 @@
-// Benchmark of `umbrafab check`'s simulation (issue 6): a full year at
+// Benchmark of `umbrafab check`'s simulation: a full year at
 // 1-minute sampling for a ten-hour dial (07:00–17:00, about 220,000 Sun
 // positions). Not a test: run it by hand and copy the figure into the README.
 //

@@ -2,7 +2,7 @@
  * `pnpm bench`: wall time and peak memory of umbrafab's main jobs, each
  * against bare Node start-up importing the same libraries, in one run.
  * Every figure is the median of RUNS child processes (each a fresh Node).
- * Targets (issue 8): a full build ≤ 1.5 × the bare start-up; a 50-latitude
+ * Targets: a full build ≤ 1.5 × the bare start-up; a 50-latitude
  * batch ≤ 10 × a single build. Prints a Markdown table for the README.
  */
 import { spawnSync } from 'node:child_process';

@@ -47,7 +47,7 @@ describe('umbrafab batch', () => {
     const summary = JSON.parse(readFileSync(join(out, 'batch.json'), 'utf8'));
     expect(summary.plate.shared).toBe(true);
     for (const lat of lats) {
-      // The tilt equals |latitude| (DESIGN §4), read back from the STL's seat facets.
+      // The tilt equals |latitude| (docs/design.md §4), read back from the STL's seat facets.
       expectClose(seatTiltDeg(readFileSync(join(out, `wedge-N${lat}.stl`))), lat, 0.01, `wedge-N${lat}.stl seat tilt`, '°');
       expect(summary.latitudes.find((x: { latitudeDeg: number }) => x.latitudeDeg === lat).wedgeAngleDeg).toBe(lat);
     }

@@ -83,7 +83,7 @@ describe.skipIf(!existsSync(CHROMIUM))('the dial page in a real browser (Debian 
     await page.locator('#f-gnomon-height').fill('40');
     probe = await redrawn(page, n);
     console.log(`field change → redrawn views (gnomon.height): ${Math.round(probe.lastRedrawMs)} ms ${JSON.stringify(probe.timings)}`);
-    // The 45° check (common practice, DESIGN §2): the 15:00 line lies t/2 + h from the centre plane.
+    // The 45° check (common practice, docs/design.md §2): the 15:00 line lies t/2 + h from the centre plane.
     expect(await number(page, 'mark15')).toMatch(/^41\.5 mm/);
     expect(await number(page, 'gnomon')).toBe('40 mm × 3 mm');
     const mark15After = await page.locator('#face svg #lines path:has(title:text-is("15:00 east"))').getAttribute('d');

@@ -20,9 +20,9 @@ describe.each(sites)('the 45° check on the March equinox of 2027: $name', ({ si
   const edges = styleEdges(part.mesh);
   const frame = dialFrame({ latitudeDeg: site.latitude });
   const observer = new Observer(site.latitude, site.longitude, 0);
-  const equinox = Seasons(2027).mar_equinox.date; // astronomy-engine (DESIGN §7)
+  const equinox = Seasons(2027).mar_equinox.date; // astronomy-engine (docs/design.md §7)
 
-  // Common practice (the 45° triangle check, DESIGN §2): at 09:00 and 15:00
+  // Common practice (the 45° triangle check, docs/design.md §2): at 09:00 and 15:00
   // apparent solar time (|H| = 45°) the shadow of the style edge lies exactly
   // one gnomon height beyond that edge.
   it.each([

@@ -43,8 +43,8 @@ function moveScoreLine(dxf: string, xPlate: number, dxMm: number): { text: strin
 }
 
 describe('umbrafab check on correct builds', () => {
-  // Acceptance of issue 6: the layout's tan law with the thick gnomon, cast
-  // with the real Sun (astronomy-engine, DESIGN §7) from the real mesh.
+  // Acceptance: the layout's tan law with the thick gnomon, cast
+  // with the real Sun (astronomy-engine, docs/design.md §7) from the real mesh.
   it('the demo build checks clean: worst geometric error <= 0.001 mm over the year', () => {
     const r = checkDial(demo.layout);
     console.log(`demo (layout marks): worst ${r.worst!.errorMm.toExponential(2)} mm (${r.worst!.errorS.toExponential(2)} s) at ${r.worst!.label} ${r.worst!.style} on ${r.worst!.date}; ${r.sunPositions} sun positions`);

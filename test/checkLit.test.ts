@@ -16,9 +16,9 @@ function horizon(ms: number): { alt: number; az: number } {
 }
 
 describe('no shadow while the Sun is below the horizon or behind the face', () => {
-  // Cross-check with astronomy-engine Horizon altitude directly (DESIGN §7).
+  // Cross-check with astronomy-engine Horizon altitude directly (docs/design.md §7).
   // The face normal points at the celestial equator on the meridian: azimuth
-  // 180° (north site), altitude 90° − latitude (DESIGN §2).
+  // 180° (north site), altitude 90° − latitude (docs/design.md §2).
   it('every 10 minutes over three whole days at 64.1° N: shadow reported exactly when alt > 0 and the Sun is in front of the face', () => {
     const track = sunTrack({ latitudeDeg: site.latitude, longitudeDeg: site.longitude, timezone: site.timezone, year: 2027 });
     const frame = dialFrame({ latitudeDeg: site.latitude });

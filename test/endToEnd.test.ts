@@ -28,7 +28,7 @@ describe('end to end: the umbrafab bin on the demo spec', () => {
     for (const f of report.files as string[]) expect(readFileSync(join(b, f)).equals(readFileSync(join(a, f))), f).toBe(true);
   });
 
-  it('fills the report contract of DESIGN §6', () => {
+  it('fills the report contract of docs/design.md §6', () => {
     for (const m of report.marks) {
       expect(Object.keys(m).filter((k) => k !== 'underGnomon').sort()).toEqual(['hourAngleDeg', 'kind', 'label', 'style', 'widthMm', 'xMm', 'y0Mm', 'y1Mm'].sort());
     }

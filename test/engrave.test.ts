@@ -8,7 +8,7 @@ import { canonTimes, checkMillStartEnd, feedRuns, motions, runRs274, uncutAtFina
 import { clipToPlate } from '../packages/fabricate/src/index.ts';
 
 // Outside validator: Debian's linuxcnc-uspace `rs274 -g`, the standalone
-// RS274NGC interpreter (DESIGN.md §7). Every program `umbrafab build` writes
+// RS274NGC interpreter (docs/design.md §7). Every program `umbrafab build` writes
 // must pass it (exit 0), and its canonical machine commands are what the
 // checks below read, not the program text.
 
@@ -159,7 +159,7 @@ describe.each(CASES)('umbrafab build engraving: $name', ({ file, programs }) => 
     for (const m of ms.slice(1)) if (m.kind === 'STRAIGHT_TRAVERSE' && xyLength(m) > 0) expect(Math.min(m.from.z, m.to.z)).toBeGreaterThanOrEqual(e.clearanceZMm - EPS_MM);
 
     // Deepest cut = the V-bit depth of the widest line: d = (w - tip) / (2 tan(angle/2))
-    // (DESIGN.md §5; the cone's geometry, common practice).
+    // (docs/design.md §5; the cone's geometry, common practice).
     const widest = Math.max(...paths.map((p) => p.widthMm));
     const expectedDepth = (widest - e.tool.vbitTipMm) / (2 * Math.tan((e.tool.vbitAngleDeg * Math.PI) / 360));
     const deepest = -Math.min(...ms.map((m) => m.to.z));

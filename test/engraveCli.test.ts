@@ -35,7 +35,7 @@ describe('umbrafab build writes the engraving programs (CLI end to end)', () => 
         rapidTravelMm: { inputOrder: expect.any(Number), ordered: expect.any(Number), lowerBound: expect.any(Number), ratioToBound: expect.any(Number) },
       });
     }
-    // Demo figures: 0.8 mm hour lines with a 90° V-bit → 0.4 mm (d = w / (2 tan 45°), DESIGN.md §5);
+    // Demo figures: 0.8 mm hour lines with a 90° V-bit → 0.4 mm (d = w / (2 tan 45°), docs/design.md §5);
     // aluminium preset step-down 0.15 mm → 3 passes.
     expect(e.ngc.vbitDepthMmMax).toBeCloseTo(0.4, 6);
     expect(e.ngc.passes).toBe(3);

@@ -319,7 +319,7 @@ describe('serve: the sun through the geometry package', () => {
     expect(Math.abs(sun.declinationDeg)).toBeLessThan(0.4);
     const b = await postJson(server, '/api/view', { fields: values });
     const mark = b.json.summary.find((s: any) => s.key === 'mark15');
-    // The 45° check (common practice, DESIGN §2): at |H| = 45° the line lies one gnomon height from its style edge.
+    // The 45° check (common practice, docs/design.md §2): at |H| = 45° the line lies one gnomon height from its style edge.
     expect(mark.value).toMatch(/^51\.5 mm/);
     const edge = Math.max(...sun.shadowFace.flat().map((p: number[]) => p[0]));
     expect(edge).toBeCloseTo(3 / 2 + 50, 6);

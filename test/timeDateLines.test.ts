@@ -37,7 +37,7 @@ describe.each(cases.map((c, i) => ({ ...c, i })))('date lines: $name', ({ i }) =
   const sign = report.hemisphere === 'north' ? 1 : -1;
 
   it('lie on y = −tan δ · √(h² + (|x| − t/2)²) from the nodus foot (report.json) within 0.01 mm', () => {
-    // DESIGN §2: the handbook hyperbola of a nodus on a polar face, measured from the casting style edge
+    // docs/design.md §2: the handbook hyperbola of a nodus on a polar face, measured from the casting style edge
     // (A. E. Waugh, Sundials: Their Theory and Construction, Dover 1973 — memory), δ toward the elevated pole.
     expect(report.calendar.length).toBeGreaterThan(0);
     let worst = 0;
@@ -94,7 +94,7 @@ describe.each(cases.map((c, i) => ({ ...c, i })))('date lines: $name', ({ i }) =
       const tanD = Math.tan((sign * d * Math.PI) / 180);
       for (const [x, y] of line.points.filter(([x]) => Math.abs(x) - t / 2 <= 60)) expect(Math.abs(y - -tanD * Math.hypot(h, Math.abs(x) - t / 2))).toBeLessThanOrEqual(0.01);
     }
-    // Local summer lies toward the equator-ward end (y < 0) in both hemispheres (DESIGN §2).
+    // Local summer lies toward the equator-ward end (y < 0) in both hemispheres (docs/design.md §2).
     const summer = report.hemisphere === 'north' ? june : dec;
     expect(Math.max(...summer.points.map((p) => p[1]))).toBeLessThan(0);
   });

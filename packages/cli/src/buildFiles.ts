@@ -55,7 +55,7 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
 /** The geometry every producer reads, computed once per spec (the local page draws its views from it before the full build). */
 export function buildContext(spec: DialSpec): BuildContext {
   const layout = layoutDial(spec);
-  const extras = timeFaceExtras(layout); // date lines, mean-time curves, engraved equation of time (issue 5)
+  const extras = timeFaceExtras(layout); // date lines, mean-time curves, engraved equation of time
   const drawing = plateDrawing(layout, extras.lines, extras.text);
   return { spec, layout, drawing };
 }

@@ -1,7 +1,7 @@
 /**
  * Plain-data types shared by the geometry: everything survives JSON.stringify.
  *
- * The face frame (DESIGN §2), used by every mark and curve in face coordinates:
+ * The face frame (docs/design.md §2), used by every mark and curve in face coordinates:
  * - origin on the substyle (the foot of the style on the face), at the middle
  *   of the hour marks' span (where a nodus foot sits by default); units mm;
  * - x across the plate in the face drawing, right-positive when the plate is
@@ -42,7 +42,7 @@ export type MarkKind = 'hour' | 'half' | 'quarter';
 export type StyleEdge = 'west' | 'east';
 export type Hemisphere = 'north' | 'south';
 
-/** One line on the face: the report.json contract of DESIGN §6. */
+/** One line on the face: the report.json contract of docs/design.md §6. */
 export interface Mark {
   readonly label: string;
   readonly kind: MarkKind;

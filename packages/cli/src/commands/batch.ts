@@ -22,7 +22,7 @@ export interface BatchRow {
   readonly wedgeAngleDeg: number;
   readonly wedgeFile: string;
   readonly plateFile: string;
-  /** rise of the plate's pole-ward edge over its lower edge, mm: length × sin(tilt) (DESIGN §4) */
+  /** rise of the plate's pole-ward edge over its lower edge, mm: length × sin(tilt) (docs/design.md §4) */
   readonly riseMm: number;
 }
 

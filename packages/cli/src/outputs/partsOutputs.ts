@@ -22,7 +22,7 @@ function figures(mesh: Mesh): { volumeMm3: number; bbox: { minMm: readonly numbe
 }
 
 /**
- * The parts of `umbrafab build` (issue 3): gnomon.stl / gnomon.dxf,
+ * The parts of `umbrafab build`: gnomon.stl / gnomon.dxf,
  * wedge.stl and body.stl as `partsPlan` chooses from the process and
  * `parts.write`, and the report's `wedge` and `parts` sections.
  *

@@ -2,7 +2,7 @@ import { calendarLines, equationOfTimeTable, installSheet, meanTimeLines, nodusF
 import { toInstallMd } from '@umbrafab/fabricate';
 import { utf8, type Producer } from './outputTypes.ts';
 
-/** Equation-of-time table spacing in report.json, days (issue 5: at least one value a week). */
+/** Equation-of-time table spacing in report.json, days (at least one value a week). */
 const EOT_STEP_DAYS = 7;
 
 /**

@@ -5,7 +5,7 @@ import type { Vec2 } from '@umbrafab/geometry';
  * for a negative distance) with mitred corners: every edge moves along its
  * outward normal and neighbouring edges meet again at a sharp corner, so a
  * cutter following the result leaves the nominal polygon with sharp corners
- * (kerf compensation, DESIGN §5). For unit outward normals n1, n2 of the
+ * (kerf compensation, docs/design.md §5). For unit outward normals n1, n2 of the
  * edges meeting at p, the corner moves to p + d · (n1 + n2) / (1 + n1 · n2)
  * (the intersection of the two offset lines; common practice). Corners where
  * the outline folds back (n1 · n2 = −1) are refused.

@@ -6,7 +6,7 @@ import { rectVertices, segmentOutline, type BulgeVertex } from '../process/rectV
 import { roundTo } from '../process/roundTo.ts';
 
 /**
- * Layer names of plate.dxf, one per operation (DESIGN §5). Colours are ACI
+ * Layer names of plate.dxf, one per operation (docs/design.md §5). Colours are ACI
  * numbers (AutoCAD Color Index: 1 red, 3 green, 5 blue, 8 grey).
  */
 export const DXF_LAYERS = {

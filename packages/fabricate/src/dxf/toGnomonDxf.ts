@@ -29,7 +29,7 @@ type GnomonRecord = { readonly kind: 'polyline'; readonly layer: string; readonl
  * of the nominal part (the tab bottoms on y = 0, the −y end of the style on
  * x = 0), so x = profile y − min y and y = profile z − min z.
  * - CUT_PROFILE: the outline with its tabs (and nodus notch) as one closed
- *   polyline, grown outward by kerf/2 with mitred corners (DESIGN §5), so
+ *   polyline, grown outward by kerf/2 with mitred corners (docs/design.md §5), so
  *   the fin comes out at nominal size.
  * - REFERENCE_NO_CUT: the face line (where the fin stands on the plate; the
  *   style edge is exactly styleHeightMm above it), not for cutting.

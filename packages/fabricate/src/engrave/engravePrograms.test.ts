@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { engraveProgramsFor } from './engravePrograms.ts';
 
 describe('engraveProgramsFor', () => {
-  it('auto follows the process (DESIGN §5: a waterjet cannot score, so a router engraves)', () => {
+  it('auto follows the process (docs/design.md §5: a waterjet cannot score, so a router engraves)', () => {
     expect(engraveProgramsFor('auto', 'router')).toEqual(['ngc']);
     expect(engraveProgramsFor('auto', 'laser')).toEqual(['laser']);
     expect(engraveProgramsFor('auto', 'waterjet')).toEqual(['ngc']);

@@ -16,7 +16,7 @@ export type EngraveProgramsChoice = 'auto' | 'ngc' | 'laser' | 'both' | 'none';
  * Which programs a build writes (spec `engrave.programs`, see
  * engraveSection.ts). `auto` follows `process.method`: a router engraves its
  * own plate (engrave.ngc); a laser scores it (engrave-laser.gcode); a
- * waterjet cannot score (DESIGN §5), so its lines are engraved by a router or
+ * waterjet cannot score (docs/design.md §5), so its lines are engraved by a router or
  * mill as a second step (engrave.ngc); a printed plate carries its lines in
  * the print (none).
  *

@@ -5,7 +5,7 @@ import { resolveEngraveSettings } from './materialPresets.ts';
 import { SAMPLE_PLATE_JOB } from './sampleEngraveJobs.ts';
 import { planLaser, toLaserGcode } from './toLaserGcode.ts';
 
-// Outside validator: Debian's linuxcnc-uspace `rs274 -g` (DESIGN.md §7). The
+// Outside validator: Debian's linuxcnc-uspace `rs274 -g` (docs/design.md §7). The
 // laser dialect uses only words RS274NGC also knows (M4 + S as the spindle),
 // so the same interpreter checks it.
 

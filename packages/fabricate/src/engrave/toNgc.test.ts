@@ -9,7 +9,7 @@ import { planNgc, toNgc } from './toNgc.ts';
 import { vbitDepthMm } from './vbitDepth.ts';
 
 // Outside validator: Debian's linuxcnc-uspace `rs274 -g`, the standalone
-// RS274NGC interpreter (DESIGN.md §7). Every program below must pass it, and
+// RS274NGC interpreter (docs/design.md §7). Every program below must pass it, and
 // its canonical output is what the checks read.
 
 const EPS_MM = 1e-4; // rs274 prints 4 decimals

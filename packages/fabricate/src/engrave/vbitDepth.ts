@@ -8,7 +8,7 @@ import { assertInRange, assertNonNegative, assertPositive } from './checks.ts';
  *
  *     d = (w − tip) / (2·tan(θ/2))
  *
- * which for a sharp bit (tip = 0) is DESIGN.md §5's d = w / (2·tan(θ/2))
+ * which for a sharp bit (tip = 0) is docs/design.md §5's d = w / (2·tan(θ/2))
  * (plain trigonometry of the bit's cone; common practice in engraving
  * feed-and-depth charts: a 90° bit cuts as wide as twice its depth).
  *

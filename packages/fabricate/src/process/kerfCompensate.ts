@@ -10,7 +10,7 @@ export interface CutProfiles {
 }
 
 /**
- * Kerf compensation (DESIGN §5, common practice): the beam, jet or tool
+ * Kerf compensation (docs/design.md §5, common practice): the beam, jet or tool
  * removes kerf/2 on each side of its path, so the path runs kerf/2 outside an
  * outer profile and kerf/2 inside every hole and slot; the part then comes out
  * at nominal size. Corner radii move with the path (an outer radius grows by

@@ -3,7 +3,7 @@ import { roundTo } from '../process/roundTo.ts';
 /**
  * Serialise report.json: keys in insertion order, every number rounded to
  * `decimals` places (default 6) so the file is byte-stable, two-space indent,
- * trailing newline. The report's shape is the output contract of DESIGN §6;
+ * trailing newline. The report's shape is the output contract of docs/design.md §6;
  * it is assembled by the caller from the layout and the writers' figures.
  */
 export function toReportJson(report: unknown, decimals = 6): string {

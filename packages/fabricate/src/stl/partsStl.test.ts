@@ -8,7 +8,7 @@ import { gnomonSolid, meshVolumeMm3, validateMesh, wedgeSolid, type Mesh } from 
 import { toStl } from './toStl.ts';
 
 // Outside check: Debian's admesh reads each STL and runs its full default
-// check-and-repair pass; a clean part needs no repair at all (DESIGN.md §7).
+// check-and-repair pass; a clean part needs no repair at all (docs/design.md §7).
 const dir = mkdtempSync(join(tmpdir(), 'umbrafab-stl-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 

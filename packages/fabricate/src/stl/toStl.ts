@@ -14,7 +14,7 @@
  *     UINT16    attribute byte count, 0
  *
  * Units are not recorded by the format; umbrafab writes millimetres
- * (DESIGN.md §5). The header must not begin with "solid", which some readers
+ * (docs/design.md §5). The header must not begin with "solid", which some readers
  * take for the ASCII variant.
  */
 

@@ -49,7 +49,7 @@ export interface MarkOffsetRow {
   readonly fromLowerEdgeMm: readonly [number, number];
 }
 
-/** Offsets of every mark from its style edge: |x| − t/2 (DESIGN §2: x = ±(t/2 + h·|tan H|)). */
+/** Offsets of every mark from its style edge: |x| − t/2 (docs/design.md §2: x = ±(t/2 + h·|tan H|)). */
 export function markOffsetRows(marks: readonly Mark[], thicknessMm: number, faceOriginY: number): MarkOffsetRow[] {
   return [...marks]
     .sort((a, b) => a.hourAngleDeg - b.hourAngleDeg || (a.style === 'west' ? -1 : 1))

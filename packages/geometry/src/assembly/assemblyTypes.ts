@@ -5,7 +5,7 @@ import type { Vec3 } from '../parts/mesh.ts';
  * Plain-data types of the assembly picture.
  *
  * World frame: X east, Y north, Z up (the ground is Z = 0), mm. The face
- * frame of DESIGN §2 (x across, y toward the elevated pole, z the outward
+ * frame of docs/design.md §2 (x across, y toward the elevated pole, z the outward
  * normal) sits on the plate's top face; `FaceFrame` gives its axes in world
  * coordinates.
  */

@@ -10,7 +10,7 @@ import type { FaceFrame, Facet, PlacedPart } from './assemblyTypes.ts';
 /** The dial as it stands: wedge on level ground, plate on the wedge's seat, gnomon in the plate's slots. */
 export interface Assembly {
   readonly hemisphere: Hemisphere;
-  /** the seat's (and the plate's) tilt from the horizontal, radians: |latitude| (DESIGN §4) */
+  /** the seat's (and the plate's) tilt from the horizontal, radians: |latitude| (docs/design.md §4) */
   readonly tiltRad: number;
   readonly parts: readonly PlacedPart[];
   readonly face: FaceFrame;
@@ -33,7 +33,7 @@ const CORNER_SEGMENTS = 6;
  * - the wedge frame turned to the world: its seat rises toward the elevated
  *   pole, +Y (north) in the north, −Y (a half turn about Z) in the south;
  * - the plate as a prism of its rounded outline and thickness.
- * The face frame of DESIGN §2 maps to world by `face`: x across (east in the
+ * The face frame of docs/design.md §2 maps to world by `face`: x across (east in the
  * north, west in the south: seen face-on, pole-ward up, east is on the right
  * in the north), y up the slope toward the pole, z the outward normal.
  *

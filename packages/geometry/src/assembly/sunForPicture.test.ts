@@ -15,7 +15,7 @@ describe('sunForPicture', () => {
   ] as const) {
     it(`points where astronomy-engine's Horizon puts the sun (within 0.01°): ${lat}°, ${date} ${time}`, () => {
       // Reference: astronomy-engine 2.1.19 Equator (topocentric, of date) + Horizon without refraction,
-      // a general-purpose ephemeris (DESIGN §7); the 0.01° allows for the geocentric/topocentric parallax (< 9″).
+      // a general-purpose ephemeris (docs/design.md §7); the 0.01° allows for the geocentric/topocentric parallax (< 9″).
       const layout = layoutDial(site(lat, lon, tz));
       const sun = sunForPicture(layout, date, time);
       const t = MakeTime(new Date(sun.utc));
@@ -28,7 +28,7 @@ describe('sunForPicture', () => {
       expect(Math.abs(sun.hourAngleDeg - sun.lineHourAngleDeg)).toBeLessThan(1e-4);
     });
 
-    it(`gives the face-frame sun of DESIGN §2, s = (−cos δ sin H, sin δ, cos δ cos H) east-positive: ${lat}°`, () => {
+    it(`gives the face-frame sun of docs/design.md §2, s = (−cos δ sin H, sin δ, cos δ cos H) east-positive: ${lat}°`, () => {
       const layout = layoutDial(site(lat, lon, tz));
       const sun = sunForPicture(layout, date, time);
       const s = worldToFaceDirection(placeAssembly(layout).face, sun.direction);

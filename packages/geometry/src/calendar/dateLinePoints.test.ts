@@ -5,7 +5,7 @@ import type { FacePoint } from './types.ts';
 const DEG = Math.PI / 180;
 
 /**
- * Independent shadow construction (DESIGN §2): sun vector in the face frame
+ * Independent shadow construction (docs/design.md §2): sun vector in the face frame
  * s = (−cosδ·sinH, sinδ, cosδ·cosH) with x east-positive; the nodus sits at
  * height h above the style edge that casts the shadow (x = ±t/2); the shadow is
  * the ray's intersection with z = 0. Returns [xEast, y] for hour angle H.
@@ -21,10 +21,10 @@ function shadowByRay(h: number, t: number, deltaRad: number, hourAngleRad: numbe
 
 const H = 60;
 const T = 6;
-const SOLSTICE = 23.44 * DEG; // DESIGN §2: the solstice lines at ±23.44°
+const SOLSTICE = 23.44 * DEG; // docs/design.md §2: the solstice lines at ±23.44°
 
 describe('dateLinePoints', () => {
-  test('points follow y = −tanδ·√(h² + (|x| − t/2)²) within 0.01 mm (handbook formula, DESIGN §2)', () => {
+  test('points follow y = −tanδ·√(h² + (|x| − t/2)²) within 0.01 mm (handbook formula, docs/design.md §2)', () => {
     let worst = 0;
     for (const delta of [SOLSTICE, -SOLSTICE, 11.47 * DEG, -20.15 * DEG]) {
       for (const hemisphere of ['north', 'south'] as const) {

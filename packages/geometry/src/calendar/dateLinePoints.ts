@@ -43,7 +43,7 @@ const MAX_POINTS = 200_000;
  *
  *     y = −tan δ · √(h² + (|x| − t/2)²)      for |x| ≥ t/2
  *
- * the handbook hyperbola (DESIGN §2) measured from whichever style edge casts
+ * the handbook hyperbola (docs/design.md §2) measured from whichever style edge casts
  * the shadow (x = ±t/2). Points under the gnomon (|x| < t/2) are skipped, so
  * the line comes as two branches, each sampled outward from its style edge
  * at `stepMm` (edge point and range ends included), listed by increasing x.

@@ -3,7 +3,7 @@ import { assertRange } from '../guards.ts';
 import type { Hemisphere } from './types.ts';
 
 /**
- * Declination measured toward the elevated pole (DESIGN §2): δ itself in the
+ * Declination measured toward the elevated pole (docs/design.md §2): δ itself in the
  * northern hemisphere, −δ in the southern one. Every face formula here takes
  * this pole-ward declination, so "local summer" is positive in both
  * hemispheres and its date line lies toward the equator-ward end of the

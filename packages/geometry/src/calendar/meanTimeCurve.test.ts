@@ -42,7 +42,7 @@ describe('meanTimeCurve', () => {
     expect(Math.max(...ys)).toBeCloseTo(H * Math.tan(23.44 * DEG), 0);
   });
 
-  test('every sample obeys x = ±(t/2 + h|tanH|), y = −tanδp·√(h² + (|x| − t/2)²) (DESIGN §2, §3)', () => {
+  test('every sample obeys x = ±(t/2 + h|tanH|), y = −tanδp·√(h² + (|x| − t/2)²) (docs/design.md §2, §3)', () => {
     const t = 8;
     const c = meanTimeCurve({ clockTime: '09:00', year: 2025, heightMm: H, thicknessMm: t, longitudeDeg: -9.14, standardMeridianDeg: 0, hemisphere: 'north', stepDays: 10 });
     let worst = 0;

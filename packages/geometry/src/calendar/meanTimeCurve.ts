@@ -62,13 +62,13 @@ export const MEAN_TIME_CURVE_DEFAULTS = { thicknessMm: 0, stepDays: 1, maxHourAn
 
 /**
  * Path of the nodus shadow at one standard clock time over a year: the
- * figure-of-eight mean-time line (DESIGN §3). For each day, at the instant
+ * figure-of-eight mean-time line (docs/design.md §3). For each day, at the instant
  * T (standard time, i.e. UT + λs/15 h):
  *
  *     H = 15°·(T − 12 h) + (λ − λs) + E/4 min·°
  *
  * with E the equation of time of that instant and δ its declination; then,
- * from the style edge that casts the shadow (DESIGN §2),
+ * from the style edge that casts the shadow (docs/design.md §2),
  *
  *     x = ±(t/2 + h·|tan H|)      y = −tan δp · √(h² + (|x| − t/2)²) = −h·tan δp / cos H
  *

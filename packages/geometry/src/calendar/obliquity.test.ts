@@ -14,7 +14,7 @@ describe('OBLIQUITY_J2000_RAD', () => {
     expectClose(OBLIQUITY_J2000_RAD * RAD_TO_ARCSEC, mobl, 1e-6, 'obliquity', '″');
   });
 
-  // IAU 2006: 84381.406″ (memory) = 23.4393° (DESIGN §2).
+  // IAU 2006: 84381.406″ (memory) = 23.4393° (docs/design.md §2).
   test('is 84381.406″ = 23.4393°', () => {
     expectClose(OBLIQUITY_J2000_RAD * RAD_TO_ARCSEC, SUN_REFERENCE.obliquity_j2000_arcsec.value, 1e-9, 'obliquity', '″');
     expectClose((OBLIQUITY_J2000_RAD * 180) / Math.PI, 23.4393, 0.00005, 'obliquity', '°');

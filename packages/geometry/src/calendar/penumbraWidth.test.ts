@@ -2,10 +2,10 @@ import { describe, expect, test } from 'vitest';
 import { penumbraWidthFactor, penumbraWidthMm } from './penumbraWidth.ts';
 
 const DEG = Math.PI / 180;
-const ALPHA = 0.267 * DEG; // mean solar angular radius (DESIGN §3, memory)
+const ALPHA = 0.267 * DEG; // mean solar angular radius (docs/design.md §3, memory)
 
 describe('penumbraWidthMm', () => {
-  // DESIGN §3: under 2 mm at 09:00 on a 100 mm gnomon, far wider near 07:00.
+  // docs/design.md §3: under 2 mm at 09:00 on a 100 mm gnomon, far wider near 07:00.
   test('under 2 mm at 09:00 (H = −45°) on a 100 mm gnomon', () => {
     const w9 = penumbraWidthMm({ heightMm: 100, hourAngleRad: -45 * DEG, declinationRad: 0, sunRadiusRad: ALPHA });
     const w7 = penumbraWidthMm({ heightMm: 100, hourAngleRad: -75 * DEG, declinationRad: 0, sunRadiusRad: ALPHA });
@@ -14,7 +14,7 @@ describe('penumbraWidthMm', () => {
     expect(w7).toBeGreaterThan(6 * w9);
   });
 
-  // DESIGN §3: in time the blur is constant, about ±1.1 min at the equinox.
+  // docs/design.md §3: in time the blur is constant, about ±1.1 min at the equinox.
   test('constant in time: width / (dx/dT) = 2α/cosδ ≈ 2.1 min', () => {
     for (const hDeg of [-70, -30, 0, 45, 60]) {
       const w = penumbraWidthMm({ heightMm: 80, hourAngleRad: hDeg * DEG, declinationRad: 0, sunRadiusRad: ALPHA });

@@ -14,7 +14,7 @@ export interface PenumbraOptions {
 }
 
 /**
- * Width of the penumbra across an hour line, mm (DESIGN §3):
+ * Width of the penumbra across an hour line, mm (docs/design.md §3):
  *
  *     w = 2·h·α / (cos δ · cos² H)
  *
@@ -34,7 +34,7 @@ export function penumbraWidthMm(options: PenumbraOptions): number {
 
 /**
  * 1 / cos² H: how a width that covers a fixed span of time grows with the
- * hour angle on a polar face (DESIGN §3), so line widths can follow the blur.
+ * hour angle on a polar face (docs/design.md §3), so line widths can follow the blur.
  * @example penumbraWidthFactor(Math.PI / 4) // 2
  */
 export function penumbraWidthFactor(hourAngleRad: number): number {

@@ -77,7 +77,7 @@ export const INSTALL_CAUTIONS: readonly string[] = [
 ];
 
 /**
- * The installation sheet of a layout (DESIGN §4), for `install.date`
+ * The installation sheet of a layout (docs/design.md §4), for `install.date`
  * (default April 1 of `calendar.year`, never today's date):
  * - tilt = |latitude|, and the rise L·sin(tilt) over the plate length L;
  * - true north from the WMM2025 magnetic declination at the site at 12:00 UT

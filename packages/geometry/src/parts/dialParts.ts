@@ -87,7 +87,7 @@ export function mapMesh(mesh: Mesh, f: (p: Vec3) => Vec3): Mesh {
 }
 
 /**
- * The fin placed as assembled, in the face frame (DESIGN §2): its centre
+ * The fin placed as assembled, in the face frame (docs/design.md §2): its centre
  * plane on x = 0, its ends at the layout's gnomon y0..y1, resting on the
  * face (z = 0, the plate's top surface) with its tabs through the slots, so
  * the style edges sit gnomon height above the face and the tab bottoms at

@@ -37,7 +37,7 @@ export interface GnomonOptions {
   readonly plateThicknessMm: number;
   /**
    * fit clearance taken off each end of every tab, mm. Default 0 because the
-   * plate's slots already carry the fit clearance (DESIGN.md §5); set it when
+   * plate's slots already carry the fit clearance (docs/design.md §5); set it when
    * the slots are cut at nominal size. Must be less than half a tab's length.
    */
   readonly tabClearanceMm: number;
@@ -77,7 +77,7 @@ export interface GnomonPart {
 
 /**
  * Build the gnomon fin with its tabs (and optional nodus notch) as one
- * closed polyhedron in the face frame (DESIGN.md §2): the face is z = 0,
+ * closed polyhedron in the face frame (docs/design.md §2): the face is z = 0,
  * x across (the fin spans x ∈ [−t/2, t/2]), y along the style from −L/2 to
  * +L/2, the style edges at z = heightMm exactly, tabs hanging below z = 0.
  *

@@ -37,7 +37,7 @@ export interface PartsPlan {
 }
 
 /**
- * Resolve the spec's `parts:` section against a layout (DESIGN §5 fits):
+ * Resolve the spec's `parts:` section against a layout (docs/design.md §5 fits):
  * which files to write, the gnomon fin (length y0..y1 of the layout's
  * gnomon, its tabs at the layout's tab centres and lengths, tab depth =
  * plate thickness for a through tab, the nodus notch at the face origin),

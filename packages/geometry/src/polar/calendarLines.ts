@@ -45,7 +45,7 @@ interface Entry {
 }
 
 /**
- * The date lines of a nodus dial (DESIGN §2): for each chosen declination δ,
+ * The date lines of a nodus dial (docs/design.md §2): for each chosen declination δ,
  * the hyperbola y = −tan δp · √(h² + (|x| − t/2)²) measured from the style
  * edge that casts the shadow, with δp the declination toward the elevated
  * pole. `calendar.lines` picks the solstices (moments from astronomy-engine

@@ -28,7 +28,7 @@ const GRAPH_RANGE_MIN = 18;
  * - `graph`: E over the year as a curve in a box, zero line, ±15 min ticks
  *   and month initials.
  * Clock = dial − E for a standard-time dial, dial − E + 4·(λs − λ) min for a
- * solar one (DESIGN §3); "+1 H IN SUMMER" when the zone keeps daylight saving
+ * solar one (docs/design.md §3); "+1 H IN SUMMER" when the zone keeps daylight saving
  * and the dial has no summer numerals.
  *
  * @throws SpecError naming `calendar.table` when the band has no room for 1.5 mm text

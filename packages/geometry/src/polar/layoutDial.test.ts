@@ -9,9 +9,9 @@ function spec(over: Record<string, unknown> = {}, site: Record<string, unknown> 
 }
 
 describe('layoutDial: the tan law with a thick gnomon', () => {
-  // Source: the polar-dial tan law x = h·tan H (DESIGN §2; A. E. Waugh, "Sundials:
+  // Source: the polar-dial tan law x = h·tan H (docs/design.md §2; A. E. Waugh, "Sundials:
   // Their Theory and Construction", Dover 1973 — memory), with the two style
-  // edges of a gnomon of thickness t at ±t/2 (DESIGN §2).
+  // edges of a gnomon of thickness t at ±t/2 (docs/design.md §2).
   it('puts every mark at |x| = t/2 + h·|tan H| over latitudes, heights and thicknesses, both hemispheres', () => {
     let worst = 0;
     let cases = 0;

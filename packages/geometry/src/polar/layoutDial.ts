@@ -50,7 +50,7 @@ export interface TimeLayout {
   readonly standardMeridianDeg: number;
   /**
    * Minutes to add to apparent solar time (after the equation of time) to get
-   * standard time: 4·(λs − λ) min (DESIGN §3; 4 minutes of time per degree).
+   * standard time: 4·(λs − λ) min (docs/design.md §3; 4 minutes of time per degree).
    * Positive when the site lies west of its standard meridian.
    */
   readonly longitudeCorrectionMin: number;
@@ -79,13 +79,13 @@ interface MarkTime {
 }
 
 /**
- * Lay out a polar dial face from a validated spec (DESIGN §2–3).
+ * Lay out a polar dial face from a validated spec (docs/design.md §2–3).
  *
  * Marks every `hours.step` minutes from `hours.from` to `hours.to`: whole
  * hours, half hours and quarters at their three lengths, all starting from the
  * equator-ward end of the hour marks. A line's hour angle is
  * H = 15°·(T − 12 h) for a solar-time dial, plus (λ − λs) for a standard-time
- * dial (DESIGN §3). Its x follows the tan law with the gnomon's thickness; the
+ * dial (docs/design.md §3). Its x follows the tan law with the gnomon's thickness; the
  * noon line of a solar dial is the two edges of the noon band. Hours with
  * |H| ≥ 90° or beyond `hours.maxHourAngle`, or that fall off a fixed plate,
  * are refused with the widest range that fits.

@@ -7,7 +7,7 @@ import type { Hemisphere, StyleEdge } from '../types.ts';
  * height h falls at x = h·tan H (the tan law of the polar dial; A. E. Waugh,
  * "Sundials: Their Theory and Construction", Dover 1973 — memory). A gnomon of
  * thickness t has two styles at ±t/2: mornings (H < 0) are cast by the west
- * style, afternoons by the east style (DESIGN §2):
+ * style, afternoons by the east style (docs/design.md §2):
  *   x = sign(H) · (t/2 + h·|tan H|).
  * At H = 0 the shadow is the gnomon itself: the noon band spans ±t/2.
  *
@@ -29,7 +29,7 @@ export function castingEdge(hourAngleRad: number): StyleEdge {
 /**
  * East-positive x to face-drawing x: seen face-on with the pole-ward end up,
  * east is on the right in the northern hemisphere and on the left in the
- * southern one (DESIGN §2), so the southern face is the mirror image.
+ * southern one (docs/design.md §2), so the southern face is the mirror image.
  */
 export function eastToFaceX(xEastMm: number, hemisphere: Hemisphere): number {
   return hemisphere === 'north' ? xEastMm : -xEastMm;

@@ -22,7 +22,7 @@ const EOT_SPAN_DEG = 4.5;
 
 /**
  * Mean-time (figure-of-eight) curves for every whole hour of `hours.from` …
- * `hours.to` in standard clock time (DESIGN §3): the nodus shadow at
+ * `hours.to` in standard clock time (docs/design.md §3): the nodus shadow at
  * H = 15°·(T − 12 h) + (λ − λs) + E/4 min·° through `calendar.year`, from
  * `meanTimeCurve`, moved to the nodus foot and clipped to the mark field.
  * Hours whose curve would reach |H| ≥ 89° are left out. Empty unless

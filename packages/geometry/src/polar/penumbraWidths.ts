@@ -6,7 +6,7 @@ import type { Mark } from '../types.ts';
 export const PENUMBRA_NEIGHBOUR_FRACTION = 0.5;
 
 /**
- * Mark widths that follow the shadow's blur (DESIGN §3): the penumbra across
+ * Mark widths that follow the shadow's blur (docs/design.md §3): the penumbra across
  * a line grows as 1/cos² H, so a width w·(1/cos² H) covers the same span of
  * time at every hour angle as w does at noon. A mark never grows past half
  * the distance to its nearest neighbour (it never shrinks below w).

@@ -18,7 +18,7 @@ export interface SummerNumerals {
 }
 
 /**
- * Dual numerals for daylight saving (DESIGN §3: daylight saving adds the
+ * Dual numerals for daylight saving (docs/design.md §3: daylight saving adds the
  * zone's shift to the numerals): under each whole-hour numeral a smaller one
  * reading hour + shift (the zone's daylight-saving shift in `calendar.year`,
  * from the IANA database via `Intl`). Off unless `dial.summerNumerals`.

@@ -11,13 +11,13 @@ import { dialFrame, toDialFrame, type DialFrame } from './dialFrame.ts';
 import { drawnMarksFromLayout, type DrawnMark } from './drawnMarks.ts';
 import { gnomonForLayout } from './gnomonForLayout.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
-import { instantAtHourAngle, sunOnDay, sunTrack, type RefractionModel, type SunSample } from './sunTrack.ts';
+import { instantAtHourAngle, sunOnDay, sunTrack, type RefractionModel, type SunSample } from '../sun/sunTrack.ts';
 import { KM_PER_AU } from 'astronomy-engine';
 
 /**
  * Mean rate of the true Sun's hour angle, radians per second: 360° per
  * apparent solar day of 86 400 s (the apparent day differs from it by at most
- * about 30 s, i.e. 0.035 %: the equation of time's daily change, DESIGN §3).
+ * about 30 s, i.e. 0.035 %: the equation of time's daily change, docs/design.md §3).
  */
 const HOUR_ANGLE_RAD_PER_S = (2 * Math.PI) / 86_400;
 
@@ -73,7 +73,7 @@ export interface MarkCheck {
   readonly worstDate: string | null;
   /** days whose |error| exceeds the tolerance */
   readonly daysOverTolerance: number;
-  /** penumbra width across the line, mm, over the lit days (2hα / (cos δ cos² H), DESIGN §3) */
+  /** penumbra width across the line, mm, over the lit days (2hα / (cos δ cos² H), docs/design.md §3) */
   readonly penumbraMm: Range;
   /**
    * standard clock time when the real Sun is at this mark's hour angle, minus

@@ -9,8 +9,8 @@ function enu(H: number, dec: number, lat: number): [number, number, number] {
 }
 
 describe('dialFrame', () => {
-  // DESIGN §2: s = (−cos δ sin H, sin δ, cos δ cos H) with x east-positive and δ toward the elevated pole.
-  test.each([50.62, 12, 78])('north %f°: the ideal frame gives the polar-dial sun vector of DESIGN §2', (latDeg) => {
+  // docs/design.md §2: s = (−cos δ sin H, sin δ, cos δ cos H) with x east-positive and δ toward the elevated pole.
+  test.each([50.62, 12, 78])('north %f°: the ideal frame gives the polar-dial sun vector of docs/design.md §2', (latDeg) => {
     const f = dialFrame({ latitudeDeg: latDeg });
     for (const [hDeg, dDeg] of [[-60, 20], [0, -23.4], [35, 5], [80, 23.4]]) {
       const s = toDialFrame(f, enu(hDeg * DEG, dDeg * DEG, latDeg * DEG));

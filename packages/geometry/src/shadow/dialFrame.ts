@@ -8,7 +8,7 @@ import type { Vec3 } from '../parts/mesh.ts';
  * - `z` the outward face normal (in the vertical plane of the style, upward);
  * - `x = y × z`, the face-drawing x (right-positive seen face-on with the
  *   pole-ward end up): east in the northern hemisphere, west in the southern
- *   one (DESIGN §2), so the frame is right-handed in both.
+ *   one (docs/design.md §2), so the frame is right-handed in both.
  */
 export interface DialFrame {
   readonly x: Vec3;
@@ -29,7 +29,7 @@ export interface DialInstallation {
 /**
  * The installed dial frame. An ideal polar dial has its face tilted by
  * |latitude| from the horizontal, rising toward the elevated pole, with the
- * style in the true meridian (DESIGN §2, §4), so the style is parallel to the
+ * style in the true meridian (docs/design.md §2, §4), so the style is parallel to the
  * Earth's axis. With style azimuth A (0° north, 180° south, plus the azimuth
  * error) and elevation τ (|latitude| plus the tilt error):
  *

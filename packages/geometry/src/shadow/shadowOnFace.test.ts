@@ -50,7 +50,7 @@ describe('shadowOnFace', () => {
     expect(Math.max(...ys)).toBeCloseTo(g.y1Mm, 12);
   });
 
-  // The 45° check (common practice, DESIGN §2): at |H| = 45° the shadow edge lies h beyond the style edge.
+  // The 45° check (common practice, docs/design.md §2): at |H| = 45° the shadow edge lies h beyond the style edge.
   test.each([-45, 45])('equinox, H = %i°: the far shadow edge lies at ±(t/2 + h)', (hDeg) => {
     const H = hDeg * DEG;
     const sun = [-Math.sin(H), 0, Math.cos(H)] as const; // north: face x = east

@@ -47,7 +47,7 @@ export function parseSpec(raw: unknown): DialSpec {
 }
 
 /**
- * A waterjet cannot make a line narrower than its jet (DESIGN §5: kerf about
+ * A waterjet cannot make a line narrower than its jet (docs/design.md §5: kerf about
  * 0.8–1.0 mm), so mark widths the user did not set default wider for it.
  */
 export const WATERJET_MARK_WIDTHS = { hour: 2, half: 1.6, quarter: 1.2 } as const;

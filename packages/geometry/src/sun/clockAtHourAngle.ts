@@ -43,7 +43,7 @@ export const CLOCK_AT_HOUR_ANGLE_DEFAULTS = { useDaylightSaving: 'auto' } as con
 
 /**
  * Local clock time at which the real Sun reaches hour angle H at the site on
- * a local date (DESIGN §3):
+ * a local date (docs/design.md §3):
  *
  *     standard time T = 12 h + H/15° − E + (λs − λ)/15°   (hours)
  *

@@ -6,7 +6,7 @@ import { SUN_REFERENCE } from './referenceValues.testdata.ts';
 
 describe('equationOfTimeMin', () => {
   // Meeus, Astronomical Algorithms 2nd ed., Example 28.a: E = +13m42.6s at 1992 Oct 13.0 TD (memory).
-  // Definitions of the mean sun differ by about 0.2 s (DESIGN §7): tolerance 0.5 s.
+  // Definitions of the mean sun differ by about 0.2 s (docs/design.md §7): tolerance 0.5 s.
   test('Meeus Example 28.a within 0.5 s', () => {
     const ref = SUN_REFERENCE.meeus_28a_equation_of_time_1992_10_13;
     const ut = AstroTime.FromTerrestrialTime(ref.jde - 2451545.0).date;
@@ -18,7 +18,7 @@ describe('equationOfTimeMin', () => {
 
   // astronomy-engine HourAngle (general-purpose ephemeris, topocentric at 0°N 0°E):
   // apparent time at Greenwich = HA + 12 h, so E = HA + 12 h − UT. Topocentric parallax
-  // shifts it by under 0.6 s (DESIGN §7): tolerance 1 s.
+  // shifts it by under 0.6 s (docs/design.md §7): tolerance 1 s.
   test('agrees with astronomy-engine HourAngle at Greenwich within 1 s over a year', () => {
     const greenwich = new Observer(0, 0, 0);
     let worst = 0;

@@ -18,10 +18,10 @@ import { assertDate, sunEquatorOfDate } from './sunEquatorOfDate.ts';
  *   astronomy-engine does not distinguish).
  * Hence E = GAST − α + 12 h − UT, reduced to (−12 h, +12 h].
  * GAST from astronomy-engine `SiderealTime`, α from `sunEquatorOfDate`
- * (geocentric, apparent, of date — DESIGN §7).
+ * (geocentric, apparent, of date — docs/design.md §7).
  *
  * This "UT-based" mean sun differs from Meeus's L0-based one (Astronomical
- * Algorithms 2nd ed., ch. 28) by about 0.2 s (DESIGN §7).
+ * Algorithms 2nd ed., ch. 28) by about 0.2 s (docs/design.md §7).
  *
  * @example equationOfTimeMin(new Date('2025-11-03T12:00:00Z')) // ≈ +16.4
  */

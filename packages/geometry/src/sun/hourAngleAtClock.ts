@@ -25,7 +25,7 @@ export interface HourAngleAtClockOptions {
 
 /**
  * Hour angle of the real Sun, radians in (−π, π], at a local clock reading
- * (DESIGN §3):
+ * (docs/design.md §3):
  *
  *     H = 15°·(T − 12 h) + (λ − λs) + E/4 min·°
  *

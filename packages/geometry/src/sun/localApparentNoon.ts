@@ -29,12 +29,12 @@ export interface ApparentNoon {
 /**
  * Local apparent noon: the clock time (with the zone's daylight saving when in
  * force) at which the Sun's centre crosses the site's meridian, i.e. the
- * geocentric apparent hour angle is 0 (DESIGN §4: align the style on the
+ * geocentric apparent hour angle is 0 (docs/design.md §4: align the style on the
  * shadow of a plumb line at this moment).
  *
  * Latitude is checked but does not enter: the geocentric hour angle does not
  * depend on it; the topocentric one (parallax, up to 8.8″) differs by under
- * 0.6 s (DESIGN §7), which the test against astronomy-engine's
+ * 0.6 s (docs/design.md §7), which the test against astronomy-engine's
  * SearchHourAngle confirms.
  *
  * @example localApparentNoon({latitudeDeg: 38.7, longitudeDeg: -9.14, timezone: 'Europe/Lisbon'}, '2025-06-21').clock

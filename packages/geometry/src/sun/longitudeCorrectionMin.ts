@@ -3,7 +3,7 @@ import { assertRange } from '../guards.ts';
 /**
  * Longitude correction from apparent to standard time, minutes:
  * 4 min/° × (λs − λ), with λ the site longitude and λs the zone's standard
- * meridian, both degrees east positive (DESIGN §3; the Earth turns 1° in
+ * meridian, both degrees east positive (docs/design.md §3; the Earth turns 1° in
  * 4 min of mean time).
  *
  * Sign: standard time = apparent time − E + (λs − λ)/15 h, so the correction

@@ -26,7 +26,7 @@ export const WMM2025_VALID_UNTIL = new Date('2029-11-13T03:00:00.000Z');
  * Magnetic declination (variation), degrees, east positive: the angle from
  * true (geographic) north to the direction a compass needle points, from the
  * World Magnetic Model WMM2025 (NOAA NCEI / BGS) through the `geomagnetism`
- * package (DESIGN §4, §7).
+ * package (docs/design.md §4, §7).
  *
  * geomagnetism turns the date into a decimal year as
  * year + (ms since Jan 1 00:00 UTC) / (365 days).

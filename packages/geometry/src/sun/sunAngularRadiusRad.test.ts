@@ -7,7 +7,7 @@ import { SUN_RADIUS_KM, sunAngularRadiusRad } from './sunAngularRadiusRad.ts';
 const RAD_TO_ARCMIN = (180 / Math.PI) * 60;
 
 describe('sunAngularRadiusRad', () => {
-  // DESIGN §7 (memory): 15.72′ at aphelion, 16.26′ at perihelion, 15.99′ at 1 AU; tolerance 0.01′.
+  // docs/design.md §7 (memory): 15.72′ at aphelion, 16.26′ at perihelion, 15.99′ at 1 AU; tolerance 0.01′.
   test('range over 2025 and the value at 1 AU', () => {
     const ref = SUN_REFERENCE.sun_angular_radius_arcmin;
     let lo = Infinity;

@@ -11,7 +11,7 @@ export const SUN_RADIUS_KM = 695_700;
  * Apparent angular radius of the Sun's disc seen from the Earth's centre,
  * radians: asin(R☉ / d), with d the geocentric distance from astronomy-engine
  * `GeoVector(Body.Sun, t, aberration=true)`. Runs from 15.72′ (aphelion) to
- * 16.26′ (perihelion), 15.99′ at 1 AU (DESIGN §7).
+ * 16.26′ (perihelion), 15.99′ at 1 AU (docs/design.md §7).
  *
  * @example sunAngularRadiusRad(new Date('2025-01-04T12:00Z')) // ≈ 0.004729 (16.26′)
  */

@@ -61,7 +61,7 @@ export function zoneOffsets(timezone: string, dateUtc: Date): ZoneOffsets {
 
 /**
  * Standard meridian of a zone, degrees east positive: 15° × its standard UTC
- * offset in `year` (DESIGN §3).
+ * offset in `year` (docs/design.md §3).
  * @example standardMeridianDeg('Asia/Kolkata', 2025) // 82.5
  */
 export function standardMeridianDeg(timezone: string, year: number): number {

@@ -71,7 +71,7 @@ export type PartsSpec = z.output<typeof partsSection>;
 const CUT_METHODS: readonly string[] = ['laser', 'waterjet', 'router'];
 
 /**
- * Normalise the gnomon's stock (DESIGN §2: "when the gnomon is cut from the
+ * Normalise the gnomon's stock (docs/design.md §2: "when the gnomon is cut from the
  * plate's own sheet stock, t is the material thickness"). Rule:
  * - `parts.gnomonFrom: sheet` (explicit): gnomon.thickness becomes
  *   plate.thickness; a gnomon.thickness written in the spec that differs is

@@ -1,6 +1,6 @@
 import { Body, Equator, Horizon, MakeTime, Observer, SiderealTime } from 'astronomy-engine';
 import { describe, expect, test } from 'vitest';
-import { equationOfTimeMin } from '../sun/equationOfTimeMin.ts';
+import { equationOfTimeMin } from './equationOfTimeMin.ts';
 import { instantAtHourAngle, sunOnDay, sunTrack, wrapPi } from './sunTrack.ts';
 
 const DEG = Math.PI / 180;
@@ -28,7 +28,7 @@ const sites = [
 describe.each(sites)('sunTrack against direct astronomy-engine calls: $name', (site) => {
   for (const refraction of ['none', 'normal'] as const) {
     test(`direction within 0.05″ of Horizon(Equator(Sun, observer, ofdate, aberration)), refraction ${refraction}`, () => {
-      // Source: astronomy-engine 2.1.19 (a general-purpose ephemeris, DESIGN §7),
+      // Source: astronomy-engine 2.1.19 (a general-purpose ephemeris, docs/design.md §7),
       // called per instant: topocentric apparent RA/Dec of date, then Horizon().
       const track = sunTrack({ ...site, year: 2027, refraction });
       const observer = new Observer(site.latitudeDeg, site.longitudeDeg, 0);
