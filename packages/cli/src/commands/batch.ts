@@ -5,6 +5,7 @@ import { toReportJson } from '@umbrafab/fabricate';
 import { buildContext, GENERATOR } from '../buildFiles.ts';
 import { partsOutputs } from '../outputs/partsOutputs.ts';
 import { plateOutputs } from '../outputs/plateOutputs.ts';
+import { standOutputs } from '../outputs/standOutputs.ts';
 import { utf8 } from '../outputs/outputTypes.ts';
 import { readSpecFile } from '../readSpec.ts';
 import { writeFilesAtomic, type OutputFile } from '../writeFilesAtomic.ts';
@@ -13,6 +14,8 @@ import { UsageError, type CommandModule } from './commandTypes.ts';
 
 /** The steepest wedge that can be printed. */
 const MAX_LATITUDE_DEG = WEDGE_MAX_TILT_DEG;
+/** The files that change with the latitude: the printed wedge, or the cut stand. */
+const LATITUDE_FILES: readonly string[] = ['wedge.stl', 'stand.dxf', 'stand.stl'];
 /** Show a progress bar from this many latitudes on ("long runs"). */
 const PROGRESS_FROM = 4;
 
@@ -20,7 +23,10 @@ const PROGRESS_FROM = 4;
 export interface BatchRow {
   readonly latitudeDeg: number;
   readonly wedgeAngleDeg: number;
+  /** the latitude's wedge (printed) or assembled stand (cut processes) */
   readonly wedgeFile: string;
+  /** every file made for this latitude (wedge.stl, or stand.dxf and stand.stl, tagged) */
+  readonly latitudeFiles: readonly string[];
   readonly plateFile: string;
   /** rise of the plate's pole-ward edge over its lower edge, mm: length × sin(tilt) (docs/design.md §4) */
   readonly riseMm: number;
@@ -28,7 +34,7 @@ export interface BatchRow {
 
 export const batchCommand: CommandModule = {
   command: 'batch <spec>',
-  describe: 'write one plate and a latitude wedge for each of several latitudes (the plate once when it is the same for all)',
+  describe: 'write one plate and a latitude wedge (print) or stand (laser, waterjet, router) for each of several latitudes (the plate once when it is the same for all)',
   builder: (y) =>
     y
       .positional('spec', { type: 'string', demandOption: true, describe: 'dial spec file (.yaml or .json); its site.latitude is replaced by each listed latitude' })
@@ -58,8 +64,9 @@ export const batchCommand: CommandModule = {
         const { layout } = ctx;
         const plate = (await plateOutputs(ctx)).files;
         const parts = await partsOutputs(ctx);
+        const stand = await standOutputs(ctx);
         const wedge = parts.report.wedge as { angleDeg?: number } | undefined;
-        builds.push({ lat, spec, layout, plate, parts: parts.files, wedgeAngleDeg: wedge?.angleDeg ?? Math.abs(lat) });
+        builds.push({ lat, spec, layout, plate, parts: [...parts.files, ...stand.files], wedgeAngleDeg: wedge?.angleDeg ?? Math.abs(lat) });
         bar?.increment(1, { lat: latitudeTag(lat) });
       }
     } finally {
@@ -78,12 +85,13 @@ export const batchCommand: CommandModule = {
     for (const b of builds) {
       const tag = latitudeTag(b.lat);
       if (!samePlate) for (const f of b.plate) files.push({ name: f.name.replace(/\.(\w+)$/, `-${tag}.$1`), bytes: f.bytes });
-      const wedge = pick(b.parts, 'wedge.stl');
-      if (!wedge) throw new UsageError(`parts.write: the spec writes no wedge.stl; allowed: "auto" or a list that includes "wedge.stl" for umbrafab batch`);
-      const wedgeFile = `wedge-${tag}.stl`;
-      files.push({ name: wedgeFile, bytes: wedge.bytes });
+      const own = b.parts.filter((f) => LATITUDE_FILES.includes(f.name));
+      if (own.length === 0) throw new UsageError(`parts.write: the spec writes no wedge.stl, stand.dxf or stand.stl; allowed: "auto" or a list that includes one of them for umbrafab batch`);
+      const tagged = own.map((f) => ({ name: f.name.replace(/\.(\w+)$/, `-${tag}.$1`), bytes: f.bytes }));
+      files.push(...tagged);
+      const wedgeFile = tagged.find((f) => f.name.endsWith('.stl'))?.name ?? tagged[0].name;
       for (const f of b.parts) {
-        if (f.name === 'wedge.stl' || f.name === 'body.stl') continue;
+        if (LATITUDE_FILES.includes(f.name) || f.name === 'body.stl') continue;
         const prev = sharedParts.get(f.name);
         if (!prev) sharedParts.set(f.name, f.bytes);
         else if (!sameBytes(prev, f.bytes)) throw new Error(`batch: ${f.name} differs between latitudes; it should not depend on the latitude`);
@@ -93,6 +101,7 @@ export const batchCommand: CommandModule = {
         latitudeDeg: b.lat,
         wedgeAngleDeg: round(b.wedgeAngleDeg, 3),
         wedgeFile,
+        latitudeFiles: tagged.map((f) => f.name),
         plateFile: samePlate ? 'plate.dxf' : `plate-${tag}.dxf`,
         riseMm: round(p.lengthMm * Math.sin((Math.abs(b.lat) * Math.PI) / 180), 1),
       });
