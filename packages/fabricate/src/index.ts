@@ -12,3 +12,4 @@ export * from './install/toInstallMd.ts';
 export * from './template/index.ts';
 export * from './pictures/index.ts';
 export * from './check/index.ts';
+export * from './install/toPlanarInstallMd.ts';
