@@ -1,9 +1,5 @@
 import type { PlanarInstallSheet } from '@umbrafab/geometry';
-
-/** Markdown-escape free text (names come from strangers' specs). */
-function esc(s: string): string {
-  return s.replace(/[\\`*_{}[\]()#+!<>|]/g, (c) => `\\${c}`);
-}
+import { escapeMarkdownText } from './markdownText.ts';
 
 /**
  * install.md for a horizontal, wall, meridian or equatorial face: the
@@ -11,7 +7,7 @@ function esc(s: string): string {
  * face's figures (CommonMark).
  */
 export function toPlanarInstallMd(sheet: PlanarInstallSheet): string {
-  const out: string[] = [`# Installing ${esc(sheet.title)} (${sheet.faceType} face)`, ''];
+  const out: string[] = [`# Installing ${escapeMarkdownText(sheet.title)} (${sheet.faceType} face)`, ''];
   out.push('## Safety first', '');
   for (const c of sheet.cautions) out.push(`- ${c}`);
   out.push('- Work on a wall from a secured ladder or scaffold; check for buried cables and pipes before drilling.', '');
