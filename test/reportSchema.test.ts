@@ -11,7 +11,7 @@ const ROOT = resolve(import.meta.dirname, '..');
 const SPECS = [...GOLDEN_SPECS, 'fixtures/specs/time-nodus.yaml', 'fixtures/specs/parts-print.yaml', 'fixtures/specs/engrave-laser-south.yaml'];
 
 describe('report.json against its JSON Schema (docs/report.schema.json, from the Report type)', () => {
-  it('the committed schema is the one the Report type gives (regenerate with pnpm report-schema)', () => {
+  it('the committed schema is the one the Report type gives (regenerate with pnpm golden or pnpm report-schema)', () => {
     expect(readFileSync(REPORT_SCHEMA_PATH, 'utf8')).toBe(reportSchemaText());
   });
 
