@@ -29,8 +29,7 @@ async function buildAndValidate(raw: object) {
     expect(a.degenerateFacets, f.name).toBe(0);
     expect(a.edgesFixed, f.name).toBe(0);
     // one closed body per part; stand.stl holds each piece of the assembled stand as its own shell
-    const stand = r.report.stand as { parts?: { quantity: number }[] } | undefined;
-    expect(a.parts, f.name).toBe(f.name === 'stand.stl' ? stand!.parts!.reduce((n, p) => n + p.quantity, 0) : 1);
+    expect(a.parts, f.name).toBe(f.name === 'stand.stl' ? r.report.stand!.parts.reduce((n, p) => n + p.quantity, 0) : 1);
   }
   return r;
 }

@@ -37,3 +37,4 @@ export * from './stand/index.ts';
 export * from './spec/sections/standSection.ts';
 export * from './spec/materials.ts';
 export * from './planar/index.ts';
+export * from './spec/sections/faceSection.ts';

@@ -1,5 +1,5 @@
 import { join } from 'node:path';
-import { buildFiles } from '../buildFiles.ts';
+import { buildAnyFiles } from '../buildFiles.ts';
 import { readSpecFile } from '../readSpec.ts';
 import { writeFilesAtomic } from '../writeFilesAtomic.ts';
 import type { CommandModule } from './commandTypes.ts';
@@ -14,7 +14,7 @@ export const buildCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
     const spec = readSpecFile(args.spec);
-    const result = await buildFiles(spec);
+    const result = await buildAnyFiles(spec);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
     const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
     if (recovered) io.out(`note: ${outDir}: ${recovered}`);

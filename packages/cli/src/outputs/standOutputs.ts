@@ -9,6 +9,7 @@ import {
   sheetPartAreaMm2,
   standSolid,
   wedgeFastenerRows,
+  type FastenerRow,
   type SizedStand,
 } from '@umbrafab/geometry';
 import { stlHeader, toPartsDxf, toStl } from '@umbrafab/fabricate';
@@ -26,8 +27,73 @@ export const STAND_PART_LABELS: Readonly<Record<string, string>> = {
   'stand-cross': 'CROSS MEMBER',
 };
 
+/** report.json sections of the stand producer. */
+export interface StandSections {
+  /** the plate's mounting holes: the one list the stand's (or a wedge's) own holes follow */
+  readonly fixings: readonly FixingSection[];
+  /** screws, washers, nuts and ground anchors to buy */
+  readonly fasteners: readonly FastenerRow[];
+  /** the flat-pack stand, when it is built (laser, waterjet, router) */
+  readonly stand?: StandSection;
+}
+
+/** One plate-to-stand fixing. */
+export interface FixingSection {
+  readonly index: number;
+  /** hole centre in plate.dxf coordinates, mm */
+  readonly plateMm: readonly [number, number];
+  /** the same centre on the seat: x from the seat's centre line, y up the slope from the plate's lower edge, mm */
+  readonly seatMm: readonly [number, number];
+  readonly diameterMm: number;
+}
+
+/** One drawn part of the stand. */
+export interface StandPartSection {
+  readonly name: string;
+  /** the shop's name for it, as labelled in stand.dxf */
+  readonly label: string;
+  readonly quantity: number;
+  readonly material: string;
+  readonly thicknessMm: number;
+  /** bounding box of the flat part, mm */
+  readonly sizeMm: readonly number[];
+  /** outer profile minus holes and slots, mm² */
+  readonly areaMm2: number;
+  /** area × thickness, mm³ (one piece) */
+  readonly volumeMm3: number;
+  readonly holes: number;
+  readonly slots: number;
+}
+
+/** The flat-pack stand: sizes, parts, joints and files. */
+export interface StandSection {
+  readonly material: string;
+  readonly thicknessMm: number;
+  /** the seat's tilt = |latitude|, degrees */
+  readonly seatAngleDeg: number;
+  readonly clearancePerSideMm: number;
+  /** overall height above the ground, mm */
+  readonly heightMm: number;
+  readonly footprintMm: { readonly acrossMm: number; readonly alongMm: number };
+  readonly lowEndMm: number;
+  readonly toeMm: number;
+  /** between the cheeks' mid-planes, mm */
+  readonly cheekSpacingMm: number;
+  /** the seat rails along the slope from the plate's lower edge, mm */
+  readonly rails: readonly { readonly lowerEdgeMm: number; readonly widthMm: number }[];
+  readonly parts: readonly StandPartSection[];
+  /** tab-and-slot joints */
+  readonly joints: number;
+  /** 'true north' or 'true south': the elevated pole */
+  readonly risesToward: string;
+  readonly files: {
+    readonly dxf?: { readonly pieces: number; readonly layers: readonly string[]; readonly nominal: boolean };
+    readonly stl?: { readonly volumeMm3: number; readonly facets: number; readonly shells: number; readonly bbox: { readonly minMm: readonly number[]; readonly maxMm: readonly number[] } };
+  };
+}
+
 /** The report's view of a stand: sizes, parts, joints (for reports and the installation sheet). */
-export function standReport(stand: SizedStand): Record<string, unknown> {
+export function standReport(stand: SizedStand): Omit<StandSection, 'risesToward' | 'files'> {
   const d = stand.dims;
   return {
     material: d.material,
@@ -50,7 +116,7 @@ export function standReport(stand: SizedStand): Record<string, unknown> {
         quantity: p.quantity ?? 1,
         material: p.material,
         thicknessMm: p.thicknessMm,
-        sizeMm: [Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys)],
+        sizeMm: [Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys)] as readonly number[],
         areaMm2: area,
         volumeMm3: area * p.thicknessMm,
         holes: p.inner.filter((f) => f.kind === 'circle').length,
@@ -71,10 +137,10 @@ export function standReport(stand: SizedStand): Record<string, unknown> {
  * `fasteners` (the table of screws, nuts, washers and anchors) sections.
  * For a printed wedge the fastener table lists its ground screws.
  */
-export const standOutputs: Producer = async ({ spec, layout }) => {
+export const standOutputs: Producer<StandSections> = async ({ spec, layout }) => {
   const plan = partsPlan(layout);
   const files: OutputFile[] = [];
-  const fixings = mountingFixings(layout).map((f) => ({ index: f.index, plateMm: f.plateMm, seatMm: f.seatMm, diameterMm: f.diameterMm }));
+  const fixings: FixingSection[] = mountingFixings(layout).map((f) => ({ index: f.index, plateMm: [f.plateMm[0], f.plateMm[1]], seatMm: [f.seatMm[0], f.seatMm[1]], diameterMm: f.diameterMm }));
   const wantDxf = plan.files.includes('stand.dxf');
   const wantStl = plan.files.includes('stand.stl');
   if (!wantDxf && !wantStl) {
@@ -84,7 +150,7 @@ export const standOutputs: Producer = async ({ spec, layout }) => {
   const pole = layout.hemisphere === 'north' ? 'true north' : 'true south';
   const lat = spec.site.latitude;
   const latText = `${Math.abs(lat).toFixed(2)} deg ${lat >= 0 ? 'N' : 'S'}`;
-  const standFiles: Record<string, unknown> = {};
+  const standFiles: { dxf?: NonNullable<StandSection['files']['dxf']>; stl?: NonNullable<StandSection['files']['stl']> } = {};
   if (wantDxf) {
     const pieces = pieceRows(stand.parts);
     files.push({ name: 'stand.dxf', bytes: utf8(toPartsDxf(stand.parts, pieces, new Map(Object.entries(STAND_PART_LABELS)))) });

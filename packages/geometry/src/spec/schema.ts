@@ -10,6 +10,7 @@ import { templateSection } from './sections/templateSection.ts';
 import { picturesSection } from './sections/picturesSection.ts';
 import { standSection } from './sections/standSection.ts';
 import { MATERIALS } from './materials.ts';
+import { faceSection } from './sections/faceSection.ts';
 
 /**
  * The dial spec schema: one source for validation, defaults and the field
@@ -71,6 +72,7 @@ export const specSchema = z.strictObject({
     timezone: z.string({ error: 'allowed: an IANA time zone name in quotes, e.g. "Europe/Lisbon"' }).describe('IANA time zone name, e.g. "Europe/Lisbon"'),
     place: freeText({ maxLength: 60 }).optional().describe('place name for the title block (optional)'),
   }),
+  face: faceSection,
   dial: z
     .strictObject({
       reads: oneOf(['solar', 'standard']).default('solar').describe('solar: apparent solar time; standard: lines shifted to the zone standard meridian'),
