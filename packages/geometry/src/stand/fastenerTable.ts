@@ -57,7 +57,7 @@ export function fastenerTable(layout: DialLayout, stand: SizedStand): FastenerRo
     const length = boltLength(s, Tp + z.thicknessMm);
     rows.push({
       use: 'plate to seat rails',
-      item: sink ? 'countersunk machine screw ISO 10642, stainless A4' : 'pan-head machine screw ISO 7045, stainless A4',
+      item: `${sink ? 'countersunk machine screw ISO 10642' : 'pan-head machine screw ISO 7045'}, stainless A4${2 * holes[0].radiusMm < s.clearanceHoleMm - 1e-9 ? ` (first drill the plate's and rails' Ø ${(2 * holes[0].radiusMm).toFixed(1)} mm holes out to Ø ${s.clearanceHoleMm} mm)` : ''}`,
       size: s.name,
       lengthMm: length,
       count: holes.length,

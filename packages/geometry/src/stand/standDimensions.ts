@@ -1,7 +1,7 @@
 import { SpecError } from '../errors.ts';
 import { DEG } from '../guards.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
-import { screwForHole, type MetricSize } from './metricFasteners.ts';
+import { METRIC_SIZES, screwForHole, type MetricSize } from './metricFasteners.ts';
 import type { StandDimensions } from './standTypes.ts';
 
 /** Least width of a seat rail along the slope, mm (room for a slot and a hole). */
@@ -47,8 +47,8 @@ export interface StandSizing extends StandDimensions {
  *
  * Bad combinations are SpecErrors naming the field: a clearance not less
  * than half the sheet thickness, a router tool wider than a slot, a plate
- * too narrow for two cheeks and a cross member, hole diameters no metric
- * screw passes, and cheeks too low for the nuts under the seat rails.
+ * too narrow for two cheeks and a cross member, an anchor hole no metric
+ * anchor passes, and cheeks too low for the nuts under the seat rails.
  */
 export function standDimensions(layout: DialLayout): StandSizing {
   const spec = layout.spec;
@@ -70,10 +70,8 @@ export function standDimensions(layout: DialLayout): StandSizing {
 
   const holes = layout.plate.holes;
   const holeDia = holes.length > 0 ? 2 * holes[0].radiusMm : 0;
-  const screw = holes.length > 0 ? screwForHole(holeDia) : null;
-  if (holes.length > 0 && screw === null) {
-    throw new SpecError('holes.diameter', holeDia, 'allowed: at least 3.4 mm (the ISO 273 clearance hole of an M3 screw) for the stand\'s fixings');
-  }
+  // A hole narrower than M3's clearance hole is drilled out to it (the fastener table says so).
+  const screw = holes.length > 0 ? (screwForHole(holeDia) ?? METRIC_SIZES[0]) : null;
   const anchor = st.anchors > 0 ? screwForHole(st.anchorDiameter) : null;
   if (st.anchors > 0 && anchor === null) {
     throw new SpecError('stand.anchorDiameter', st.anchorDiameter, 'allowed: at least 3.4 mm (the ISO 273 clearance hole of an M3 anchor), or stand.anchors: 0');
