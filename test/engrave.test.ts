@@ -1,8 +1,7 @@
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { layoutDial, plateDrawing, timeFaceExtras, type PlateDrawing, type Vec2 } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { layoutDial, plateDrawing, timeFaceExtras, type PlateDrawing, type Vec2 } from '@umbrafab/geometry';
+import { buildFiles, readSpecFile } from '@umbrafab/cli';
 import { expectClose } from './helpers/closeTo.ts';
 import { feedRuns, motions, runRs274, xyLength, type CanonMotion } from './helpers/rs274.ts';
 
