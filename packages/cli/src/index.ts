@@ -7,9 +7,9 @@
 export { EXIT, main, type Io } from './main.ts';
 export { buildContext, buildFiles, GENERATOR, type BuildResult } from './buildFiles.ts';
 export type { BuildContext, Producer, ProducerResult } from './outputs/outputTypes.ts';
-export { parseSpecText, readSpecFile } from './readSpec.ts';
+export { MAX_SPEC_ALIASES, MAX_SPEC_BYTES, MAX_SPEC_NODES, parseSpecText, readSpecFile, readSpecText } from './readSpec.ts';
 export { parsePlateDxf, readPlateDxf, type PlateDxf } from './readPlateDxf.ts';
-export { OutputError, removeStaleTemps, writeFilesAtomic, type OutputFile } from './writeFilesAtomic.ts';
+export { entryExists, OutputError, recoverInterrupted, writeFilesAtomic, type OutputFile } from './writeFilesAtomic.ts';
 export { UsageError } from './commands/commandTypes.ts';
 export { starterSpecYaml } from './starterSpec.ts';
 export { startServer, type RunningServer, type ServeOptions } from './serve/startServer.ts';

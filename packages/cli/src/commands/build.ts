@@ -15,7 +15,8 @@ export const buildCommand: CommandModule = {
     const spec = readSpecFile(args.spec);
     const result = await buildFiles(spec);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
-    writeFilesAtomic(outDir, result.files, args.force);
+    const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
+    if (recovered) io.out(`note: ${outDir}: ${recovered}`);
     const p = result.layout.plate;
     const total = result.files.reduce((s, f) => s + f.bytes.length, 0);
     io.out(
