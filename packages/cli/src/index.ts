@@ -5,7 +5,7 @@
  * copy of `main` (dist/); tests and scripts import these sources by name.
  */
 export { EXIT, main, type Io } from './main.ts';
-export { buildContext, buildFiles, GENERATOR, type BuildResult } from './buildFiles.ts';
+export { buildAnyFiles, buildContext, buildFiles, GENERATOR, type BuildResult } from './buildFiles.ts';
 export type { BuildContext, Producer, ProducerResult } from './outputs/outputTypes.ts';
 export { MAX_SPEC_ALIASES, MAX_SPEC_BYTES, MAX_SPEC_NODES, parseSpecText, readSpecFile, readSpecText } from './readSpec.ts';
 export { parsePlateDxf, readPlateDxf, type PlateDxf } from './readPlateDxf.ts';

@@ -11,9 +11,9 @@ export const buildCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
-    const [{ buildFiles }, { readSpecFile }, { writeFilesAtomic }] = await Promise.all([import('../buildFiles.ts'), import('../readSpec.ts'), import('../writeFilesAtomic.ts')]);
+    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }] = await Promise.all([import('../buildFiles.ts'), import('../readSpec.ts'), import('../writeFilesAtomic.ts')]);
     const spec = readSpecFile(args.spec);
-    const result = await buildFiles(spec);
+    const result = await buildAnyFiles(spec);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
     const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
     if (recovered) io.out(`note: ${outDir}: ${recovered}`);
