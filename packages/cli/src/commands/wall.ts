@@ -1,8 +1,5 @@
 import { basename, dirname } from 'node:path';
-import { parseDocument } from 'yaml';
-import { SpecError, parseSpec, wallDeclinationFromShadow, type ShadowReading } from '@umbrafab/geometry';
-import { readSpecFile, readSpecText } from '../readSpec.ts';
-import { writeFilesAtomic } from '../writeFilesAtomic.ts';
+import type { ShadowReading } from '@umbrafab/geometry';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
 /** Most readings one call accepts. */
@@ -23,7 +20,9 @@ export const wallCommand: CommandModule = {
       .positional('spec', { type: 'string', demandOption: true, describe: 'dial spec file (.yaml or .json): the site is read from it' })
       .option('reading', { type: 'string', array: true, demandOption: true, describe: '"YYYY-MM-DD HH:MM:SS ANGLE": local clock time and the angle between the wall (to your right as you face it) and the shadow traced out toward the Sun, degrees; repeat for several readings' })
       .option('write', { type: 'boolean', default: false, describe: 'write the result into the spec (face.type vertical, face.wallDeclination), keeping its comments' }),
-  run: (args, io) => {
+  run: async (args, io) => {
+    // Loaded only when the command runs, so `--help` and the other commands stay quick.
+    const { SpecError, parseDocument, parseSpec, readSpecFile, readSpecText, wallDeclinationFromShadow, writeFilesAtomic } = await import('./wallDeps.ts');
     const path = String(args.spec);
     const spec = readSpecFile(path);
     const raw = ([] as string[]).concat(args.reading ?? []);
