@@ -1,16 +1,20 @@
-import { kerfCompensate, toDxf, toSvg } from '@umbrafab/fabricate';
+import { toSvg } from '@umbrafab/fabricate';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
+import { cutPartFiles, cutParts } from './cutParts.ts';
 
-/** plate.dxf and preview.svg, and the report's marks, plate, gnomon and time sections. */
-export const plateOutputs: Producer = ({ spec, layout, drawing }) => {
-  const cut = kerfCompensate(drawing, spec.process.kerf);
-  const dxf = toDxf(drawing, { method: spec.process.method, kerfMm: spec.process.kerf });
+/**
+ * plate.dxf (nominal; `plate-offset-K mm.dxf` when cutFiles.precompensate,
+ * with its R12 and SVG copies on request) and preview.svg, and the report's
+ * marks, plate, gnomon and time sections.
+ */
+export const plateOutputs: Producer = async (ctx) => {
+  const { spec, layout, drawing } = ctx;
+  const plate = cutParts(ctx).find((p) => p.name === 'plate');
+  if (!plate) throw new Error('plateOutputs: the sheet parts have no plate');
+  const cut = await cutPartFiles(ctx, plate);
   const svg = previewSvgText({ spec, layout, drawing });
   return {
-    files: [
-      { name: 'plate.dxf', bytes: utf8(dxf) },
-      { name: 'preview.svg', bytes: utf8(svg) },
-    ],
+    files: [...cut.files, { name: 'preview.svg', bytes: utf8(svg) }],
     report: {
       hemisphere: layout.hemisphere,
       marks: layout.marks,
@@ -25,10 +29,7 @@ export const plateOutputs: Producer = ({ spec, layout, drawing }) => {
         slots: layout.plate.slots.map((s) => ({ xMm: s.cx, yMm: s.cy, widthMm: s.widthMm, lengthMm: s.heightMm })),
         cut: {
           method: spec.process.method,
-          kerfMm: spec.process.kerf,
-          offsetMm: cut.offsetMm,
-          outlineWidthMm: cut.outline.widthMm,
-          outlineLengthMm: cut.outline.heightMm,
+          ...cut.report,
           fitClearancePerSideMm: spec.process.clearance,
         },
       },
