@@ -1,5 +1,5 @@
 import { join } from 'node:path';
-import { buildFiles } from '../buildFiles.ts';
+import { buildAnyFiles } from '../buildFiles.ts';
 import { readSpecFile } from '../readSpec.ts';
 import { writeFilesAtomic } from '../writeFilesAtomic.ts';
 import type { CommandModule } from './commandTypes.ts';
@@ -14,9 +14,10 @@ export const buildCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
     const spec = readSpecFile(args.spec);
-    const result = await buildFiles(spec);
+    const result = await buildAnyFiles(spec);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
-    writeFilesAtomic(outDir, result.files, args.force);
+    const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
+    if (recovered) io.out(`note: ${outDir}: ${recovered}`);
     const p = result.layout.plate;
     const total = result.files.reduce((s, f) => s + f.bytes.length, 0);
     io.out(
@@ -32,9 +33,10 @@ export const buildCommand: CommandModule = {
  * The console lines about the cutting drawings: which are pre-compensated
  * (offset by kerf/2: the machine must not offset again), which are true size.
  */
-export function cutFileLines(report: Record<string, unknown>): string[] {
-  const plate = (report.plate as { cut?: { file?: string; drawn?: string; offsetMm?: number; kerfMm?: number } } | undefined)?.cut;
-  const gnomon = (report.parts as { gnomonDxf?: { file?: string; drawn?: string; offsetMm?: number } } | undefined)?.gnomonDxf;
+export function cutFileLines(report: object): string[] {
+  const r = report as { plate?: unknown; parts?: unknown };
+  const plate = (r.plate as { cut?: { file?: string; drawn?: string; offsetMm?: number; kerfMm?: number } } | undefined)?.cut;
+  const gnomon = (r.parts as { gnomonDxf?: { file?: string; drawn?: string; offsetMm?: number } } | undefined)?.gnomonDxf;
   const out: string[] = [];
   for (const c of [plate, gnomon]) {
     if (!c?.file) continue;

@@ -15,8 +15,26 @@ export function cutParts(ctx: BuildContext): SheetPart[] {
   return sheetParts(layout, drawing);
 }
 
+/** How one part's cutting drawing was drawn, in report.json. */
+export interface CutFileSection extends PartCutReport {
+  /** radius of the round tool the inside corners are relieved for, mm (0: no relief) */
+  readonly reliefToolRadiusMm: number;
+  /** the etched strokes' union, when they are drawn as outlines */
+  readonly etch?: {
+    /** closed outlines (outer rings and holes): the pierces a waterjet makes to etch them */
+    readonly pierces: number;
+    /** connected regions */
+    readonly regions: number;
+    readonly areaMm2: number;
+    /** largest gap between a round join or cap and its chords, mm */
+    readonly chordToleranceMm: number;
+  };
+  /** plate: the relief of each gnomon slot (none, dogbone, round-ends) */
+  readonly slotRelief?: readonly string[];
+}
+
 /** One part's cutting files (DXF, and the R12 / SVG copies the spec asks for) and its report section. */
-export async function cutPartFiles(ctx: BuildContext, part: SheetPart): Promise<{ files: OutputFile[]; report: Record<string, unknown> }> {
+export async function cutPartFiles(ctx: Pick<BuildContext, 'spec' | 'drawing'>, part: SheetPart): Promise<{ files: OutputFile[]; report: CutFileSection }> {
   const { spec } = ctx;
   const c = spec.cutFiles;
   const strokes = resolveStrokeMode(c.strokes, spec.process.method);
@@ -32,10 +50,12 @@ export async function cutPartFiles(ctx: BuildContext, part: SheetPart): Promise<
     r12: c.r12,
     svg: c.svg,
   });
-  const report: Record<string, unknown> = { ...r.report, reliefToolRadiusMm: reliefToolRadius(spec) };
-  if (outlines) report.etch = { pierces: outlines.rings, regions: outlines.regions.length, areaMm2: Math.round(outlines.areaMm2 * 1e4) / 1e4, chordToleranceMm: outlines.chordToleranceMm };
-  if (part.name === 'plate') report.slotRelief = slotReliefs(ctx.drawing, reliefToolRadius(spec));
+  const report: CutFileSection = {
+    ...r.report,
+    reliefToolRadiusMm: reliefToolRadius(spec),
+    ...(outlines ? { etch: { pierces: outlines.rings, regions: outlines.regions.length, areaMm2: Math.round(outlines.areaMm2 * 1e4) / 1e4, chordToleranceMm: outlines.chordToleranceMm } } : {}),
+    ...(part.name === 'plate' ? { slotRelief: slotReliefs(ctx.drawing, reliefToolRadius(spec)) } : {}),
+  };
   return { files: r.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })), report };
 }
 
-export type { PartCutReport };
