@@ -2,20 +2,8 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import {
-  dialGnomon,
-  dialWedge,
-  faceToWedge,
-  gnomonOnPlate,
-  layoutDial,
-  meshBounds,
-  meshVolumeMm3,
-  parseSpec,
-  partsPlan,
-  type Vec3,
-} from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { dialGnomon, dialWedge, faceToWedge, gnomonOnPlate, layoutDial, meshBounds, meshVolumeMm3, parseSpec, partsPlan, type Vec3 } from '@umbrafab/geometry';
+import { buildFiles, readSpecFile } from '@umbrafab/cli';
 import { expectClose } from './helpers/closeTo.ts';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 
