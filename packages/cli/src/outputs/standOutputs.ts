@@ -12,7 +12,7 @@ import {
   type FastenerRow,
   type SizedStand,
 } from '@umbrafab/geometry';
-import { stlHeader, toPartsDxf, toStl } from '@umbrafab/fabricate';
+import { piecesDrawing, stlHeader, toDxf, toStl } from '@umbrafab/fabricate';
 import { utf8, type Producer } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 
@@ -153,7 +153,11 @@ export const standOutputs: Producer<StandSections> = async ({ spec, layout }) =>
   const standFiles: { dxf?: NonNullable<StandSection['files']['dxf']>; stl?: NonNullable<StandSection['files']['stl']> } = {};
   if (wantDxf) {
     const pieces = pieceRows(stand.parts);
-    files.push({ name: 'stand.dxf', bytes: utf8(toPartsDxf(stand.parts, pieces, new Map(Object.entries(STAND_PART_LABELS)))) });
+    const notes = [
+      `stand: TRUE SIZE (nominal) cut profiles, ${pieces.length} pieces. Apply the machine's own kerf or tool offset (${spec.process.method}, kerf ${spec.process.kerf} mm).`,
+      `stock: ${stand.dims.material} ${stand.dims.thicknessMm} mm. Slots are the tabs + ${stand.dims.clearanceMm} mm each side. Only CUT_PROFILE cuts; REFERENCE_NO_CUT is off and never cut.`,
+    ];
+    files.push({ name: 'stand.dxf', bytes: utf8(toDxf(piecesDrawing(stand.parts, pieces, new Map(Object.entries(STAND_PART_LABELS)), notes))) });
     standFiles.dxf = { pieces: pieces.length, layers: ['CUT_PROFILE', 'REFERENCE_NO_CUT'], nominal: true };
   }
   if (wantStl) {
