@@ -8,10 +8,11 @@ export interface BuildContext {
   readonly drawing: PlateDrawing;
 }
 
-/** What a producer adds: files, and top-level sections merged into report.json. */
+/** What a producer adds: files, top-level sections merged into report.json, and notes for the user (report.json's notes, after the layout's, and the console). */
 export interface ProducerResult {
   readonly files: readonly OutputFile[];
   readonly report: Readonly<Record<string, unknown>>;
+  readonly notes?: readonly string[];
 }
 
 /**
