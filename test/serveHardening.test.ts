@@ -1,7 +1,12 @@
+import { readFileSync } from 'node:fs';
 import { connect } from 'node:net';
 import { request } from 'node:http';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { parse as parseYaml } from 'yaml';
+import { parseSpec } from '../packages/geometry/src/index.ts';
+import { buildCache } from '../packages/cli/src/serve/buildCache.ts';
+import { fullBuilder, type FullBuilder } from '../packages/cli/src/serve/fullBuilder.ts';
 import { bindPolicy } from '../packages/cli/src/serve/bindPolicy.ts';
 import { startServer, type RunningServer } from '../packages/cli/src/serve/startServer.ts';
 
@@ -88,6 +93,51 @@ describe('serve: request bodies', () => {
       expect(logs[0]).toMatch(/^umbrafab serve: POST \/api\/view: the request body stopped after 5 bytes \(aborted\)$/);
     } finally {
       await server.close();
+    }
+  });
+});
+
+describe('serve: memory goes back after a build', () => {
+  it('the build cache keeps finished builds only up to its byte budget (older ones are built again on request)', async () => {
+    const built: string[] = [];
+    const fake: FullBuilder = {
+      running: () => false,
+      warm: () => {},
+      build: async (spec) => {
+        built.push(spec.name);
+        return [{ name: 'big.bin', bytes: new Uint8Array(400) }];
+      },
+      close: async () => {},
+    };
+    const cache = buildCache(fake, 12, 1000);
+    const base = parseSpec(parseYaml(readFileSync(DEMO, 'utf8')));
+    const entries = [];
+    for (const name of ['a', 'b', 'c']) {
+      const e = await cache.views({ ...base, name });
+      await e.full();
+      entries.push(e);
+    }
+    expect(built).toEqual(['a', 'b', 'c']); // 1200 bytes held > 1000: "a" was dropped
+    await entries[2].full();
+    await entries[1].full();
+    expect(built).toEqual(['a', 'b', 'c']);
+    await entries[0].full();
+    expect(built).toEqual(['a', 'b', 'c', 'a']);
+  });
+
+  it('the build worker stops when idle and starts again for the next build, with the same bytes', async () => {
+    const builder = fullBuilder({ idleMs: 300 });
+    try {
+      const spec = parseSpec({ ...parseYaml(readFileSync(DEMO, 'utf8')), pictures: { write: false }, template: { write: false } });
+      const first = await builder.build(spec);
+      expect(builder.running()).toBe(true);
+      for (let i = 0; i < 50 && builder.running(); i++) await new Promise((r) => setTimeout(r, 100));
+      expect(builder.running()).toBe(false);
+      const second = await builder.build(spec);
+      expect(second.map((f) => f.name)).toEqual(first.map((f) => f.name));
+      second.forEach((f, i) => expect(Buffer.from(f.bytes).equals(Buffer.from(first[i].bytes)), f.name).toBe(true));
+    } finally {
+      await builder.close();
     }
   });
 });
