@@ -1,7 +1,4 @@
 import { join } from 'node:path';
-import { buildFiles } from '../buildFiles.ts';
-import { readSpecFile } from '../readSpec.ts';
-import { writeFilesAtomic } from '../writeFilesAtomic.ts';
 import type { CommandModule } from './commandTypes.ts';
 
 export const buildCommand: CommandModule = {
@@ -13,8 +10,10 @@ export const buildCommand: CommandModule = {
       .option('out', { type: 'string', alias: 'o', describe: 'output folder (default: out/<spec name>)' })
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
+    // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
+    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }] = await Promise.all([import('../buildFiles.ts'), import('../readSpec.ts'), import('../writeFilesAtomic.ts')]);
     const spec = readSpecFile(args.spec);
-    const result = await buildFiles(spec);
+    const result = await buildAnyFiles(spec);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
     const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
     if (recovered) io.out(`note: ${outDir}: ${recovered}`);
@@ -23,7 +22,7 @@ export const buildCommand: CommandModule = {
     io.out(
       `umbrafab: wrote ${result.files.length} files (${(total / 1024).toFixed(1)} KiB) to ${outDir}: ${result.files.map((f) => f.name).join(', ')} — plate ${p.widthMm} x ${p.lengthMm} mm, ${result.layout.marks.length} marks, ${spec.process.method} kerf ${spec.process.kerf} mm`,
     );
-    for (const note of result.notes) io.out(`note: ${note}`);
+    for (const note of 'notes' in result ? result.notes : result.layout.notes) io.out(`note: ${note}`);
     return 0;
   },
 };
