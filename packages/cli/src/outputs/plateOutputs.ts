@@ -1,5 +1,5 @@
 import type { Hemisphere, Mark } from '@umbrafab/geometry';
-import { kerfCompensate, toDxf, toSvg } from '@umbrafab/fabricate';
+import { kerfCompensate, toDxf, toSvg, type SvgOptions } from '@umbrafab/fabricate';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
 
 /** The report.json sections of the plate: the face's marks, the plate and the gnomon as laid out. */
@@ -97,6 +97,11 @@ export const plateOutputs: Producer<PlateSections> = ({ spec, layout, drawing })
 };
 
 /** The text of preview.svg (shared with the pictures, which render it to PNG). */
-export function previewSvgText({ spec, layout, drawing }: BuildContext): string {
-  return toSvg(drawing, { caption: `${spec.name} - preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+export function previewSvgText(ctx: BuildContext): string {
+  return toSvg(ctx.drawing, previewSvgOptions(ctx));
+}
+
+/** How preview.svg is drawn; with `previewFrame` the page finds the plate in it. */
+export function previewSvgOptions({ spec, layout }: BuildContext): SvgOptions {
+  return { caption: `${spec.name} - preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` };
 }
