@@ -1,4 +1,5 @@
-import { layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec } from '@umbrafab/geometry';
+import { faceOrientationOf, layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec } from '@umbrafab/geometry';
+import { buildPlanarFiles, type PlanarBuildResult } from './buildPlanarFiles.ts';
 import { toReportJson } from '@umbrafab/fabricate';
 import { PRODUCERS, START_ORDER } from './outputs/index.ts';
 import { utf8, type BuildContext, type ProducerResult } from './outputs/outputTypes.ts';
@@ -52,6 +53,15 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   const report = { generator: GENERATOR, spec, ...sections, notes: layout.notes, files: names } as Report;
   files.push({ name: 'report.json', bytes: utf8(toReportJson(report)) });
   return { layout, files, report };
+}
+
+/**
+ * `umbrafab build` for any face type: the polar plate through the producers
+ * (`buildFiles`), a horizontal, wall, meridian or equatorial face through
+ * `buildPlanarFiles` (spec `face.type`).
+ */
+export async function buildAnyFiles(spec: DialSpec): Promise<BuildResult | PlanarBuildResult> {
+  return faceOrientationOf(spec) ? buildPlanarFiles(spec, GENERATOR) : buildFiles(spec);
 }
 
 /** The geometry every producer reads, computed once per spec (the local page draws its views from it before the full build). */
