@@ -61,7 +61,14 @@ export function sunForPicture(layout: DialLayout, date: string, time: string): P
   if (!(Math.abs(lineH) < 90)) {
     throw new SpecError('pictures.time', time, 'allowed: a reading within 6 hours of noon (hour angle under 90°)', `the line for ${time} would have hour angle ${lineH.toFixed(1)}°, where the sun is behind a polar face`);
   }
-  const reading = clockAtHourAngle({ date, hourAngleRad: lineH * DEG, longitudeDeg: site.longitude, timezone: site.timezone });
+  let reading: ReturnType<typeof clockAtHourAngle>;
+  try {
+    reading = clockAtHourAngle({ date, hourAngleRad: lineH * DEG, longitudeDeg: site.longitude, timezone: site.timezone });
+  } catch (e) {
+    // Name the spec's fields, not the solver's argument.
+    if (!(e instanceof SpecError) || e.field !== 'hourAngleRad') throw e;
+    throw new SpecError('pictures.time', time, `allowed: a reading the sun shows on ${date} by ${site.timezone} clocks (or another pictures.date; check that site.timezone is the site's zone)`, `the sun reaches the ${time} line outside ${date} by ${site.timezone} clocks`);
+  }
   const eq = sunEquatorOfDate(reading.utc);
   const gastDeg = SiderealTime(MakeTime(reading.utc)) * 15;
   const H = wrapDeg(gastDeg + site.longitude - eq.rightAscensionRad / DEG) * DEG;

@@ -285,11 +285,12 @@ function plateTooNarrow(spec: DialSpec, times: readonly MarkTime[], widthMm: num
 function checkKerfAgainstMarks(spec: DialSpec): void {
   const { method, kerf } = spec.process;
   if (method !== 'laser' && method !== 'waterjet') return;
-  for (const kind of ['hour', 'half', 'quarter'] as const) {
-    const w = spec.marks[kind].width;
-    if (kerf > w) {
-      throw new SpecError('process.kerf', kerf, `allowed: at most the narrowest mark width (marks.${kind}.width = ${w} mm) for ${method}; widen the marks or use another process`, `a ${kerf} mm ${method} kerf is wider than the ${w} mm ${kind} marks`);
-    }
+  // Only the kinds the step draws; the message names the narrowest of them.
+  const kinds = spec.hours.step === 60 ? (['hour'] as const) : spec.hours.step === 30 ? (['hour', 'half'] as const) : (['hour', 'half', 'quarter'] as const);
+  const kind = kinds.reduce((a, b) => (spec.marks[b].width < spec.marks[a].width ? b : a));
+  const w = spec.marks[kind].width;
+  if (kerf > w) {
+    throw new SpecError('process.kerf', kerf, `allowed: at most the narrowest mark width (marks.${kind}.width = ${w} mm) for ${method}; widen the marks or use another process`, `a ${kerf} mm ${method} kerf is wider than the ${w} mm ${kind} marks`);
   }
 }
 

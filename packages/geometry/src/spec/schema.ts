@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { boundedNumber } from './boundedNumber.ts';
+import { clockField } from './textFields.ts';
 import { checkSection } from './sections/checkSection.ts';
 import { engraveSection } from './sections/engraveSection.ts';
 import { installSection } from './sections/installSection.ts';
@@ -25,10 +26,7 @@ function oneOf<const T extends readonly [string, ...string[]]>(values: T) {
   return z.enum(values, { error: `allowed: ${values.map((v) => JSON.stringify(v)).join(', ')}` });
 }
 
-const HHMM = /^([01]\d|2[0-3]):([0-5]\d)$/;
-const clock = z.string({ error: 'allowed: a time "HH:MM" in quotes, e.g. "07:00"' }).regex(HHMM, {
-  error: 'allowed: a time "HH:MM" with hours 00-23 and minutes 00-59, e.g. "07:00"',
-});
+const clock = clockField('07:00');
 
 /** A length or the word auto (sized from the layout). */
 const autoLength = z.union([z.literal('auto'), num({ min: 20, max: 3000, unit: 'mm' })], {
@@ -48,7 +46,7 @@ export const DATE_LINE_SETS = ['solstices', 'equinox', 'zodiac'] as const;
 /** A custom date line: "MM-DD" in calendar.year and a short engraved label. */
 const calendarDate = z.strictObject({
   date: z.string({ error: 'allowed: a date "MM-DD" in quotes, e.g. "06-14"' }).regex(/^(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/, { error: 'allowed: a date "MM-DD" with month 01-12 and day 01-31, e.g. "06-14"' }).describe('month and day "MM-DD" in calendar.year'),
-  label: z.string({ error: 'allowed: a text in quotes' }).min(1).max(24, { error: 'allowed: 1 to 24 characters' }).describe('engraved beside the line'),
+  label: z.string({ error: 'allowed: a text in quotes' }).min(1, { error: 'allowed: 1 to 24 characters' }).max(24, { error: 'allowed: 1 to 24 characters' }).describe('engraved beside the line'),
 });
 
 const markSchema = (length: number, width: number) =>
@@ -60,12 +58,12 @@ const markSchema = (length: number, width: number) =>
     .prefault({});
 
 export const specSchema = z.strictObject({
-  name: z.string({ error: 'allowed: a text in quotes' }).min(1).max(60, { error: 'allowed: 1 to 60 characters' }).default('Polar dial').describe('dial name, engraved in the title block'),
+  name: z.string({ error: 'allowed: a text in quotes' }).min(1, { error: 'allowed: 1 to 60 characters' }).max(60, { error: 'allowed: 1 to 60 characters' }).default('Polar dial').describe('dial name, engraved in the title block'),
   site: z.strictObject({
     latitude: num({ min: -90, max: 90, unit: '°' }).describe('site latitude, degrees, north positive'),
     longitude: num({ min: -180, max: 180, unit: '°' }).describe('site longitude, degrees, east positive'),
     timezone: z.string({ error: 'allowed: an IANA time zone name in quotes, e.g. "Europe/Lisbon"' }).describe('IANA time zone name, e.g. "Europe/Lisbon"'),
-    place: z.string({ error: 'allowed: a text in quotes' }).max(60).optional().describe('place name for the title block (optional)'),
+    place: z.string({ error: 'allowed: a text in quotes' }).max(60, { error: 'allowed: at most 60 characters' }).optional().describe('place name for the title block (optional)'),
   }),
   dial: z
     .strictObject({
@@ -90,8 +88,8 @@ export const specSchema = z.strictObject({
     .prefault({}),
   hours: z
     .strictObject({
-      from: clock.default('07:00').describe('first mark, "HH:MM"'),
-      to: clock.default('17:00').describe('last mark, "HH:MM"'),
+      from: clock.default('07:00').describe('first mark, "HH:MM" (or "H:MM")'),
+      to: clock.default('17:00').describe('last mark, "HH:MM" (or "H:MM")'),
       step: z.union([z.literal(60), z.literal(30), z.literal(15)], { error: 'allowed: 60, 30 or 15 (minutes)' }).default(15).describe('finest mark spacing in minutes: 60, 30 or 15'),
       maxHourAngle: num({ min: 30, max: 85, unit: '°' }).default(75).describe('widest hour angle a mark may have, degrees (75° puts 07:00 at 3.73 gnomon heights)'),
     })
