@@ -64,7 +64,8 @@ describe.each(cases.map((c, i) => ({ ...c, i })))('plate.dxf read back by ezdxf:
     }
     // Lines under the gnomon's footprint are the only ones not drawn.
     const drawn = built.layout.marks.filter((m) => !m.underGnomon);
-    expect(polys.length).toBe(etch ? drawn.length : drawn.length);
+    // One entity per engraved mark: a centre-line vector, or one closed outline (waterjet).
+    expect(polys.length).toBe(drawn.length);
     for (const m of built.layout.marks.filter((k) => k.underGnomon)) expect(Math.abs(m.xMm) - m.widthMm / 2).toBeLessThan(spec.gnomon.thickness / 2);
     console.log(`worst mark position error vs report.json (${spec.process.method}): ${worst.toExponential(2)} mm over ${built.layout.marks.length} marks`);
     expect(worst).toBeLessThanOrEqual(0.001);

@@ -1,3 +1,4 @@
+import { Body, HourAngle, Observer } from 'astronomy-engine';
 import { describe, expect, it } from 'vitest';
 import { layoutDial, parseSpec, timeFaceExtras } from '../packages/geometry/src/index.ts';
 import { buildFiles } from '../packages/cli/src/buildFiles.ts';
@@ -33,11 +34,20 @@ describe('face options for clock time', () => {
     const built = await buildFiles(spec);
     const curves = built.report.meanTimeCurves as { clockTime: string; polylines: [number, number][][] }[];
     expect(curves.map((c) => c.clockTime)).toEqual(['08:00', '09:00', '10:00', '11:00', '12:00', '13:00', '14:00', '15:00', '16:00']);
-    // 13:00: H = 15° − 3.41° + E/4 (docs/design.md §3); E max 16.44 min on Nov 3 (sun module, see timeNoonAndEot test).
+    // 13:00: H = 15° − 3.41° + E/4 (docs/design.md §3), with E at its 2027
+    // maximum taken from astronomy-engine (an outside ephemeris): at 12:00 UT
+    // the Sun's hour angle at Greenwich is apparent − mean time = E.
+    const greenwich = new Observer(0, 0, 0);
+    let eMaxMin = -Infinity;
+    for (let day = 0; day < 365; day++) {
+      const ha = HourAngle(Body.Sun, new Date(Date.UTC(2027, 0, 1 + day, 12)), greenwich);
+      eMaxMin = Math.max(eMaxMin, (ha > 12 ? ha - 24 : ha) * 60);
+    }
     const xs = curves.find((c) => c.clockTime === '13:00')!.polylines.flat().map((p) => p[0]);
     const h = 50;
     const t = 3;
-    const xMax = t / 2 + h * Math.tan(((15 - 3.41 + 16.443 / 4) * Math.PI) / 180);
+    const xMax = t / 2 + h * Math.tan(((15 - 3.41 + eMaxMin / 4) * Math.PI) / 180);
+    console.log(`E max 2027 (astronomy-engine HourAngle at 12:00 UT): ${eMaxMin.toFixed(3)} min; curve reaches ${Math.max(...xs).toFixed(3)} mm vs ${xMax.toFixed(3)} mm`);
     expect(Math.abs(Math.max(...xs) - xMax)).toBeLessThan(0.05); // sampled every 2 days
     const extras = timeFaceExtras(built.layout);
     expect(extras.lines.filter((l) => l.label.startsWith('mean time')).length).toBeGreaterThanOrEqual(9);

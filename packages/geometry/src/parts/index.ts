@@ -24,3 +24,15 @@ export { bodySolid, type BodyPart } from './bodySolid.ts';
 export { manifoldEngine } from './manifoldEngine.ts';
 export { meshFromManifold, manifoldFromMesh } from './manifoldMesh.ts';
 export { widenPolyline, circlePolygon, ROUND_SEGMENTS } from './widenPolyline.ts';
+export {
+  MATERIAL_DENSITIES,
+  DENSITY_MATERIALS,
+  FILAMENTS,
+  materialDensity,
+  isFilament,
+  type MaterialDensity,
+  type DensityMaterial,
+  type Filament,
+} from './materials.ts';
+export { partMass, totalMass, type PartMass } from './partMass.ts';
+export { filamentUse, FILAMENT_DIAMETER_MM, type FilamentUse } from './filamentUse.ts';

@@ -1,5 +1,4 @@
 export * from './dialFrame.ts';
-export * from './sunTrack.ts';
 export * from './gnomonForLayout.ts';
 export * from './styleEdges.ts';
 export * from './castShadow.ts';
