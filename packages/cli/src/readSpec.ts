@@ -3,19 +3,33 @@ import { parse as parseYaml, YAMLParseError } from 'yaml';
 import { SpecError, parseSpec, type DialSpec } from '@umbrafab/geometry';
 
 /**
- * Read a spec file (YAML, or JSON, which YAML 1.2 reads too) and validate it.
- * Every failure is a SpecError naming the file or the field.
+ * Read a spec file (YAML, or JSON, which YAML 1.2 reads too) and normalise it
+ * with `parseSpec`, the one normaliser. Every failure is a SpecError naming
+ * the file or the field.
  */
 export function readSpecFile(path: string): DialSpec {
+  return parseSpec(readRawSpec(path));
+}
+
+/**
+ * A spec file's contents as written (before validation), for commands that
+ * change a field and normalise again (batch, check --year). File problems
+ * name the path; an empty file (or one of comments only) says so.
+ */
+export function readRawSpec(path: string): unknown {
   let text: string;
   try {
     text = readFileSync(path, 'utf8');
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'this is a folder, not a file' : code === 'EACCES' ? 'permission denied' : String((e as Error).message);
+    const why = code === 'ENOENT' ? `no such file: ${path}` : code === 'EISDIR' ? `${path} is a folder, not a file` : code === 'EACCES' ? `permission denied: ${path}` : `cannot read ${path}: ${String((e as Error).message)}`;
     throw new SpecError('spec file', path, 'allowed: the path of a readable .yaml or .json dial spec (umbrafab init writes one)', why);
   }
-  return parseSpec(parseSpecText(text, path));
+  const raw = parseSpecText(text, path);
+  if (raw === null || raw === undefined) {
+    throw new SpecError('spec file', path, 'allowed: a dial spec with at least a site: section (umbrafab init writes a starter)', text.trim() === '' ? `${path} is empty` : `${path} holds only comments, no fields`);
+  }
+  return raw;
 }
 
 /** Parse YAML/JSON text to a plain value; syntax errors name the file, line and column. */

@@ -2,7 +2,7 @@ import { join } from 'node:path';
 import { checkDial, layoutDial, marksFromPlate, parseSpec, type CheckResult } from '@umbrafab/geometry';
 import { checkTableText, toCheckJson, toCheckSvg } from '@umbrafab/fabricate';
 import { readPlateDxf } from '../readPlateDxf.ts';
-import { readSpecFile } from '../readSpec.ts';
+import { readRawSpec } from '../readSpec.ts';
 import { writeFilesAtomic } from '../writeFilesAtomic.ts';
 import { utf8 } from '../outputs/outputTypes.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
@@ -18,12 +18,15 @@ export const checkCommand: CommandModule = {
       .option('out', { type: 'string', alias: 'o', describe: 'also write check.json and check.svg to this folder' })
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
   run: (args, io) => {
-    let spec = readSpecFile(args.spec);
+    // The spec as written, normalised once (with --year in place of calendar.year): the same path as build.
+    const raw = readRawSpec(args.spec) as Record<string, unknown>;
+    let spec;
     if (args.year !== undefined) {
       const year = Number(args.year);
       if (!Number.isInteger(year) || year < 1900 || year > 2200) throw new UsageError(`--year: got ${args.year}; allowed: a whole year from 1900 to 2200`);
-      spec = parseSpec({ ...spec, calendar: { ...spec.calendar, year } });
-    }
+      const calendar = raw.calendar !== null && typeof raw.calendar === 'object' ? raw.calendar : {};
+      spec = parseSpec({ ...raw, calendar: { ...calendar, year } });
+    } else spec = parseSpec(raw);
     const layout = layoutDial(spec);
     let result: CheckResult;
     if (args.plate !== undefined) {

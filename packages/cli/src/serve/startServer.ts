@@ -54,7 +54,8 @@ export async function startServer(options: ServeOptions = {}): Promise<RunningSe
   const specPath = options.specPath ? resolve(options.specPath) : null;
   let initialSpec: unknown;
   let initialError: string | null = null;
-  const starter = () => parseSpecText(starterSpecYaml(Number(specFields().find((f) => f.key === 'calendar.year')?.default ?? 2027)));
+  const starterYear = Number(specFields().find((f) => f.key === 'calendar.year')?.default ?? 2027);
+  const starter = () => parseSpecText(starterSpecYaml(starterYear));
   if (specPath && existsSync(specPath)) {
     try {
       initialSpec = parseSpecText(readFileSync(specPath, 'utf8'), options.specPath);
@@ -73,6 +74,7 @@ export async function startServer(options: ServeOptions = {}): Promise<RunningSe
     specLabel: options.specPath ?? null,
     initialSpec,
     initialError,
+    starterYear,
     port: () => (server?.address() as AddressInfo | null)?.port ?? 0,
     allowRemote: options.allowRemote === true,
     maxBodyBytes: options.maxBodyBytes ?? MAX_BODY_BYTES,
