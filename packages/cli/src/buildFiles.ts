@@ -1,4 +1,4 @@
-import { layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec } from '@umbrafab/geometry';
+import { layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec, type LayoutOptions } from '@umbrafab/geometry';
 import { toReportJson } from '@umbrafab/fabricate';
 import { PRODUCERS, START_ORDER } from './outputs/index.ts';
 import { utf8, type BuildContext, type ProducerResult } from './outputs/outputTypes.ts';
@@ -53,8 +53,8 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
 }
 
 /** The geometry every producer reads, computed once per spec (the local page draws its views from it before the full build). */
-export function buildContext(spec: DialSpec): BuildContext {
-  const layout = layoutDial(spec);
+export function buildContext(spec: DialSpec, options: LayoutOptions = {}): BuildContext {
+  const layout = layoutDial(spec, options);
   const extras = timeFaceExtras(layout); // date lines, mean-time curves, engraved equation of time
   const drawing = plateDrawing(layout, extras.lines, extras.text);
   return { spec, layout, drawing };

@@ -1,8 +1,9 @@
-import { join } from 'node:path';
+import { existsSync, statSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
 import { buildFiles } from '../buildFiles.ts';
 import { readSpecFile } from '../readSpec.ts';
 import { writeFilesAtomic } from '../writeFilesAtomic.ts';
-import type { CommandModule } from './commandTypes.ts';
+import { UsageError, type CommandModule } from './commandTypes.ts';
 
 export const buildCommand: CommandModule = {
   command: 'build <spec>',
@@ -13,9 +14,10 @@ export const buildCommand: CommandModule = {
       .option('out', { type: 'string', alias: 'o', describe: 'output folder (default: out/<spec name>)' })
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
+    const outDir: string = args.out ?? join('out', specBaseName(args.spec));
+    assertOutFolder(outDir);
     const spec = readSpecFile(args.spec);
     const result = await buildFiles(spec);
-    const outDir: string = args.out ?? join('out', specBaseName(args.spec));
     writeFilesAtomic(outDir, result.files, args.force);
     const p = result.layout.plate;
     const total = result.files.reduce((s, f) => s + f.bytes.length, 0);
@@ -26,6 +28,26 @@ export const buildCommand: CommandModule = {
     return 0;
   },
 };
+
+/**
+ * Refuse an output folder that names an existing file (or a path through
+ * one) before any work, naming it.
+ * @throws UsageError
+ */
+export function assertOutFolder(dir: string): void {
+  let p = resolve(dir);
+  for (;;) {
+    if (existsSync(p)) {
+      if (!statSync(p).isDirectory()) {
+        throw new UsageError(p === resolve(dir) ? `--out: ${dir} is a file, not a folder; allowed: a folder (new or existing) for the output files` : `--out: ${dir} lies under ${p}, which is a file; allowed: a folder path`);
+      }
+      return;
+    }
+    const up = dirname(p);
+    if (up === p) return;
+    p = up;
+  }
+}
 
 /** "fixtures/demo.yaml" → "demo". */
 export function specBaseName(path: string): string {

@@ -5,6 +5,7 @@ import { readPlateDxf } from '../readPlateDxf.ts';
 import { readRawSpec } from '../readSpec.ts';
 import { writeFilesAtomic } from '../writeFilesAtomic.ts';
 import { utf8 } from '../outputs/outputTypes.ts';
+import { assertOutFolder } from './build.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
 export const checkCommand: CommandModule = {
@@ -18,6 +19,7 @@ export const checkCommand: CommandModule = {
       .option('out', { type: 'string', alias: 'o', describe: 'also write check.json and check.svg to this folder' })
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
   run: (args, io) => {
+    if (args.out !== undefined) assertOutFolder(String(args.out));
     // The spec as written, normalised once (with --year in place of calendar.year): the same path as build.
     const raw = readRawSpec(args.spec) as Record<string, unknown>;
     let spec;
