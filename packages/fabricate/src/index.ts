@@ -9,6 +9,8 @@ export * from './stl/index.ts';
 export * from './dxf/toGnomonDxf.ts';
 export * from './dxf/offsetRingMiter.ts';
 export * from './install/toInstallMd.ts';
+export * from './install/markdownText.ts';
 export * from './template/index.ts';
 export * from './pictures/index.ts';
 export * from './check/index.ts';
+export * from './process/assertToolFits.ts';

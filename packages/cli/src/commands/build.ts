@@ -18,7 +18,8 @@ export const buildCommand: CommandModule = {
     assertOutFolder(outDir);
     const spec = readSpecFile(args.spec);
     const result = await buildFiles(spec);
-    writeFilesAtomic(outDir, result.files, args.force);
+    const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
+    if (recovered) io.out(`note: ${outDir}: ${recovered}`);
     const p = result.layout.plate;
     const total = result.files.reduce((s, f) => s + f.bytes.length, 0);
     io.out(
