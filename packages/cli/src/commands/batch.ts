@@ -46,7 +46,10 @@ export const batchCommand: CommandModule = {
     assertOutFolder(outDir);
     // Each latitude through the one normaliser, as `build` would read a spec file with that latitude.
     const site = raw.site !== null && typeof raw.site === 'object' ? (raw.site as Record<string, unknown>) : {};
-    const specs = latitudes.map((lat) => parseSpec({ ...raw, site: { ...site, latitude: lat } }));
+    // Pictures (preview.png, the assembly view) are left to `build` of one latitude: rendering them for every latitude would
+    // multiply the run time for files a shop does not cut from.
+    const pictures = raw.pictures !== null && typeof raw.pictures === 'object' ? raw.pictures : {};
+    const specs = latitudes.map((lat) => parseSpec({ ...raw, site: { ...site, latitude: lat }, pictures: { ...pictures, write: false } }));
 
     // Latitudes whose faces are the same (hour lines, numerals, plate, gnomon) share one plate, titled with their range.
     const keys = specs.map((spec) => faceKey(buildContext(spec).layout));
@@ -120,6 +123,7 @@ export const batchCommand: CommandModule = {
       specFile: args.spec,
       latitudeRangeDeg: [lo, hi],
       plate: { shared: plates.size === 1, files: [...plates], note: plateNote },
+      pictures: 'not written by batch (pictures.write: false for every latitude); umbrafab build the spec with one latitude for its preview.png and assembly picture',
       latitudes: rows,
       files: [...files.map((f) => f.name), 'report.json'],
     };
