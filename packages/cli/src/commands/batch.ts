@@ -5,6 +5,7 @@ import { WEDGE_MAX_TILT_DEG, parseSpec, type DialLayout } from '@umbrafab/geomet
 import { toReportJson } from '@umbrafab/fabricate';
 import { buildContext, buildFiles, GENERATOR } from '../buildFiles.ts';
 import { utf8 } from '../outputs/outputTypes.ts';
+import type { Report } from '../outputs/report.ts';
 import { readRawSpec } from '../readSpec.ts';
 import { writeFilesAtomic, type OutputFile } from '../writeFilesAtomic.ts';
 import { assertOutFolder, specBaseName } from './build.ts';
@@ -63,7 +64,7 @@ export const batchCommand: CommandModule = {
           )
         : null;
     bar?.start(latitudes.length, 0, { lat: '' });
-    const builds: { lat: number; files: readonly OutputFile[]; report: Record<string, unknown>; plateLengthMm: number }[] = [];
+    const builds: { lat: number; files: readonly OutputFile[]; report: Report; plateLengthMm: number }[] = [];
     try {
       for (const [i, spec] of specs.entries()) {
         const group = groupOf(i);
@@ -100,7 +101,7 @@ export const batchCommand: CommandModule = {
       }
     }
     const rows: BatchRow[] = builds.map((b, i) => {
-      const wedge = b.report.wedge as { angleDeg?: number } | undefined;
+      const wedge = b.report.wedge as { angleDeg?: number } | undefined; // absent when the spec writes no wedge
       const mine = perLat[i];
       return {
         latitudeDeg: b.lat,

@@ -1,6 +1,6 @@
 import { existsSync, statSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
-import { buildFiles } from '../buildFiles.ts';
+import { buildAnyFiles } from '../buildFiles.ts';
 import { readSpecFile } from '../readSpec.ts';
 import { writeFilesAtomic } from '../writeFilesAtomic.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
@@ -17,7 +17,7 @@ export const buildCommand: CommandModule = {
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
     assertOutFolder(outDir);
     const spec = readSpecFile(args.spec);
-    const result = await buildFiles(spec);
+    const result = await buildAnyFiles(spec);
     const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
     if (recovered) io.out(`note: ${outDir}: ${recovered}`);
     const p = result.layout.plate;
