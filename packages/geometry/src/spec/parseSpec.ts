@@ -64,7 +64,10 @@ export function parseSpec(raw: unknown): DialSpec {
   }
   problems.push(...crossFieldProblems(raw as Record<string, unknown>, result.success ? result.data : undefined, skip));
   if (problems.length) throw combineSpecErrors(problems);
-  const s = result.data!;
+  // A polar face is the default: `face: {type: polar}` written out is the same dial as no face section.
+  const data = result.data!;
+  const { face: _polar, ...withoutFace } = data;
+  const s = data.face?.type === 'polar' ? withoutFace : data;
   const fallback = METHOD_DEFAULTS[s.process.method];
   return {
     ...s,
