@@ -1,18 +1,14 @@
 import { readFileSync } from 'node:fs';
-import cliProgress from 'cli-progress';
 import { join } from 'node:path';
-import { WEDGE_MAX_TILT_DEG, parseSpec, type DialLayout } from '@umbrafab/geometry';
-import { toReportJson } from '@umbrafab/fabricate';
-import { buildContext, buildFiles, GENERATOR } from '../buildFiles.ts';
+import type { DialLayout } from '@umbrafab/geometry';
 import { utf8 } from '../outputs/outputTypes.ts';
 import type { Report } from '../outputs/report.ts';
-import { readRawSpec } from '../readSpec.ts';
-import { writeFilesAtomic, type OutputFile } from '../writeFilesAtomic.ts';
+import type { OutputFile } from '../writeFilesAtomic.ts';
 import { assertOutFolder, specBaseName } from './build.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
-/** The steepest wedge that can be printed. */
-const MAX_LATITUDE_DEG = WEDGE_MAX_TILT_DEG;
+/** The plate's cut drawing, true size or pre-compensated for the kerf. */
+const PLATE_DXF = /^plate(-offset-[0-9.]+mm)?\.dxf$/;
 /** Show a progress bar from this many latitudes on ("long runs"). */
 const PROGRESS_FROM = 4;
 
@@ -41,7 +37,9 @@ export const batchCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' })
       .option('progress', { type: 'boolean', default: true, describe: `show a progress bar on stderr (from ${PROGRESS_FROM} latitudes on)` }),
   run: async (args, io) => {
-    const latitudes = batchLatitudes(args.latitudes, args['latitudes-file']);
+    // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
+    const { WEDGE_MAX_TILT_DEG, buildContext, buildFiles, cliProgress, GENERATOR, parseSpec, readRawSpec, toReportJson, writeFilesAtomic } = await import('./batchDeps.ts');
+    const latitudes = batchLatitudes(args.latitudes, args['latitudes-file'], WEDGE_MAX_TILT_DEG);
     const raw = readRawSpec(args.spec) as Record<string, unknown>;
     const outDir: string = args.out ?? `out/${specBaseName(args.spec)}-batch`;
     assertOutFolder(outDir);
@@ -107,7 +105,7 @@ export const batchCommand: CommandModule = {
         latitudeDeg: b.lat,
         wedgeAngleDeg: round(wedge?.angleDeg ?? Math.abs(b.lat), 3),
         wedgeFile: mine.get('wedge.stl') ?? [...mine.values()].find((n) => /^stand/.test(n)) ?? null,
-        plateFile: mine.get('plate.dxf') ?? '',
+        plateFile: [...mine.entries()].find(([name]) => PLATE_DXF.test(name))?.[1] ?? '',
         files: [...mine.values()],
         riseMm: round(b.plateLengthMm * Math.sin((Math.abs(b.lat) * Math.PI) / 180), 1),
       };
@@ -163,9 +161,11 @@ function latLabel(lat: number): string {
 
 /**
  * The latitudes of a batch from --latitudes and/or --latitudes-file: numbers
- * from −89° to 89° (a printable wedge), no repeats, at least one.
+ * from −maxDeg to maxDeg (the steepest printable wedge, WEDGE_MAX_TILT_DEG
+ * = 89°), no repeats, at least one.
  */
-export function batchLatitudes(list: unknown, file: unknown): number[] {
+export function batchLatitudes(list: unknown, file: unknown, maxDeg: number): number[] {
+  const MAX_LATITUDE_DEG = maxDeg;
   const items: { text: string; where: string }[] = [];
   if (list === undefined && file === undefined) throw new UsageError('--latitudes: missing; allowed: --latitudes 30,35,40 or --latitudes-file <file>');
   if (list !== undefined) {
