@@ -46,13 +46,13 @@ describe('umbrafab batch', () => {
     expect(r.code).toBe(0);
     const names = readdirSync(out).sort();
     expect(names.filter((n) => n.endsWith('.dxf') && n.startsWith('plate'))).toEqual(['plate.dxf']);
-    expect(names.filter((n) => n.startsWith('wedge-'))).toEqual(lats.map((l) => `wedge-N${l}.stl`));
+    expect(names.filter((n) => n.startsWith('stand-') && n.endsWith('.stl'))).toEqual(lats.map((l) => `stand-N${l}.stl`));
     const summary = JSON.parse(readFileSync(join(out, 'report.json'), 'utf8'));
     expect(summary.plate.shared).toBe(true);
     expect(summary.latitudeRangeDeg).toEqual([30, 50]);
     // Per latitude: its wedge, install sheet and report; the plate, its preview and the template once; pictures are left to build.
     expect(names.filter((n) => n.endsWith('.png'))).toEqual([]);
-    for (const lat of lats) for (const f of [`wedge-N${lat}.stl`, `install-N${lat}.md`, `report-N${lat}.json`]) expect(names, f).toContain(f);
+    for (const lat of lats) for (const f of [`stand-N${lat}.stl`, `stand-N${lat}.dxf`, `install-N${lat}.md`, `report-N${lat}.json`]) expect(names, f).toContain(f);
     for (const f of ['plate.dxf', 'preview.svg', 'gnomon.dxf', 'template.pdf']) expect(names, f).toContain(f);
     expect(readFileSync(join(out, 'install-N45.md'), 'utf8')).toMatch(/45/);
     // The shared plate states the range it serves, not one latitude: it is build's plate for that range title.
@@ -64,12 +64,12 @@ describe('umbrafab batch', () => {
     expect(Buffer.from(plate.bytes).equals(readFileSync(join(out, 'plate.dxf')))).toBe(true);
     for (const lat of lats) {
       // The tilt equals |latitude| (docs/design.md §4), read back from the STL's seat facets.
-      expectClose(seatTiltDeg(readFileSync(join(out, `wedge-N${lat}.stl`))), lat, 0.01, `wedge-N${lat}.stl seat tilt`, '°');
+      expectClose(seatTiltDeg(readFileSync(join(out, `stand-N${lat}.stl`))), lat, 0.01, `stand-N${lat}.stl seat tilt`, '°');
       expect(summary.latitudes.find((x: { latitudeDeg: number }) => x.latitudeDeg === lat).wedgeAngleDeg).toBe(lat);
     }
     // Summary table: a header and one row per latitude.
     expect(r.out).toMatch(/latitude\s+wedge angle/);
-    for (const lat of lats) expect(r.out).toMatch(new RegExp(`^${lat}°\\s+${lat}\\.00°.*wedge-N${lat}\\.stl\\s+install-N${lat}\\.md\\s+plate\\.dxf$`, 'm'));
+    for (const lat of lats) expect(r.out).toMatch(new RegExp(`^${lat}°\\s+${lat}\\.00°.*stand-N${lat}\\.stl\\s+install-N${lat}\\.md\\s+plate\\.dxf$`, 'm'));
     expect(r.out).toMatch(/one plate serves every latitude from 30°N to 50°N/);
   });
 
@@ -78,7 +78,7 @@ describe('umbrafab batch', () => {
     const r = await runCli(['batch', DEMO, '--latitudes', '35,-35', '--out', out, '--no-progress']);
     expect(r.code).toBe(0);
     expect(readdirSync(out).filter((n) => n.endsWith('.dxf') && n.startsWith('plate')).sort()).toEqual(['plate-N35.dxf', 'plate-S35.dxf']);
-    expectClose(seatTiltDeg(readFileSync(join(out, 'wedge-S35.stl'))), 35, 0.01, 'southern wedge tilt', '°');
+    expectClose(seatTiltDeg(readFileSync(join(out, 'stand-S35.stl'))), 35, 0.01, 'southern wedge tilt', '°');
   });
 
   it.each([{ args: ['--latitudes', '-35,-40'] }, { args: ['--latitudes=-35,-40'] }, { args: ['--latitudes', '-35', '--latitudes', '-40'] }])('takes negative latitudes in every form: $args', async ({ args }) => {
@@ -87,8 +87,8 @@ describe('umbrafab batch', () => {
     expect(r.err).toBe('');
     expect(r.code).toBe(0);
     const names = readdirSync(out);
-    for (const f of ['wedge-S35.stl', 'wedge-S40.stl', 'install-S35.md', 'install-S40.md', 'plate.dxf']) expect(names, f).toContain(f);
-    expectClose(seatTiltDeg(readFileSync(join(out, 'wedge-S40.stl'))), 40, 0.01, 'wedge-S40.stl seat tilt', '°');
+    for (const f of ['stand-S35.stl', 'stand-S40.stl', 'install-S35.md', 'install-S40.md', 'plate.dxf']) expect(names, f).toContain(f);
+    expectClose(seatTiltDeg(readFileSync(join(out, 'stand-S40.stl'))), 40, 0.01, 'stand-S40.stl seat tilt', '°');
     expect(r.out).toMatch(/from 40°S to 35°S/);
   });
 
@@ -107,7 +107,7 @@ describe('umbrafab batch', () => {
     writeFileSync(list, '# shop list\n30, 32.5\n34 # south coast\n');
     const r = await runCli(['batch', DEMO, '--latitudes-file', list, '--out', join(dir, 'out'), '--no-progress']);
     expect(r.code).toBe(0);
-    expect(readdirSync(join(dir, 'out')).filter((n) => n.startsWith('wedge-'))).toEqual(['wedge-N30.stl', 'wedge-N32.5.stl', 'wedge-N34.stl']);
+    expect(readdirSync(join(dir, 'out')).filter((n) => n.startsWith('stand-') && n.endsWith('.stl'))).toEqual(['stand-N30.stl', 'stand-N32.5.stl', 'stand-N34.stl']);
   });
 
   for (const [bad, why] of [
