@@ -10,7 +10,7 @@ import {
   type PlanarLayout,
   type PlateDrawing,
 } from '@umbrafab/geometry';
-import { engraveFromSpec, stlHeader, toDxf, toGnomonDxf, toPlanarInstallMd, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
+import { engraveFromSpec, stlHeader, toDxf, toGnomonDxf, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
 import { utf8 } from './outputs/outputTypes.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
@@ -35,7 +35,9 @@ export function buildPlanarFiles(spec: DialSpec, generator: string): PlanarBuild
   const drawing = planarPlateDrawing(layout);
   const files: OutputFile[] = [];
   files.push({ name: 'plate.dxf', bytes: utf8(toDxf(drawing, { method: spec.process.method, kerfMm: spec.process.kerf })) });
-  files.push({ name: 'preview.svg', bytes: utf8(toSvg(drawing, { caption: `${spec.name} - ${layout.faceType} face, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` })) });
+  const preview = toSvg(drawing, { caption: `${spec.name} - ${layout.faceType} face, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+  files.push({ name: 'preview.svg', bytes: utf8(preview) });
+  if (spec.pictures.write) files.push({ name: 'preview.png', bytes: toPng(preview, { pxPerMm: spec.pictures.pxPerMm }) });
   const engraving = engraveFromSpec(spec, drawing);
   files.push(...engraving.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })));
 
