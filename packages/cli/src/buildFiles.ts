@@ -9,6 +9,8 @@ export interface BuildResult {
   readonly layout: DialLayout;
   readonly files: readonly OutputFile[];
   readonly report: Record<string, unknown>;
+  /** the layout's notes and the producers', in producer order: the console lines of a build */
+  readonly notes: readonly string[];
 }
 
 export const GENERATOR = 'umbrafab 0.1.0';
@@ -22,6 +24,7 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   const { layout } = ctx;
   const files: OutputFile[] = [];
   const sections: Record<string, unknown> = {};
+  const notes: string[] = [...layout.notes];
   // Producers whose work runs mostly on worker threads (PNG rendering) start
   // first, so that their threads overlap the others' work on this one; the
   // results are still taken in PRODUCERS order, and the first failure in that
@@ -39,6 +42,7 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   for (const s of settled) {
     const r = (s as PromiseFulfilledResult<ProducerResult>).value;
     files.push(...r.files);
+    notes.push(...(r.notes ?? []));
     for (const [key, value] of Object.entries(r.report)) {
       const prev = sections[key];
       sections[key] = isPlainObject(prev) && isPlainObject(value) ? { ...prev, ...value } : value;
@@ -47,9 +51,9 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   const names = [...files.map((f) => f.name), 'report.json'];
   const dup = names.find((n, i) => names.indexOf(n) !== i);
   if (dup) throw new Error(`two producers both write ${dup}`);
-  const report = { generator: GENERATOR, spec, ...sections, notes: layout.notes, files: names };
+  const report = { generator: GENERATOR, spec, ...sections, notes, files: names };
   files.push({ name: 'report.json', bytes: utf8(toReportJson(report)) });
-  return { layout, files, report };
+  return { layout, files, report, notes };
 }
 
 /** The geometry every producer reads, computed once per spec (the local page draws its views from it before the full build). */

@@ -12,6 +12,8 @@ export interface BuildContext {
 export interface ProducerResult {
   readonly files: readonly OutputFile[];
   readonly report: Readonly<Record<string, unknown>>;
+  /** console lines for the user (a part split to fit the bed, …), also listed in report.json's notes */
+  readonly notes?: readonly string[];
 }
 
 /**
