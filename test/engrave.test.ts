@@ -4,7 +4,8 @@ import { layoutDial, plateDrawing, timeFaceExtras, type PlateDrawing, type Vec2 
 import { buildFiles } from '../packages/cli/src/buildFiles.ts';
 import { readSpecFile } from '../packages/cli/src/readSpec.ts';
 import { expectClose } from './helpers/closeTo.ts';
-import { feedRuns, motions, runRs274, xyLength, type CanonMotion } from './helpers/rs274.ts';
+import { canonTimes, checkMillStartEnd, feedRuns, motions, runRs274, uncutAtFinalDepthMm, xyLength, type CanonMotion } from './helpers/rs274.ts';
+import { clipToPlate } from '../packages/fabricate/src/index.ts';
 
 // Outside validator: Debian's linuxcnc-uspace `rs274 -g`, the standalone
 // RS274NGC interpreter (docs/design.md §7). Every program `umbrafab build` writes
@@ -140,23 +141,9 @@ describe.each(CASES)('umbrafab build engraving: $name', ({ file, programs }) => 
     const { commands } = runRs274(ngc, 'engrave.ngc');
     const ms = motions(commands);
 
-    // First motion: straight up to the safe height, before any XY motion.
-    expect(ms[0].kind).toBe('STRAIGHT_TRAVERSE');
-    expectClose(ms[0].to.z, e.safeZMm, EPS_MM, 'first move Z', ' mm');
-    expect([ms[0].to.x, ms[0].to.y]).toEqual([ms[0].from.x, ms[0].from.y]);
-
-    // Spindle on (M3) before the first cut, running during every cut; off at the end.
-    const firstFeed = ms.findIndex((m) => m.kind === 'STRAIGHT_FEED');
-    const spindleOn = commands.findIndex((c) => c.kind === 'START_SPINDLE_CLOCKWISE');
-    expect(spindleOn).toBeGreaterThanOrEqual(0);
-    expect(spindleOn).toBeLessThan(ms[firstFeed].at);
-    for (const m of ms.filter((k) => k.kind === 'STRAIGHT_FEED')) expect(m.spindle).toBe('cw');
-    const last = ms[ms.length - 1];
-    expect(last.kind).toBe('STRAIGHT_TRAVERSE');
-    expectClose(last.to.z, e.safeZMm, EPS_MM, 'last move Z', ' mm');
-    const after = commands.slice(last.at + 1).map((c) => c.kind);
-    expect(after[0]).toBe('STOP_SPINDLE_TURNING');
-    expect(after).toContain('PROGRAM_END');
+    // '%' delimiters, up to safe Z first, M3 then a G4 dwell, park at safe Z last, M5, M2.
+    checkMillStartEnd(ngc, commands, { safeZMm: e.safeZMm, spindleRpm: report.spindleRpm, spindleDwellS: e.spindleDwellS, park: report.parkMm, coolant: e.coolant }, (c, what) => expect(c, what).toBe(true));
+    expect(e.safeZMm).toBeGreaterThanOrEqual(10);
 
     // No feed move leaves the plate (rounded outline, holes and gnomon slots), sampled along each move.
     let offPlate = 0;
@@ -181,15 +168,32 @@ describe.each(CASES)('umbrafab build engraving: $name', ({ file, programs }) => 
     // Nothing deeper than the sheet allows: thickness - max(0.5, thickness / 2) (project rule).
     expect(deepest).toBeLessThanOrEqual(spec.plate.thickness - Math.max(0.5, spec.plate.thickness / 2) + EPS_MM);
 
-    // Cutting length at each cut's final depth = the engraved geometry's length.
+    // Every engraved line cut at its final depth along its whole length (sampled
+    // every 0.05 mm; the engraving job's paths are the drawing less its parts
+    // over holes and slots); the final-depth length exceeds the drawing's only
+    // by the runs back over the ramps.
+    const job = (await built).report.engraving as Record<string, any>;
     let finalDepthMm = 0;
     for (const run of feedRuns(ms)) {
       const bottom = Math.min(...run.map((m) => m.to.z));
       for (const m of run) if (Math.abs(m.from.z - bottom) < EPS_MM && Math.abs(m.to.z - bottom) < EPS_MM) finalDepthMm += xyLength(m);
     }
-    const relErr = Math.abs(finalDepthMm - geometryMm) / geometryMm;
-    console.log(`${file} engrave.ngc: final-depth length ${finalDepthMm.toFixed(3)} mm vs drawing ${geometryMm.toFixed(3)} mm (rel. err ${relErr.toExponential(2)}), deepest ${deepest.toFixed(4)} mm vs ${expectedDepth.toFixed(4)} mm`);
-    expect(relErr).toBeLessThanOrEqual(0.001);
+    const onPlatePaths = engravedPaths(drawing).flatMap((p) => clipToPlate(p.points, p.closed, drawing.holes, drawing.slots).pieces.map((points) => ({ points, closed: p.closed && points === p.points })));
+    const uncut = uncutAtFinalDepthMm(ms, onPlatePaths);
+    const extra = (finalDepthMm - geometryMm) / geometryMm;
+    console.log(`${file} engrave.ngc: final-depth length ${finalDepthMm.toFixed(3)} mm vs drawing ${geometryMm.toFixed(3)} mm (extra ${extra.toExponential(2)}), uncut ${uncut.toFixed(4)} mm, deepest ${deepest.toFixed(4)} mm vs ${expectedDepth.toFixed(4)} mm`);
+    expect(uncut).toBe(0);
+    expect(extra).toBeGreaterThanOrEqual(-0.001);
+    expect(extra).toBeLessThanOrEqual(0.1);
+    void job;
+
+    // The job runs in the cut: total time at most 1.05 x the cutting time (feeds
+    // with XY motion), both from rs274's canonical moves at the program's feeds
+    // and the spec's rapid rate; and the program's own estimate agrees.
+    const times = canonTimes(commands, e.rapidMmPerMin);
+    console.log(`${file} engrave.ngc: ${times.totalS.toFixed(1)} s for ${times.cuttingS.toFixed(1)} s of cutting (x${(times.totalS / times.cuttingS).toFixed(4)}); plunges ${times.plungeS.toFixed(1)} s, rapids ${times.rapidS.toFixed(1)} s, dwell ${times.dwellS.toFixed(1)} s; estimate ${report.timeEstimateS.toFixed(1)} s`);
+    if (file.endsWith('engrave-demo-both.yaml')) expect(times.totalS).toBeLessThanOrEqual(1.05 * times.cuttingS);
+    expectClose(times.totalS, report.timeEstimateS, 0.005 * times.totalS, 'estimate vs rs274 time', ' s');
     expect(Math.abs(report.cuttingLengthMm - geometryMm) / geometryMm).toBeLessThanOrEqual(0.001);
     expect(Math.abs((await engraving()).geometryLengthMm - geometryMm) / geometryMm).toBeLessThanOrEqual(0.001);
   });
@@ -209,7 +213,7 @@ describe.each(CASES)('umbrafab build engraving: $name', ({ file, programs }) => 
       expect(m.spindleSpeed).toBeCloseTo(report.powerS, 6);
     }
     expect(commands.some((c) => c.kind === 'PROGRAM_END')).toBe(true);
-    expect(gcode.trimEnd().split('\n').slice(-3)).toEqual(['S0', 'M5', 'M2']);
+    expect(gcode.trimEnd().split('\n').slice(-4)).toEqual(['S0', `G0 X0.000 Y${drawing.lengthMm.toFixed(3)}`, 'M5', 'M2']);
 
     // Every engraved path traced exactly once: each burn run after a traverse
     // matches one whole path (either direction) and every path clear of the
@@ -220,6 +224,7 @@ describe.each(CASES)('umbrafab build engraving: $name', ({ file, programs }) => 
       if (m.kind === 'STRAIGHT_TRAVERSE') traces.push([[m.to.x, m.to.y]]);
       else traces[traces.length - 1].push([m.to.x, m.to.y]);
     }
+    traces.pop(); // the park move
     const crossing = paths.map((_, i) => overMm[i] > 0);
     const wanted = paths.map((p) => dedupe(p.closed ? [...p.points, p.points[0]] : p.points));
     const hits = paths.map(() => 0);

@@ -84,7 +84,9 @@ const BAD: { name: string; patch: Record<string, unknown>; message: RegExp }[] =
   },
   { name: 'a feed of zero', patch: { engrave: { feedMmPerMin: 0 } }, message: /engrave\.feedMmPerMin: got 0; allowed: a number greater than 0 mm\/min/ },
   { name: 'a plunge of zero', patch: { engrave: { plungeMmPerMin: 0 } }, message: /engrave\.plungeMmPerMin: got 0; allowed: a number greater than 0/ },
-  { name: 'clearance above the safe height', patch: { engrave: { clearanceZMm: 8 } }, message: /engrave\.clearanceZMm: got 8; allowed: at most engrave\.safeZMm \(5 mm\)/ },
+  { name: 'clearance above the safe height', patch: { engrave: { clearanceZMm: 12 } }, message: /engrave\.clearanceZMm: got 12; allowed: at most engrave\.safeZMm \(10 mm\)/ },
+  { name: 'entry above the clearance height', patch: { engrave: { entryZMm: 3 } }, message: /engrave\.entryZMm: got 3; allowed: at most engrave\.clearanceZMm \(1 mm\)/ },
+  { name: 'an unknown coolant', patch: { engrave: { coolant: 'air' } }, message: /engrave\.coolant: got "air"; allowed: "off", "mist", "flood"/ },
   { name: 'an unknown program choice', patch: { engrave: { programs: 'gcode' } }, message: /engrave\.programs: got "gcode"; allowed: "auto", "ngc", "laser", "both", "none"/ },
   {
     name: 'a material without an engraving preset',

@@ -48,7 +48,7 @@ describe.each(built)('STL files of $name', ({ name, result, expect: names }) => 
     // A part split to fit the print bed reports each piece under its split section.
     const key = file.replace(/(-\d+-of-\d+)?\.stl$/, '') as 'gnomon' | 'plate' | 'wedge' | 'body';
     type Figures = { volumeMm3: number; facets: number };
-    const whole = (result.report.parts as Record<string, Figures & { split?: { pieces: (Figures & { file: string })[] } }>)[key];
+    const whole = (result.report.parts as unknown as Record<string, Figures & { split?: { pieces: (Figures & { file: string })[] } }>)[key];
     const reported = whole.split ? whole.split.pieces.find((p) => p.file === file)! : whole;
     expect(r.facets).toBe(reported.facets);
     // admesh sums float32 corners in float32: agree with the float64 mesh volume to 0.01 %.

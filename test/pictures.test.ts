@@ -96,7 +96,7 @@ describe('pictures: preview.png and assembly.png from the demo build', async () 
   it('writes assembly.svg and assembly.png of the same size in mm', () => {
     const svg = new TextDecoder().decode(file('assembly.svg'));
     const png = decodePng(file('assembly.png'));
-    const a = result.report.pictures as { assembly: { widthMm: number; heightMm: number; widthPx: number; heightPx: number } };
+    const a = result.report.pictures!;
     expect(png.width).toBe(a.assembly.widthMm * spec.pictures.pxPerMm);
     expect(png.height).toBe(a.assembly.heightMm * spec.pictures.pxPerMm);
     expect([png.width, png.height]).toEqual([a.assembly.widthPx, a.assembly.heightPx]);

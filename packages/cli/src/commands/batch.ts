@@ -58,8 +58,7 @@ export const batchCommand: CommandModule = {
         const { layout } = ctx;
         const plate = (await plateOutputs(ctx)).files;
         const parts = await partsOutputs(ctx);
-        const wedge = parts.report.wedge as { angleDeg?: number } | undefined;
-        builds.push({ lat, spec, layout, plate, parts: parts.files, wedgeAngleDeg: wedge?.angleDeg ?? Math.abs(lat) });
+        builds.push({ lat, spec, layout, plate, parts: parts.files, wedgeAngleDeg: parts.report.wedge.angleDeg });
         bar?.increment(1, { lat: latitudeTag(lat) });
       }
     } finally {

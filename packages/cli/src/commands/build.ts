@@ -1,5 +1,5 @@
 import { join } from 'node:path';
-import { buildFiles } from '../buildFiles.ts';
+import { buildAnyFiles } from '../buildFiles.ts';
 import { readSpecFile } from '../readSpec.ts';
 import { writeFilesAtomic } from '../writeFilesAtomic.ts';
 import type { CommandModule } from './commandTypes.ts';
@@ -14,15 +14,17 @@ export const buildCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
     const spec = readSpecFile(args.spec);
-    const result = await buildFiles(spec);
+    const result = await buildAnyFiles(spec);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
-    writeFilesAtomic(outDir, result.files, args.force);
+    const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
+    if (recovered) io.out(`note: ${outDir}: ${recovered}`);
     const p = result.layout.plate;
     const total = result.files.reduce((s, f) => s + f.bytes.length, 0);
     io.out(
       `umbrafab: wrote ${result.files.length} files (${(total / 1024).toFixed(1)} KiB) to ${outDir}: ${result.files.map((f) => f.name).join(', ')} — plate ${p.widthMm} x ${p.lengthMm} mm, ${result.layout.marks.length} marks, ${spec.process.method} kerf ${spec.process.kerf} mm`,
     );
-    for (const note of result.notes) io.out(`note: ${note}`);
+    // The polar build adds its producers' lines (a part split to fit the print bed) to the layout's notes.
+    for (const note of 'notes' in result ? result.notes : result.layout.notes) io.out(`note: ${note}`);
     return 0;
   },
 };

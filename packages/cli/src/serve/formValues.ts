@@ -1,5 +1,6 @@
-import { parse as parseYaml, stringify as stringifyYaml } from 'yaml';
+import { stringify as stringifyYaml } from 'yaml';
 import { SpecError, didYouMean } from '@umbrafab/geometry';
+import { parseSpecText } from '../readSpec.ts';
 import { specFields, type SpecField } from './specFields.ts';
 
 /** What one form input holds: the text of a text box, a number, or a checkbox state. */
@@ -66,11 +67,8 @@ function fromFormValue(f: SpecField, value: unknown): unknown {
     case 'boolean':
       return text === 'true' ? true : text === 'false' ? false : text;
     case 'value':
-      try {
-        return parseYaml(text);
-      } catch {
-        throw new SpecError(f.key, text, 'allowed: one line of YAML, e.g. [a, b] or a single word');
-      }
+      // The same capped, linear reader as a spec file (a form post comes from anyone who can reach the page).
+      return parseSpecText(text, text, f.key);
     case 'text':
       return value;
   }

@@ -1,9 +1,9 @@
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { resolve } from 'node:path';
 import { SpecError } from '@umbrafab/geometry';
-import { parseSpecText } from '../readSpec.ts';
+import { parseSpecText, readSpecText } from '../readSpec.ts';
 import { starterSpecYaml } from '../starterSpec.ts';
 import { bindPolicy } from './bindPolicy.ts';
 import { buildCache } from './buildCache.ts';
@@ -57,7 +57,7 @@ export async function startServer(options: ServeOptions = {}): Promise<RunningSe
   const starter = () => parseSpecText(starterSpecYaml(Number(specFields().find((f) => f.key === 'calendar.year')?.default ?? 2027)));
   if (specPath && existsSync(specPath)) {
     try {
-      initialSpec = parseSpecText(readFileSync(specPath, 'utf8'), options.specPath);
+      initialSpec = parseSpecText(readSpecText(specPath), options.specPath);
     } catch (e) {
       if (!(e instanceof SpecError) && !(e instanceof Error && 'code' in e)) throw e;
       initialError = e.message;

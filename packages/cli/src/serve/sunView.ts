@@ -1,12 +1,11 @@
 import {
+  DEG,
   SpecError,
-  formatClockHms,
-  offsetHoursAt,
   parseClockMinutes,
   parseLocalDate,
+  sunAtClock,
+  sunAtHourAngle,
   sunTrack,
-  sunOnDay,
-  instantAtHourAngle,
   type DialLayout,
   type SunTrack,
   type Vec2,
@@ -49,14 +48,14 @@ export interface SunView {
   readonly shadowFace: readonly (readonly Vec2[])[];
 }
 
-const DEG = Math.PI / 180;
 const tracks = new Map<string, SunTrack>();
 
 /**
  * The sun for the page's time control, through the same code as
- * `umbrafab check`: a year's `sunTrack` for the site (kept per site and
- * year), `instantAtHourAngle` for an apparent time, `sunOnDay` for the
- * direction, and the shadow of the layout's gnomon on the face.
+ * `umbrafab check` and the assembly picture: a year's `sunTrack` for the
+ * site (kept per site and year), `sunAtHourAngle` for an apparent time or
+ * `sunAtClock` for a clock time, and the shadow of the layout's gnomon on
+ * the face.
  * @throws SpecError naming `date` or `time` for a bad value
  */
 export function sunView(layout: DialLayout, query: SunQuery): SunView {
@@ -65,27 +64,16 @@ export function sunView(layout: DialLayout, query: SunQuery): SunView {
   if (query.kind !== 'apparent' && query.kind !== 'clock') throw new SpecError('time kind', query.kind, 'allowed: "apparent" or "clock"');
   const { site } = layout.spec;
   const track = trackFor(site.latitude, site.longitude, site.timezone, day.year);
-  const d = track.days.find((x) => x.date === query.date);
-  if (!d) throw new SpecError('date', query.date, `allowed: a date in ${day.year}`);
-  let utcMs: number;
-  if (query.kind === 'apparent') {
-    utcMs = instantAtHourAngle(track, d, (minutes / 60 - 12) * 15 * DEG);
-  } else {
-    const guess = d.startMs + minutes * 60_000;
-    const summerShiftH = offsetHoursAt(site.timezone, guess) - track.standardOffsetHours;
-    utcMs = guess - summerShiftH * 3_600_000;
-  }
-  const s = sunOnDay(track, d, utcMs);
-  const offsetH = offsetHoursAt(site.timezone, utcMs);
-  const clockMin = (utcMs - d.startMs) / 60_000 + (offsetH - track.standardOffsetHours) * 60;
+  const m = query.kind === 'apparent' ? sunAtHourAngle(track, query.date, (minutes / 60 - 12) * 15 * DEG) : sunAtClock(track, query.date, minutes);
+  const s = m.sun;
   const sunFace = sunInFaceFrame(layout, s.enu);
   const state = s.altitudeRad <= 0 ? 'below' : sunFace[2] <= 0 ? 'behind' : 'lit';
   return {
     query,
-    utc: new Date(Math.round(utcMs)).toISOString(),
-    clock: formatClockHms(clockMin),
-    daylightSaving: offsetH > track.standardOffsetHours,
-    apparent: formatClockHms(720 + (s.hourAngleRad / DEG) * 4),
+    utc: new Date(Math.round(m.utcMs)).toISOString(),
+    clock: m.clock,
+    daylightSaving: m.daylightSaving,
+    apparent: m.apparent,
     hourAngleDeg: s.hourAngleRad / DEG,
     declinationDeg: s.declinationRad / DEG,
     altitudeDeg: s.altitudeRad / DEG,

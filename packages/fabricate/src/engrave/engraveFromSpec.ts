@@ -5,7 +5,8 @@ import { engraveJobFromDrawing } from './engraveJobFromDrawing.ts';
 import { ENGRAVE_FILE_NAMES, engraveProgramsFor, type EngraveProgram } from './engravePrograms.ts';
 import { engraveSettingsFromSpec } from './engraveSettingsFromSpec.ts';
 import type { TimeEstimate } from './estimateTime.ts';
-import type { EngraveSettings } from './materialPresets.ts';
+import { rampSlope, type EngraveSettings } from './materialPresets.ts';
+import { parkPoint } from './millProgram.ts';
 import { polylineLengthMm } from './polylineLength.ts';
 import { specSummaryLines } from './specSummaryLines.ts';
 import { planLaser, toLaserGcode } from './toLaserGcode.ts';
@@ -37,7 +38,7 @@ export interface NgcReport {
   readonly passes: number;
   readonly cuts: number;
   readonly timeEstimateS: number;
-  readonly timeBreakdownS: { readonly cutting: number; readonly plunge: number; readonly rapid: number; readonly retract: number };
+  readonly timeBreakdownS: { readonly cutting: number; readonly plunge: number; readonly rapid: number; readonly retract: number; readonly dwell: number };
   readonly rapidTravelMm: RapidTravelReport;
   /** XY length of one pass of every cut = the length cut at final depth, mm. */
   readonly cuttingLengthMm: number;
@@ -56,6 +57,11 @@ export interface NgcReport {
   readonly stepDownMm: number;
   readonly safeZMm: number;
   readonly clearanceZMm: number;
+  readonly entryZMm: number;
+  /** Ramp angle into the cut, degrees. */
+  readonly rampAngleDeg: number;
+  readonly spindleDwellS: number;
+  readonly parkMm: readonly [number, number];
 }
 
 export interface LaserReport {
@@ -119,7 +125,7 @@ function ngcProgram(job: EngraveJob, s: EngraveSettings, spec: DialSpec): { text
       passes: cuts.reduce((m, c) => Math.max(m, c.depthPassesMm.length), 0),
       cuts: cuts.length,
       timeEstimateS: e.totalS,
-      timeBreakdownS: { cutting: e.cuttingS, plunge: e.plungeS, rapid: e.rapidS, retract: e.retractS },
+      timeBreakdownS: { cutting: e.cuttingS, plunge: e.plungeS, rapid: e.rapidS, retract: e.retractS, dwell: e.dwellS },
       rapidTravelMm: travel(plan.toolpaths.rapidTravelMm),
       cuttingLengthMm: cuts.reduce((sum, c) => sum + polylineLengthMm(c.points, c.closed), 0),
       feedLengthMm: e.cuttingMm,
@@ -135,6 +141,10 @@ function ngcProgram(job: EngraveJob, s: EngraveSettings, spec: DialSpec): { text
       stepDownMm: s.stepDownMm,
       safeZMm: s.safeZMm,
       clearanceZMm: s.clearanceZMm,
+      entryZMm: s.entryZMm,
+      rampAngleDeg: (Math.atan(rampSlope(s)) * 180) / Math.PI,
+      spindleDwellS: s.spindleDwellS,
+      parkMm: parkPoint(s, job.stock.lengthMm),
     },
   };
 }

@@ -39,6 +39,13 @@ export function engraveSettingsFromSpec(spec: DialSpec): EngraveSettings {
     flatStepoverFraction: e.tool.flatStepoverFraction,
     laserMaxS: e.laserMaxS,
     rapidMmPerMin: e.rapidMmPerMin,
+    entryZMm: e.entryZMm,
+    rampAngleDeg: e.rampAngleDeg,
+    spindleDwellS: e.spindleDwellS,
+    toolWords: e.toolWords,
+    coolant: e.coolant,
+    parkXMm: e.parkXMm,
+    parkYMm: e.parkYMm,
   };
   try {
     return resolveEngraveSettings(material, overrides);

@@ -8,14 +8,16 @@ import type { AxisTarget, GcodeRecord } from './gcodeRecords.ts';
  * machine's acceleration; typically 10–30 % on a hobby router with many short
  * moves — common practice, memory).
  *
- * Categories: `cutting` = G1 with XY motion, `plunge` = G1 along Z only,
- * `rapid` = G0 with XY motion, `retract` = G0 along Z only.
+ * Categories: `cutting` = G1 (and G2/G3) with XY motion, ramps included,
+ * `plunge` = G1 along Z only, `rapid` = G0 with XY motion, `retract` = G0
+ * along Z only, `dwell` = G4.
  */
 export interface TimeEstimate {
   readonly cuttingS: number;
   readonly plungeS: number;
   readonly rapidS: number;
   readonly retractS: number;
+  readonly dwellS: number;
   readonly totalS: number;
   readonly cuttingMm: number;
   readonly plungeMm: number;
@@ -36,7 +38,7 @@ export interface EstimateTimeOptions {
 export function estimateTime(records: readonly GcodeRecord[], options: EstimateTimeOptions): TimeEstimate {
   if (!(options.rapidMmPerMin > 0)) throw new Error(`rapidMmPerMin must be > 0 mm/min, got ${options.rapidMmPerMin}`);
   let at = { x: 0, y: 0, z: 0, ...options.start };
-  const t = { cuttingS: 0, plungeS: 0, rapidS: 0, retractS: 0, cuttingMm: 0, plungeMm: 0, rapidMm: 0, retractMm: 0 };
+  const t = { cuttingS: 0, plungeS: 0, rapidS: 0, retractS: 0, dwellS: 0, cuttingMm: 0, plungeMm: 0, rapidMm: 0, retractMm: 0 };
   const step = (to: AxisTarget): { length: number; xy: boolean } => {
     const next = { x: to.x ?? at.x, y: to.y ?? at.y, z: to.z ?? at.z };
     const xy = next.x !== at.x || next.y !== at.y;
@@ -55,6 +57,20 @@ export function estimateTime(records: readonly GcodeRecord[], options: EstimateT
         t.plungeMm += length;
         t.plungeS += s;
       }
+    } else if (r.kind === 'arc') {
+      // Helix length: the arc's XY length and the Z change, combined.
+      const rad = Math.hypot(r.from[0] - r.centre[0], r.from[1] - r.centre[1]);
+      const next = { x: r.to.x ?? at.x, y: r.to.y ?? at.y, z: r.to.z ?? at.z };
+      const a0 = Math.atan2(at.y - r.centre[1], at.x - r.centre[0]);
+      const a1 = Math.atan2(next.y - r.centre[1], next.x - r.centre[0]);
+      let sweep = r.clockwise ? a0 - a1 : a1 - a0;
+      while (sweep <= 1e-12) sweep += 2 * Math.PI;
+      const length = Math.hypot(rad * sweep, next.z - at.z);
+      at = next;
+      t.cuttingMm += length;
+      t.cuttingS += (60 * length) / r.feedMmPerMin;
+    } else if (r.kind === 'dwell') {
+      t.dwellS += r.seconds;
     } else if (r.kind === 'rapid') {
       const { length, xy } = step(r.to);
       const s = (60 * length) / options.rapidMmPerMin;
@@ -67,7 +83,7 @@ export function estimateTime(records: readonly GcodeRecord[], options: EstimateT
       }
     }
   }
-  return { ...t, totalS: t.cuttingS + t.plungeS + t.rapidS + t.retractS };
+  return { ...t, totalS: t.cuttingS + t.plungeS + t.rapidS + t.retractS + t.dwellS };
 }
 
 /** '1 h 02 min 05 s' / '3 min 12 s' / '45 s', rounded to the second. */

@@ -7,6 +7,9 @@ import { ngcComment } from './ngcComment.ts';
  * are written.
  */
 
+/** Coolant a program may switch on: M7 mist or M8 flood. */
+export type CoolantMode = 'mist' | 'flood';
+
 /** A move target: the axes to write. */
 export interface AxisTarget {
   readonly x?: number;
@@ -29,16 +32,33 @@ export type GcodeRecord =
   | { readonly kind: 'power'; readonly s: number }
   /** T… M6. */
   | { readonly kind: 'toolChange'; readonly tool: number }
+  /** G4 P… dwell, seconds (RS274NGC and GRBL both read P as seconds). */
+  | { readonly kind: 'dwell'; readonly seconds: number }
+  /** M7 mist, M8 flood, M9 all coolant off. */
+  | { readonly kind: 'coolant'; readonly mode: CoolantMode | 'off' }
+  /**
+   * G2 (cw) / G3 (ccw) arc in the XY plane to `to` (with an optional Z for a
+   * helix), centre at `centre` (written as I, J offsets from the start).
+   */
+  | { readonly kind: 'arc'; readonly clockwise: boolean; readonly to: AxisTarget; readonly centre: readonly [number, number]; readonly from: readonly [number, number]; readonly feedMmPerMin: number }
   /** M2 program end. */
   | { readonly kind: 'end' };
+
+export interface SerializeOptions {
+  /**
+   * Wrap the program in '%' lines (the RS-274/NGC tape delimiters: LinuxCNC
+   * reads a file that starts with '%' up to the next '%'; memory). Default false.
+   */
+  readonly percent?: boolean;
+}
 
 /**
  * Serialise records to G-code text, one block per line, '\n' line ends and a
  * final newline. Coordinates are written with `decimals` places, F and S words
  * with trailing zeros trimmed (formatNumber).
  */
-export function serializeGcode(records: readonly GcodeRecord[], decimals: number): string {
-  const lines: string[] = [];
+export function serializeGcode(records: readonly GcodeRecord[], decimals: number, options: SerializeOptions = {}): string {
+  const lines: string[] = options.percent ? ['%'] : [];
   let feed: string | undefined;
   const axes = (to: AxisTarget): string =>
     (['x', 'y', 'z'] as const)
@@ -72,6 +92,20 @@ export function serializeGcode(records: readonly GcodeRecord[], decimals: number
       case 'toolChange':
         lines.push(`T${r.tool} M6`);
         break;
+      case 'dwell':
+        lines.push(`G4 P${formatNumber(r.seconds, 3, true)}`);
+        break;
+      case 'coolant':
+        lines.push(r.mode === 'mist' ? 'M7' : r.mode === 'flood' ? 'M8' : 'M9');
+        break;
+      case 'arc': {
+        const f = formatNumber(r.feedMmPerMin, decimals, true);
+        const i = formatNumber(r.centre[0] - r.from[0], decimals);
+        const j = formatNumber(r.centre[1] - r.from[1], decimals);
+        lines.push(`${r.clockwise ? 'G2' : 'G3'}${axes(r.to)} I${i} J${j}${f === feed ? '' : ` F${f}`}`);
+        feed = f;
+        break;
+      }
       case 'end':
         lines.push('M2');
         break;
@@ -81,5 +115,6 @@ export function serializeGcode(records: readonly GcodeRecord[], decimals: number
       }
     }
   }
+  if (options.percent) lines.push('%');
   return `${lines.join('\n')}\n`;
 }

@@ -56,8 +56,8 @@ export function figureComments(f: {
   const s = (v: number): string => `${formatNumber(v, 0)} s`;
   const parts =
     f.process === 'mill'
-      ? `cutting ${s(e.cuttingS)}, plunges ${s(e.plungeS)}, rapids ${s(e.rapidS + e.retractS)}; no acceleration or tool changes`
-      : `burning ${s(e.cuttingS)}, travel ${s(e.rapidS + e.retractS)}; no acceleration`;
+      ? `cutting ${s(e.cuttingS)}, plunges ${s(e.plungeS)}, rapids ${s(e.rapidS + e.retractS)}, dwells ${s(e.dwellS)}; ignores acceleration and tool changes, so the job takes longer`
+      : `burning ${s(e.cuttingS)}, travel ${s(e.rapidS + e.retractS)}; ignores acceleration, so the job takes longer`;
   return [
     { kind: 'comment', text: `estimated time: ${formatDuration(e.totalS)} [${s(e.totalS)}: ${parts}]` },
     {

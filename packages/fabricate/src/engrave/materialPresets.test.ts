@@ -22,7 +22,11 @@ describe('resolveEngraveSettings', () => {
     expect(() => resolveEngraveSettings('brass', { feedMmPerMin: 0 })).toThrow('feedMmPerMin must be > 0 mm/min, got 0');
     expect(() => resolveEngraveSettings('brass', { feedMmPerMin: -5 })).toThrow('feedMmPerMin must be > 0 mm/min, got -5');
     expect(() => resolveEngraveSettings('brass', { plungeMmPerMin: 0 })).toThrow(/plungeMmPerMin .*got 0/);
-    expect(() => resolveEngraveSettings('brass', { clearanceZMm: 6 })).toThrow('clearanceZMm 6 must not exceed safeZMm 5');
+    expect(() => resolveEngraveSettings('brass', { clearanceZMm: 11 })).toThrow('clearanceZMm 11 must not exceed safeZMm 10');
+    expect(() => resolveEngraveSettings('brass', { entryZMm: 2 })).toThrow('entryZMm 2 must not exceed clearanceZMm 1');
+    expect(() => resolveEngraveSettings('brass', { coolant: 'air' as never })).toThrow('coolant must be one of off, mist, flood, got "air"');
+    expect(() => resolveEngraveSettings('brass', { spindleDwellS: -1 })).toThrow('spindleDwellS must be >= 0 s, got -1');
+    expect(() => resolveEngraveSettings('brass', { rampAngleDeg: 95 })).toThrow(/rampAngleDeg must be in \(0, 90\] deg, got 95/);
     expect(() => resolveEngraveSettings('brass', { vbitAngleDeg: 0 })).toThrow(/vbitAngleDeg must be in \(0, 180\) deg, got 0/);
     expect(() => resolveEngraveSettings('brass', { laserPowerPct: 120 })).toThrow(/laserPowerPct must be in \(0, 100\] %, got 120/);
     expect(() => resolveEngraveSettings('brass', { vbitTipMm: 4 })).toThrow('vbitMaxWidthMm 3.175 must exceed vbitTipMm 4');

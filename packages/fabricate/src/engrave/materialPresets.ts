@@ -1,4 +1,5 @@
-import { assertInRange, assertPositive, assertNonNegative, quote } from './checks.ts';
+import { assertFinite, assertInRange, assertPositive, assertNonNegative, quote } from './checks.ts';
+import type { CoolantMode } from './gcodeRecords.ts';
 
 /**
  * Engraving presets per plate material, and the merge of spec overrides over
@@ -81,6 +82,19 @@ export interface EngraveSettings extends MaterialPreset {
   readonly laserMaxS: number;
   /** Rapid (G0) rate used for the time estimate, mm/min. */
   readonly rapidMmPerMin: number;
+  /** Height the tool rapids down to before it feeds onto the stock (at the cutting feed) and ramps in, mm above the stock top (<= clearanceZMm). */
+  readonly entryZMm: number;
+  /** Ramp angle into the cut, degrees from the horizontal; undefined = the steepest whose descent rate is the plunge feed, asin(plunge / feed). */
+  readonly rampAngleDeg: number | undefined;
+  /** Dwell after every spindle start so the spindle reaches speed before it cuts, s (G4). */
+  readonly spindleDwellS: number;
+  /** Write T1 M6 at the start (for a machine with a tool changer or a tool table). */
+  readonly toolWords: boolean;
+  /** Coolant during the job: 'off', 'mist' (M7) or 'flood' (M8); M9 at the end. */
+  readonly coolant: CoolantMode | 'off';
+  /** Park position at the end, at safe height, mm in work coordinates; undefined = X0 and the far (top) edge of the stock. */
+  readonly parkXMm: number | undefined;
+  readonly parkYMm: number | undefined;
 }
 
 /** Spec overrides: any setting but the material. */
@@ -88,7 +102,7 @@ export type EngraveOverrides = { readonly [K in Exclude<keyof EngraveSettings, '
 
 /** Material-independent defaults (common practice, memory). */
 export const ENGRAVE_DEFAULTS = {
-  safeZMm: 5, // clears clamps and screws on a small router table
+  safeZMm: 10, // clears clamps, screws and hold-down tabs on a small router table
   clearanceZMm: 1, // enough over a flat, faced plate
   vbitAngleDeg: 90, // the most common engraving V-bit
   vbitTipMm: 0, // sharp point
@@ -99,12 +113,38 @@ export const ENGRAVE_DEFAULTS = {
   flatStepoverFraction: 0.5, // half the diameter: no ridges left between passes
   laserMaxS: 1000, // GRBL default $30
   rapidMmPerMin: 3000, // typical hobby-router G0 rate
+  entryZMm: 0.2, // rapid down to just above a faced plate, then feed
+  rampAngleDeg: undefined,
+  spindleDwellS: 3, // a small VFD spindle reaches speed in 2-5 s
+  toolWords: false, // most hobby routers change tools by hand
+  coolant: 'off',
+  parkXMm: undefined,
+  parkYMm: undefined,
 } as const satisfies Omit<EngraveSettings, 'material' | keyof MaterialPreset>;
 
 const SETTING_KEYS: readonly string[] = [
   ...Object.keys(MATERIAL_PRESETS.aluminium),
   ...Object.keys(ENGRAVE_DEFAULTS),
 ].sort();
+
+/**
+ * Ramp slope (depth per mm along the line) of the settings: tan of
+ * rampAngleDeg, by default the steepest ramp whose descent rate at the
+ * cutting feed equals the plunge feed, sin(angle) = plunge / feed (at most 45°).
+ */
+export function rampSlope(s: { readonly rampAngleDeg: number | undefined; readonly feedMmPerMin: number; readonly plungeMmPerMin: number }): number {
+  const deg = s.rampAngleDeg ?? Math.min(45, (Math.asin(Math.min(1, s.plungeMmPerMin / s.feedMmPerMin)) * 180) / Math.PI);
+  return Math.tan((deg * Math.PI) / 180);
+}
+
+/**
+ * Feed along a ramp: the cutting feed, lowered where needed so the descent
+ * rate stays at or under the plunge feed (feed · sin(angle) <= plunge).
+ */
+export function rampFeedMmPerMin(s: { readonly feedMmPerMin: number; readonly plungeMmPerMin: number }, slope: number): number {
+  const sin = slope / Math.hypot(1, slope);
+  return Math.min(s.feedMmPerMin, s.plungeMmPerMin / sin);
+}
 
 /**
  * Merge spec overrides over the material preset and the defaults, then check
@@ -140,6 +180,14 @@ export function resolveEngraveSettings(material: string, overrides: EngraveOverr
   if (s.clearanceZMm > s.safeZMm) {
     throw new Error(`clearanceZMm ${s.clearanceZMm} must not exceed safeZMm ${s.safeZMm}`);
   }
+  assertNonNegative(s.entryZMm, 'entryZMm', 'mm');
+  if (s.entryZMm > s.clearanceZMm) throw new Error(`entryZMm ${s.entryZMm} must not exceed clearanceZMm ${s.clearanceZMm}`);
+  if (s.rampAngleDeg !== undefined) assertInRange(s.rampAngleDeg, 'rampAngleDeg', 0, 90, { unit: 'deg' });
+  assertNonNegative(s.spindleDwellS, 'spindleDwellS', 's');
+  if (typeof s.toolWords !== 'boolean') throw new Error(`toolWords must be true or false, got ${quote(s.toolWords)}`);
+  if (!['off', 'mist', 'flood'].includes(s.coolant)) throw new Error(`coolant must be one of off, mist, flood, got ${quote(s.coolant)}`);
+  if (s.parkXMm !== undefined) assertFinite(s.parkXMm, 'parkXMm');
+  if (s.parkYMm !== undefined) assertFinite(s.parkYMm, 'parkYMm');
   assertInRange(s.vbitAngleDeg, 'vbitAngleDeg', 0, 180, { hiInclusive: false, unit: 'deg' });
   assertNonNegative(s.vbitTipMm, 'vbitTipMm', 'mm');
   assertPositive(s.vbitMaxWidthMm, 'vbitMaxWidthMm', 'mm');

@@ -20,17 +20,17 @@ describe('toLaserGcode', () => {
   const { commands } = runRs274(text, 'engrave-laser.gcode');
   const ms = motions(commands);
 
-  it('has no Z words at all, and the safe end S0 M5 M2', () => {
+  it('has no Z words at all, and the safe end S0, park, M5 M2', () => {
     const code = text.split('\n').map((line) => line.replace(/\([^)]*\)/g, ''));
     expect(code.some((line) => /z/i.test(line))).toBe(false);
     expect(ms.every((m) => m.to.z === 0)).toBe(true);
-    expect(text.trimEnd().split('\n').slice(-3)).toEqual(['S0', 'M5', 'M2']);
+    expect(text.trimEnd().split('\n').slice(-4)).toEqual(['S0', `G0 X0.000 Y${SAMPLE_PLATE_JOB.stock.lengthMm.toFixed(3)}`, 'M5', 'M2']);
     expect(commands.some((c) => c.kind === 'PROGRAM_END')).toBe(true);
   });
 
   it('keeps the beam off during every travel and on during every burn', () => {
     const travels = ms.filter((m) => m.kind === 'STRAIGHT_TRAVERSE');
-    expect(travels.length).toBe(SAMPLE_PLATE_JOB.paths.length);
+    expect(travels.length).toBe(SAMPLE_PLATE_JOB.paths.length + 1); // one per stroke and the park move
     for (const m of travels) expect(m.spindle === 'off' || m.spindleSpeed === 0).toBe(true);
     // acrylic preset: 30 % of S1000 → S300, dynamic (M4 = counter-clockwise in RS274 terms).
     for (const m of ms.filter((k) => k.kind === 'STRAIGHT_FEED')) {
@@ -47,7 +47,7 @@ describe('toLaserGcode', () => {
       if (m.kind === 'STRAIGHT_TRAVERSE') runs.push([]);
       else runs[runs.length - 1].push(m);
     }
-    const traced = runs.map((run): Vec2[] => [[run[0].from.x, run[0].from.y], ...run.map((m): Vec2 => [m.to.x, m.to.y])]);
+    const traced = runs.filter((run) => run.length > 0).map((run): Vec2[] => [[run[0].from.x, run[0].from.y], ...run.map((m): Vec2 => [m.to.x, m.to.y])]);
     const hits = SAMPLE_PLATE_JOB.paths.map(() => 0);
     for (const t of traced) {
       const matches = SAMPLE_PLATE_JOB.paths

@@ -5,6 +5,7 @@ import { formatNumber } from './formatNumber.ts';
 import { serializeGcode, type GcodeRecord } from './gcodeRecords.ts';
 import type { EngraveSettings } from './materialPresets.ts';
 import { orderPaths } from './orderPaths.ts';
+import { parkPoint } from './millProgram.ts';
 import { figureComments, safetyComments, stockComments } from './headerComments.ts';
 import { resolveWriterOptions, type GcodeWriterOptions } from './writerOptions.ts';
 
@@ -14,7 +15,9 @@ import { resolveWriterOptions, type GcodeWriterOptions } from './writerOptions.t
  * words (S = power % × laserMaxS / 100), `G1` at the laser speed with the
  * beam on, `S0` before every `G0` travel so the beam is off during travel
  * even on a controller that does not blank G0 itself, no Z words at all (focus
- * is set by hand), end `S0`, `M5`, `M2`. Every path is traced once along its
+ * is set by hand), end `S0`, the park move `G0 X Y` (engrave.parkXMm/parkYMm,
+ * default X0 at the stock's far edge), `M5`, `M2`. No `%` lines: GRBL senders
+ * do not all accept them. Every path is traced once along its
  * centre line (a score line); wide marks are not hatched.
  *
  * The same text is valid RS-274/NGC (S words and M4 are spindle words there)
@@ -51,7 +54,9 @@ export function planLaser(job: EngraveJob, settings: EngraveSettings, options: G
     for (const [x, y] of trace) body.push({ kind: 'feed', to: { x, y }, feedMmPerMin: s.laserSpeedMmPerMin });
     body.push({ kind: 'power', s: 0 });
   });
-  body.push({ kind: 'spindle', mode: 'off' }, { kind: 'end' });
+  // Park with the beam off (S0 above) so the part is free to lift out.
+  const [px, py] = parkPoint(s, job.stock.lengthMm);
+  body.push({ kind: 'rapid', to: { x: px, y: py } }, { kind: 'spindle', mode: 'off' }, { kind: 'end' });
   const estimate = estimateTime(body, { rapidMmPerMin: s.rapidMmPerMin });
   return { strokes: ordered.paths, body, estimate, rapidTravelMm: ordered.rapidTravelMm, powerS };
 }

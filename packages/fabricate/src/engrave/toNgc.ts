@@ -1,10 +1,11 @@
-import type { EngraveJob, Vec2 } from './engraveInput.ts';
+import type { EngraveJob } from './engraveInput.ts';
 import { estimateTime, type TimeEstimate } from './estimateTime.ts';
 import { formatNumber } from './formatNumber.ts';
 import { serializeGcode, type GcodeRecord } from './gcodeRecords.ts';
-import type { EngraveSettings } from './materialPresets.ts';
+import { rampFeedMmPerMin, rampSlope, type EngraveSettings } from './materialPresets.ts';
+import { enterAndCut, machineComments, millEnd, millStart, spindleOff, spindleOn } from './millProgram.ts';
 import { figureComments, safetyComments, stockComments } from './headerComments.ts';
-import { buildToolpaths, type EngraveCut, type EngraveTool, type EngraveToolpaths } from './toolpaths.ts';
+import { buildToolpaths, type EngraveTool, type EngraveToolpaths } from './toolpaths.ts';
 import { resolveWriterOptions, type GcodeWriterOptions } from './writerOptions.ts';
 
 /**
@@ -13,18 +14,20 @@ import { resolveWriterOptions, type GcodeWriterOptions } from './writerOptions.t
  * Debian's `rs274 -g`.
  *
  * Program shape:
+ * - `%` on the first and the last line (tape delimiters);
  * - header comments: units, work origin, stock, material, tools, feeds, time
- *   estimate, rapid travel, then the spec summary lines;
- * - `G21 G90 G17 G94 G40 G49 G80 G54`: mm, absolute, XY plane, feed per
- *   minute, no cutter or length compensation, no canned cycle, first work
- *   offset;
- * - `G0 Z<safe>` before any XY move, then `S<rpm> M3`;
- * - per cut: `G0 X Y` at the current height, `G0 Z<clearance>`, then per pass
- *   `G1 Z-<depth> F<plunge>` and `G1 X Y F<feed>` along the path (open paths
- *   back and forth, loops the same way round), then `G0 Z<clearance>`;
- * - tool change to the flat end mill (T2 M6) at safe height, spindle off,
- *   when there are flat-mill cuts (V-bit = T1, loaded before the start);
- * - end: `G0 Z<safe>`, `M5`, `M2`.
+ *   estimate, rapid travel, cautions, then the spec summary lines;
+ * - millStart: `G21 G90 G17 G94 G40 G49 G80 G54`, `G0 Z<safe>` before any XY
+ *   move, `T1 M6` when engrave.toolWords, `S<rpm> M3`, `G4 P<dwell>` so the
+ *   spindle is at speed, `M7`/`M8` when engrave.coolant asks;
+ * - per cut (enterAndCut): `G0 X Y` at the clearance height, `G0 Z<entry>`
+ *   just above the stock, `G1 Z0` at the cutting feed, then the passes in the
+ *   cut (rampedPasses): the tool ramps down along the line and runs the depth
+ *   passes back and forth (loops the same way round) without lifting, then
+ *   `G0 Z<clearance>`;
+ * - tool change to the flat end mill (T2 M6) at safe height, spindle and
+ *   coolant off, when there are flat-mill cuts (V-bit = T1);
+ * - millEnd: `G0 Z<safe>`, the park move `G0 X Y`, `M9`, `M5`, `M2`.
  */
 
 const TOOL_NUMBER: Readonly<Record<EngraveTool, number>> = { vbit: 1, flat: 2 };
@@ -37,12 +40,6 @@ export interface NgcPlan {
   readonly estimate: TimeEstimate;
 }
 
-function passPoints(cut: EngraveCut, pass: number): readonly Vec2[] {
-  const pts = cut.points;
-  if (cut.closed) return [...pts.slice(1), pts[0]];
-  return pass % 2 === 0 ? pts.slice(1) : [...pts].reverse().slice(1);
-}
-
 /**
  * Build the milling program's records and figures (what toNgc writes).
  * @param options decimals (default 3), optimizeOrder (default true)
@@ -51,21 +48,19 @@ export function planNgc(job: EngraveJob, settings: EngraveSettings, options: Gco
   const o = resolveWriterOptions(options);
   const s = settings;
   const toolpaths = buildToolpaths(job, s, { optimizeOrder: o.optimizeOrder });
-  const body: GcodeRecord[] = [
-    { kind: 'modal', words: 'G21 G90 G17 G94 G40 G49 G80 G54' },
-    { kind: 'rapid', to: { z: s.safeZMm } },
-  ];
+  const rampFeed = rampFeedMmPerMin(s, rampSlope(s));
+  const body: GcodeRecord[] = [];
   let tool: EngraveTool | undefined;
   let z = s.safeZMm;
   toolpaths.cuts.forEach((cut, n) => {
     if (cut.tool !== tool) {
-      if (tool !== undefined) {
-        body.push({ kind: 'rapid', to: { z: s.safeZMm } }, { kind: 'spindle', mode: 'off' });
+      if (tool === undefined) body.push(...millStart(s, TOOL_NUMBER[cut.tool], s.spindleRpm));
+      else {
+        body.push({ kind: 'rapid', to: { z: s.safeZMm } }, ...spindleOff(s));
         body.push({ kind: 'comment', text: `tool change: load T${TOOL_NUMBER[cut.tool]}, ${toolName(cut.tool, s)}; set Z0 on the top of the stock again` });
-        body.push({ kind: 'toolChange', tool: TOOL_NUMBER[cut.tool] });
+        body.push({ kind: 'toolChange', tool: TOOL_NUMBER[cut.tool] }, ...spindleOn(s, s.spindleRpm));
         z = s.safeZMm;
       }
-      body.push({ kind: 'spindle', mode: 'cw', s: s.spindleRpm });
       tool = cut.tool;
     }
     const finalDepth = cut.depthPassesMm[cut.depthPassesMm.length - 1];
@@ -73,17 +68,10 @@ export function planNgc(job: EngraveJob, settings: EngraveSettings, options: Gco
       kind: 'comment',
       text: `cut ${n + 1}/${toolpaths.cuts.length}: ${cut.operation} ${cut.label}, width ${fmt(cut.widthMm)} mm, depth ${fmt(finalDepth)} mm in ${cut.depthPassesMm.length} pass${cut.depthPassesMm.length > 1 ? 'es' : ''}`,
     });
-    const [x0, y0] = cut.points[0];
-    body.push({ kind: 'rapid', to: { x: x0, y: y0 } });
-    if (z !== s.clearanceZMm) body.push({ kind: 'rapid', to: { z: s.clearanceZMm } });
-    cut.depthPassesMm.forEach((depth, pass) => {
-      body.push({ kind: 'feed', to: { z: -depth }, feedMmPerMin: cut.plungeMmPerMin });
-      for (const [x, y] of passPoints(cut, pass)) body.push({ kind: 'feed', to: { x, y }, feedMmPerMin: cut.feedMmPerMin });
-    });
-    body.push({ kind: 'rapid', to: { z: s.clearanceZMm } });
-    z = s.clearanceZMm;
+    z = enterAndCut(body, s, cut.path, z, { feedMmPerMin: cut.feedMmPerMin, rampFeedMmPerMin: Math.min(rampFeed, cut.feedMmPerMin), plungeMmPerMin: cut.plungeMmPerMin });
   });
-  body.push({ kind: 'rapid', to: { z: s.safeZMm } }, { kind: 'spindle', mode: 'off' }, { kind: 'end' });
+  if (tool === undefined) body.push(...millStart(s, 1, s.spindleRpm));
+  body.push(...millEnd(s, job.stock.lengthMm));
   // The machine is assumed to start over the origin at safe height.
   const estimate = estimateTime(body, { rapidMmPerMin: s.rapidMmPerMin, start: { x: 0, y: 0, z: s.safeZMm } });
   return { toolpaths, body, estimate };
@@ -134,12 +122,13 @@ export function toNgc(job: EngraveJob, settings: EngraveSettings, options: Gcode
       kind: 'comment',
       text: `spindle ${formatNumber(s.spindleRpm, 0)} rpm, feed ${formatNumber(s.feedMmPerMin, 3, true)} mm/min, plunge ${formatNumber(s.plungeMmPerMin, 3, true)} mm/min, step-down at most ${fmt(s.stepDownMm)} mm`,
     },
-    { kind: 'comment', text: `safe Z ${fmt(s.safeZMm)} mm, clearance Z ${fmt(s.clearanceZMm)} mm` },
+    { kind: 'comment', text: `safe Z ${fmt(s.safeZMm)} mm, clearance Z ${fmt(s.clearanceZMm)} mm, entry Z ${fmt(s.entryZMm)} mm, ramp ${formatNumber((Math.atan(rampSlope(s)) * 180) / Math.PI, 1)} deg into the cut, no plunges into the stock` },
+    ...machineComments(s, job.stock.lengthMm),
     {
       kind: 'comment',
       text: `${cuts.length} cuts, deepest ${fmt(plan.toolpaths.maxDepthMm)} mm [limit ${fmt(plan.toolpaths.depthLimitMm)} mm], at most ${maxPasses} passes`,
     },
     ...figureComments({ rapidTravelMm: plan.toolpaths.rapidTravelMm, estimate: plan.estimate, title: job.title, process: 'mill' }),
   ];
-  return serializeGcode([...header, ...plan.body], o.decimals);
+  return serializeGcode([...header, ...plan.body], o.decimals, { percent: true });
 }

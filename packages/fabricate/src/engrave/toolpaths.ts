@@ -1,7 +1,8 @@
 import type { EngraveJob, EngraveOperation, Vec2 } from './engraveInput.ts';
 import { assertOnStock, validateEngraveJob } from './engraveInput.ts';
 import { flatGroovePath } from './flatGroove.ts';
-import type { EngraveSettings } from './materialPresets.ts';
+import { rampSlope, type EngraveSettings } from './materialPresets.ts';
+import { rampedPasses, type Vec3 } from './rampedPasses.ts';
 import { orderPaths } from './orderPaths.ts';
 import { stepDownPasses } from './stepDownPasses.ts';
 import { vbitDepthMm } from './vbitDepth.ts';
@@ -27,6 +28,8 @@ export interface EngraveCut {
    * pass 2 back, and so on; closed cuts run the same way every pass.
    */
   readonly depthPassesMm: readonly number[];
+  /** The tool-centre path in the cut (rampedPasses): from points[0] on the stock top, ramping down, to the end at the final depth. */
+  readonly path: readonly Vec3[];
   readonly feedMmPerMin: number;
   readonly plungeMmPerMin: number;
   readonly operation: EngraveOperation;
@@ -114,7 +117,8 @@ export function buildToolpaths(job: EngraveJob, settings: EngraveSettings, optio
   }
 
   const limit = maxEngraveDepthMm(job.stock.thicknessMm);
-  const cuts: EngraveCut[] = job.paths.map((p, i): EngraveCut => {
+  const slope = rampSlope(s);
+  const cuts: Omit<EngraveCut, 'path'>[] = job.paths.map((p, i): Omit<EngraveCut, 'path'> => {
     const tool = toolOf(i);
     if (tool === 'vbit' && !(p.widthMm > s.vbitTipMm)) {
       throw new Error(`paths[${i}].widthMm ${p.widthMm} ('${p.label}') must exceed vbitTipMm ${s.vbitTipMm}: the bit cuts at least its tip width`);
@@ -150,9 +154,10 @@ export function buildToolpaths(job: EngraveJob, settings: EngraveSettings, optio
   const travel = { inputOrder: 0, ordered: 0, lowerBound: 0 };
   for (const group of groups) {
     if (group.length === 0) continue;
-    const withEnds = group.map((c) => ({ ...c, endsAtStart: !c.closed && c.depthPassesMm.length % 2 === 0 }));
+    // Where a cut ends does not depend on its direction (rampedPasses), so it is found once before ordering.
+    const withEnds = group.map((c) => ({ ...c, endsAtStart: rampedPasses(c.points, c.closed, c.depthPassesMm, slope).endsAtStart }));
     const result = orderPaths(withEnds, { start, optimize });
-    ordered.push(...result.paths.map(({ endsAtStart: _drop, ...c }): EngraveCut => c));
+    ordered.push(...result.paths.map(({ endsAtStart: _drop, ...c }): EngraveCut => ({ ...c, path: rampedPasses(c.points, c.closed, c.depthPassesMm, slope).path })));
     travel.inputOrder += result.rapidTravelMm.inputOrder;
     travel.ordered += result.rapidTravelMm.ordered;
     travel.lowerBound += result.rapidTravelMm.lowerBound;

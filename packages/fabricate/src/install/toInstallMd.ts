@@ -1,5 +1,6 @@
 import type { InstallSheet } from '@umbrafab/geometry';
 import { roundTo } from '../process/roundTo.ts';
+import { escapeMarkdownText as md } from './markdownText.ts';
 
 /** Fixed decimals, rounded through roundTo (no −0). */
 function fx(v: number, decimals: number): string {
@@ -20,7 +21,9 @@ function utcOffset(hours: number): string {
  * install.md: the installation sheet as CommonMark text (headings, lists and
  * pipe tables, GitHub-flavoured table syntax), from the plain data of
  * `installSheet`. No solar math here; numbers are rounded for reading
- * (angles 0.1°, lengths 1 mm, times 1 s, E 0.1 min).
+ * (angles 0.1°, lengths 1 mm, times 1 s, E 0.1 min). Free text from the
+ * spec (name, place, mark labels) goes through `escapeMarkdownText`; the zone is
+ * an IANA name checked by the spec.
  * @example toInstallMd(installSheet(layout)).startsWith('# Installing')
  */
 export function toInstallMd(sheet: InstallSheet): string {
@@ -28,8 +31,8 @@ export function toInstallMd(sheet: InstallSheet): string {
   const ns = (v: number, pos: string, neg: string) => `${fx(Math.abs(v), 4)}° ${v >= 0 ? pos : neg}`;
   const pole = sheet.hemisphere === 'north' ? 'north' : 'south';
   const out: string[] = [];
-  out.push(`# Installing "${sheet.dialName}"`, '');
-  out.push(`Site: ${s.place ? `${s.place}, ` : ''}${ns(s.latitudeDeg, 'N', 'S')}, ${ns(s.longitudeDeg, 'E', 'W')}, time zone ${s.timezone}. Figures for installation on ${sheet.date}.`, '');
+  out.push(`# Installing "${md(sheet.dialName)}"`, '');
+  out.push(`Site: ${s.place ? `${md(s.place)}, ` : ''}${ns(s.latitudeDeg, 'N', 'S')}, ${ns(s.longitudeDeg, 'E', 'W')}, time zone ${s.timezone}. Figures for installation on ${sheet.date}.`, '');
 
   out.push('## Safety first', '');
   for (const c of sheet.cautions) out.push(`- ${c}`);
@@ -80,9 +83,9 @@ export function toInstallMd(sheet: InstallSheet): string {
   const never = sheet.reach.filter((r) => !r.reached);
   out.push(never.length === 0
     ? `All ${sheet.reach.length} marks are reached on some day of the year (Sun above the horizon and in front of the face).`
-    : `Never reached at this site: ${never.map((r) => r.label).join(', ')}.`, '');
+    : `Never reached at this site: ${never.map((r) => md(r.label)).join(', ')}.`, '');
   out.push('| mark | hour angle | days of the year reached |', '|---|---|---|');
-  for (const r of sheet.reach) out.push(`| ${r.label} | ${signed(r.hourAngleDeg, 2)}° | ${r.daysReached} |`);
+  for (const r of sheet.reach) out.push(`| ${md(r.label)} | ${signed(r.hourAngleDeg, 2)}° | ${r.daysReached} |`);
   out.push('');
   return out.join('\n');
 }

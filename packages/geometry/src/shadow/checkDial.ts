@@ -11,7 +11,7 @@ import { dialFrame, toDialFrame, type DialFrame } from './dialFrame.ts';
 import { drawnMarksFromLayout, type DrawnMark } from './drawnMarks.ts';
 import { gnomonForLayout } from './gnomonForLayout.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
-import { instantAtHourAngle, sunOnDay, sunTrack, type RefractionModel, type SunSample } from './sunTrack.ts';
+import { instantAtHourAngle, sunOnDay, sunTrack, type RefractionModel, type SunSample } from '../sun/sunTrack.ts';
 import { KM_PER_AU } from 'astronomy-engine';
 
 /**

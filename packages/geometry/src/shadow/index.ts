@@ -1,5 +1,4 @@
 export * from './dialFrame.ts';
-export * from './sunTrack.ts';
 export * from './gnomonForLayout.ts';
 export * from './styleEdges.ts';
 export * from './castShadow.ts';
@@ -7,3 +6,4 @@ export * from './shadowOnFace.ts';
 export * from './drawnMarks.ts';
 export * from './marksFromPlate.ts';
 export * from './checkDial.ts';
+export * from './checkPlanar.ts';

@@ -2,6 +2,7 @@ import { SpecError } from '../errors.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { Vec2 } from '../types.ts';
 import type { DrawnMark } from './drawnMarks.ts';
+import { CUT_LAYER_NAMES } from '../plate/cutLayerNames.ts';
 
 /** A polyline read from a plate drawing (DXF), plate coordinates (origin at the plate's lower-left corner), mm. */
 export interface PlateLine {
@@ -10,8 +11,12 @@ export interface PlateLine {
   readonly closed: boolean;
 }
 
-/** Layers that carry the marks in plate.dxf: score centre-lines, or etched outlines for waterjet. */
-export const MARK_LAYERS = { score: 'LINE_SCORE', etch: 'LINE_ETCH_OUTLINE' } as const;
+/**
+ * Layers that carry the marks in plate.dxf: score centre-lines, the
+ * centre-lines kept beside etch outlines, or (drawings of earlier versions)
+ * one closed 4-corner etch outline per mark.
+ */
+export const MARK_LAYERS = { score: CUT_LAYER_NAMES.score, centres: CUT_LAYER_NAMES.markCentres, etch: CUT_LAYER_NAMES.etch } as const;
 
 /** Farthest a drawn line may sit from its mark's layout position and still be taken for it, mm. */
 export const MATCH_RADIUS_MM = 5;
@@ -41,8 +46,10 @@ export interface PlateMarks {
 export function marksFromPlate(layout: DialLayout, lines: readonly PlateLine[]): PlateMarks {
   const ox = layout.plate.substyleX;
   const oy = layout.plate.faceOriginY;
+  // A drawing that keeps the centre-lines beside its etch outlines is read by its centre-lines alone.
+  const hasCentres = lines.some((l) => l.layer === MARK_LAYERS.centres);
   const segs = lines
-    .filter((l) => l.layer === MARK_LAYERS.score || (l.layer === MARK_LAYERS.etch && l.closed))
+    .filter((l) => l.layer === MARK_LAYERS.score || l.layer === MARK_LAYERS.centres || (!hasCentres && l.layer === MARK_LAYERS.etch && l.closed))
     .map((l) => centreLine(l))
     .filter((s): s is readonly [Vec2, Vec2] => s !== null)
     .map(([a, b]) => [[a[0] - ox, a[1] - oy] as Vec2, [b[0] - ox, b[1] - oy] as Vec2] as const);
@@ -72,7 +79,7 @@ export function marksFromPlate(layout: DialLayout, lines: readonly PlateLine[]):
       throw new SpecError(
         '--plate',
         `${m.label} ${m.style}`,
-        `allowed: a drawing with a line on ${MARK_LAYERS.score} or ${MARK_LAYERS.etch} within ${MATCH_RADIUS_MM} mm of every mark of this spec`,
+        `allowed: a drawing with a line on ${MARK_LAYERS.score}, ${MARK_LAYERS.centres} or ${MARK_LAYERS.etch} within ${MATCH_RADIUS_MM} mm of every mark of this spec`,
         `mark ${m.label} ${m.style} (face x ${m.xMm.toFixed(3)} mm, plate x ${(m.xMm + ox).toFixed(3)} mm) has no line in the drawing`,
       );
     }

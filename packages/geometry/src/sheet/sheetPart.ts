@@ -23,4 +23,6 @@ export interface SheetPart {
   /** Engraved lines and text on the part (single-stroke centre lines), if any. */
   readonly lines?: readonly DrawnLine[];
   readonly text?: readonly DrawnText[];
+  /** Lines for checking, never cut (the plate's substyle, the gnomon's face line), if any. */
+  readonly reference?: readonly { readonly label: string; readonly path: Path }[];
 }

@@ -1,11 +1,14 @@
 import { z } from 'zod';
 import { boundedNumber } from './boundedNumber.ts';
+import { freeText } from './freeText.ts';
 import { checkSection } from './sections/checkSection.ts';
+import { cutFilesSection } from './sections/cutFilesSection.ts';
 import { engraveSection } from './sections/engraveSection.ts';
 import { installSection } from './sections/installSection.ts';
 import { partsSection } from './sections/partsSection.ts';
 import { templateSection } from './sections/templateSection.ts';
 import { picturesSection } from './sections/picturesSection.ts';
+import { faceSection } from './sections/faceSection.ts';
 
 /**
  * The dial spec schema: one source for validation, defaults and the field
@@ -48,7 +51,7 @@ export const DATE_LINE_SETS = ['solstices', 'equinox', 'zodiac'] as const;
 /** A custom date line: "MM-DD" in calendar.year and a short engraved label. */
 const calendarDate = z.strictObject({
   date: z.string({ error: 'allowed: a date "MM-DD" in quotes, e.g. "06-14"' }).regex(/^(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/, { error: 'allowed: a date "MM-DD" with month 01-12 and day 01-31, e.g. "06-14"' }).describe('month and day "MM-DD" in calendar.year'),
-  label: z.string({ error: 'allowed: a text in quotes' }).min(1).max(24, { error: 'allowed: 1 to 24 characters' }).describe('engraved beside the line'),
+  label: freeText({ minLength: 1, maxLength: 24 }).describe('engraved beside the line'),
 });
 
 const markSchema = (length: number, width: number) =>
@@ -60,13 +63,14 @@ const markSchema = (length: number, width: number) =>
     .prefault({});
 
 export const specSchema = z.strictObject({
-  name: z.string({ error: 'allowed: a text in quotes' }).min(1).max(60, { error: 'allowed: 1 to 60 characters' }).default('Polar dial').describe('dial name, engraved in the title block'),
+  name: freeText({ minLength: 1, maxLength: 60 }).default('Polar dial').describe('dial name, engraved in the title block'),
   site: z.strictObject({
     latitude: num({ min: -90, max: 90, unit: '°' }).describe('site latitude, degrees, north positive'),
     longitude: num({ min: -180, max: 180, unit: '°' }).describe('site longitude, degrees, east positive'),
     timezone: z.string({ error: 'allowed: an IANA time zone name in quotes, e.g. "Europe/Lisbon"' }).describe('IANA time zone name, e.g. "Europe/Lisbon"'),
-    place: z.string({ error: 'allowed: a text in quotes' }).max(60).optional().describe('place name for the title block (optional)'),
+    place: freeText({ maxLength: 60 }).optional().describe('place name for the title block (optional)'),
   }),
+  face: faceSection,
   dial: z
     .strictObject({
       reads: oneOf(['solar', 'standard']).default('solar').describe('solar: apparent solar time; standard: lines shifted to the zone standard meridian'),
@@ -135,6 +139,7 @@ export const specSchema = z.strictObject({
   check: checkSection,
   template: templateSection,
   pictures: picturesSection,
+  cutFiles: cutFilesSection,
   process: z
     .strictObject({
       method: oneOf(METHODS).default('laser').describe('laser, waterjet, router or print'),

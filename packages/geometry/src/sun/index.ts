@@ -11,3 +11,5 @@ export * from './localApparentNoon.ts';
 export * from './magneticDeclinationDeg.ts';
 export * from './describeDeclination.ts';
 export * from './sunAngularRadiusRad.ts';
+export * from './sunTrack.ts';
+export * from './sunAtTime.ts';

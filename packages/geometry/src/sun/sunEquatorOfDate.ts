@@ -1,12 +1,7 @@
 import { Body, Equator, MakeTime, Observer } from 'astronomy-engine';
 import { SpecError } from '../errors.ts';
+import { EARTH_EQUATORIAL_RADIUS_KM } from './earthFigure.ts';
 
-/**
- * Astronomy Engine's equatorial radius of the Earth, km (IERS 2003 value
- * 6378.1366 km, the constant EARTH_EQUATORIAL_RADIUS_KM in astronomy-engine
- * 2.1.19's source; it is not exported).
- */
-const EARTH_EQUATORIAL_RADIUS_KM = 6378.1366;
 
 /**
  * An "observer" at the centre of the Earth: on the equator (where the

@@ -24,6 +24,8 @@ import { boundedNumber } from '../boundedNumber.ts';
 export const ENGRAVE_PROGRAM_CHOICES = ['auto', 'ngc', 'laser', 'both', 'none'] as const;
 export type EngraveProgramChoice = (typeof ENGRAVE_PROGRAM_CHOICES)[number];
 
+export const COOLANT_CHOICES = ['off', 'mist', 'flood'] as const;
+
 /** A number field with bounds and unit (see boundedNumber). */
 const num = boundedNumber;
 
@@ -75,8 +77,22 @@ export const engraveSection = z
     feedMmPerMin: num({ min: 0, max: 100000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`cutting feed along the lines, mm/min (${PRESET}, e.g. aluminium 400)`),
     plungeMmPerMin: num({ min: 0, max: 100000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`plunge feed into the stock, mm/min (${PRESET}, e.g. aluminium 100)`),
     stepDownMm: num({ min: 0, max: 50, unit: 'mm', exclusiveMin: true }).optional().describe(`deepest single pass, mm (${PRESET}, e.g. aluminium 0.15)`),
-    safeZMm: num({ min: 0, max: 200, unit: 'mm', exclusiveMin: true }).default(5).describe('safe height above the stock top for the first and last moves and tool changes, mm'),
+    safeZMm: num({ min: 0, max: 200, unit: 'mm', exclusiveMin: true }).default(10).describe('safe height above the stock top for the first and last moves, the park move and tool changes, mm'),
     clearanceZMm: num({ min: 0, max: 200, unit: 'mm', exclusiveMin: true }).default(1).describe('height above the stock top for rapids between lines, mm (at most safeZMm)'),
+    entryZMm: num({ min: 0, max: 200, unit: 'mm' })
+      .default(0.2)
+      .describe('height above the stock top the tool rapids down to before it feeds onto the stock at the cutting feed and ramps in, mm (at most clearanceZMm; 0 = rapid to the top of a faced plate)'),
+    rampAngleDeg: num({ min: 0, max: 90, unit: 'degrees', exclusiveMin: true })
+      .optional()
+      .describe('angle of the ramp into the cut, degrees from the horizontal (default: the steepest whose descent rate is the plunge feed, asin(plunge / feed), at most 45); the ramp feed is lowered so the descent never exceeds the plunge feed'),
+    spindleDwellS: num({ min: 0, max: 60, unit: 's' }).default(3).describe('dwell (G4) after every spindle start so the spindle reaches speed before it cuts, seconds'),
+    toolWords: z.boolean().default(false).describe('write T1 M6 (T2 M6, T3 M6) tool words at the start, for a machine with a tool changer or a tool table; false = load the tool by hand'),
+    coolant: z
+      .enum(COOLANT_CHOICES, { error: `allowed: ${COOLANT_CHOICES.map((v) => JSON.stringify(v)).join(', ')}` })
+      .default('off')
+      .describe('coolant during milling: off, mist (M7) or flood (M8); M9 switches it off at the end'),
+    parkXMm: num({ min: -10000, max: 10000, unit: 'mm' }).optional().describe('X of the park move at the end, at safe height, mm in work coordinates (default 0)'),
+    parkYMm: num({ min: -10000, max: 10000, unit: 'mm' }).optional().describe('Y of the park move at the end, mm in work coordinates (default: the far edge of the stock, so the part is free to lift out)'),
     rapidMmPerMin: num({ min: 0, max: 200000, unit: 'mm/min', exclusiveMin: true }).default(3000).describe('rapid (G0) rate of the machine, mm/min, for the time estimate only'),
     laserPowerPct: num({ min: 0, max: 100, unit: '%', exclusiveMin: true }).optional().describe(`laser power while scoring, percent of the machine maximum (${PRESET}, e.g. acrylic 30)`),
     laserSpeedMmPerMin: num({ min: 0, max: 200000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`laser scoring speed, mm/min (${PRESET}, e.g. acrylic 3000)`),
@@ -85,6 +101,9 @@ export const engraveSection = z
   .superRefine((e, ctx) => {
     if (e.clearanceZMm > e.safeZMm) {
       ctx.addIssue({ code: 'custom', path: ['clearanceZMm'], input: e.clearanceZMm, message: `allowed: at most engrave.safeZMm (${e.safeZMm} mm)` });
+    }
+    if (e.entryZMm > e.clearanceZMm) {
+      ctx.addIssue({ code: 'custom', path: ['entryZMm'], input: e.entryZMm, message: `allowed: at most engrave.clearanceZMm (${e.clearanceZMm} mm)` });
     }
   })
   .prefault({});

@@ -1,6 +1,6 @@
 import { Body, Equator, Horizon, MakeTime, Observer, SiderealTime } from 'astronomy-engine';
 import { describe, expect, test } from 'vitest';
-import { equationOfTimeMin } from '../sun/equationOfTimeMin.ts';
+import { equationOfTimeMin } from './equationOfTimeMin.ts';
 import { instantAtHourAngle, sunOnDay, sunTrack, wrapPi } from './sunTrack.ts';
 
 const DEG = Math.PI / 180;

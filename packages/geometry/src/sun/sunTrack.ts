@@ -2,9 +2,10 @@ import { KM_PER_AU, MakeTime, Refraction, SiderealTime } from 'astronomy-engine'
 import { SpecError } from '../errors.ts';
 import { DEG, assertRange } from '../guards.ts';
 import type { Vec3 } from '../parts/mesh.ts';
-import { MS_PER_DAY, formatIsoDate } from '../sun/localDate.ts';
-import { sunEquatorOfDate } from '../sun/sunEquatorOfDate.ts';
-import { assertZone, zoneYearOffsets } from '../sun/zoneOffsets.ts';
+import { EARTH_EQUATORIAL_RADIUS_KM, EARTH_FLATTENING } from './earthFigure.ts';
+import { MS_PER_DAY, formatIsoDate } from './localDate.ts';
+import { sunEquatorOfDate } from './sunEquatorOfDate.ts';
+import { assertZone, zoneYearOffsets } from './zoneOffsets.ts';
 
 /**
  * Rate of Greenwich mean sidereal time, degrees per day of UT:
@@ -15,13 +16,6 @@ import { assertZone, zoneYearOffsets } from '../sun/zoneOffsets.ts';
  */
 const SIDEREAL_DEG_PER_DAY = 360.98564736629;
 
-/**
- * astronomy-engine 2.1.19's Earth figure (constants EARTH_EQUATORIAL_RADIUS_KM
- * and EARTH_FLATTENING in its source, used by its `terra()`; not exported):
- * equatorial radius 6378.1366 km (IERS 2003), polar/equatorial ratio.
- */
-const EARTH_EQUATORIAL_RADIUS_KM = 6378.1366;
-const EARTH_FLATTENING = 0.996647180302104;
 
 export type RefractionModel = 'none' | 'normal';
 
@@ -38,6 +32,12 @@ export interface SunTrackOptions {
   readonly year: number;
   /** simulate every n-th day of the year (default 1: every day) */
   readonly everyDays?: number;
+  /**
+   * only these local dates ('YYYY-MM-DD', all in `year`), for a caller that
+   * needs the Sun on a few days (a picture, one moment on the page) rather
+   * than the whole year; `everyDays` is then ignored
+   */
+  readonly dates?: readonly string[];
   /**
    * 'none' (default): the geometric (airless) direction; 'normal':
    * astronomy-engine's `Refraction('normal', altitude)` lifts the Sun as the
@@ -69,6 +69,8 @@ export interface SunTrack {
   readonly latitudeDeg: number;
   readonly longitudeDeg: number;
   readonly heightM: number;
+  /** IANA zone of the site (the days are its local days) */
+  readonly timezone: string;
   readonly standardOffsetHours: number;
   readonly refraction: RefractionModel;
   /** the observer's geocentric position in the meridian plane: [distance from the axis, height above the equator], AU */
@@ -139,8 +141,16 @@ export function sunTrack(options: SunTrackOptions): SunTrack {
   const days: SunDay[] = [];
   const first = Date.UTC(year, 0, 1);
   const count = Math.round((Date.UTC(year + 1, 0, 1) - first) / MS_PER_DAY);
-  for (let i = 0; i < count; i += every) {
+  const wanted = options.dates === undefined ? null : new Set(options.dates);
+  if (wanted) {
+    for (const date of wanted) {
+      const k = Math.round((Date.parse(`${date}T00:00:00Z`) - first) / MS_PER_DAY);
+      if (!(k >= 0 && k < count && formatIsoDate(first + k * MS_PER_DAY) === date)) throw new SpecError('date', date, `allowed: a date YYYY-MM-DD in ${year}`);
+    }
+  }
+  for (let i = 0; i < count; i += wanted ? 1 : every) {
     const label = first + i * MS_PER_DAY;
+    if (wanted && !wanted.has(formatIsoDate(label))) continue;
     const startMs = label - std * 3_600_000;
     const n = [0, 0.5, 1].map((f) => node(startMs + f * MS_PER_DAY));
     const ra0 = n[0].ra;
@@ -168,7 +178,7 @@ export function sunTrack(options: SunTrackOptions): SunTrack {
   const hKm = heightM / 1000;
   const observerAu: [number, number] = [((EARTH_EQUATORIAL_RADIUS_KM * c + hKm) * Math.cos(phi)) / KM_PER_AU, ((EARTH_EQUATORIAL_RADIUS_KM * s + hKm) * Math.sin(phi)) / KM_PER_AU];
 
-  return { latitudeDeg: lat, longitudeDeg: lon, heightM, standardOffsetHours: std, refraction, observerAu, days, ephemerisCalls: cache.size };
+  return { latitudeDeg: lat, longitudeDeg: lon, heightM, timezone: zone, standardOffsetHours: std, refraction, observerAu, days, ephemerisCalls: cache.size };
 }
 
 /**

@@ -1,0 +1,57 @@
+import type { Vec2 } from '../types.ts';
+import { faceSeesSun } from './faceSeesSun.ts';
+import { nodusPoint } from './nodusPoint.ts';
+import { nodusShadow } from './nodusShadow.ts';
+import type { FinEdge, PlanarFace } from './planarTypes.ts';
+import { hourLine } from './hourLine.ts';
+import type { PlanarGnomon } from './styleEdgeAnchor.ts';
+import { sunDirectionEnu } from './sunDirectionEnu.ts';
+
+/** A run of shadow points cast by one edge's nodus. */
+export interface NodusTrace {
+  readonly edge: FinEdge;
+  readonly points: readonly Vec2[];
+}
+
+/**
+ * The date line (a conic) of declination δ: the nodus shadow over the given
+ * hour angles (DESIGN §8: X = N − s (n · (N − O))/(n · s) at fixed δ), each
+ * point from the nodus on the edge that casts at that H (the edge of
+ * `hourLine`; both edges at H₀, the first taken), kept only where the face
+ * sees the Sun, and split into runs wherever the casting edge changes or
+ * the Sun leaves the face.
+ *
+ * @param hourAngles hour angles to sample, radians, ascending
+ */
+export function planarDateLine(face: PlanarFace, gnomon: PlanarGnomon, declinationRad: number, hourAngles: readonly number[], alongStyleMm?: number): readonly NodusTrace[] {
+  const phi = face.orientation.latitudeRad;
+  return nodusTraces(
+    face,
+    gnomon,
+    hourAngles.map((H) => ({ sun: sunDirectionEnu(phi, H, declinationRad), hourAngleRad: H })),
+    alongStyleMm,
+  );
+}
+
+/** Nodus shadows for a sequence of (Sun, hour angle) samples, split into runs (shared by date lines and mean-time curves). */
+export function nodusTraces(face: PlanarFace, gnomon: PlanarGnomon, samples: readonly { readonly sun: readonly [number, number, number]; readonly hourAngleRad: number }[], alongStyleMm?: number): readonly NodusTrace[] {
+  const runs: NodusTrace[] = [];
+  let current: { edge: FinEdge; points: Vec2[] } | null = null;
+  for (const { sun, hourAngleRad } of samples) {
+    const set = faceSeesSun(face, sun) ? hourLine(face, gnomon, hourAngleRad) : null;
+    const edge = set?.lines[0]?.edge;
+    const X = edge ? nodusShadow(face, nodusPoint(face, gnomon, edge, alongStyleMm), sun) : null;
+    if (!edge || !X) {
+      if (current && current.points.length > 1) runs.push(current);
+      current = null;
+      continue;
+    }
+    if (!current || current.edge !== edge) {
+      if (current && current.points.length > 1) runs.push(current);
+      current = { edge, points: [] };
+    }
+    current.points.push(X);
+  }
+  if (current && current.points.length > 1) runs.push(current);
+  return runs;
+}
