@@ -73,8 +73,8 @@ export const partsSection = z
           })
           .prefault({})
           .describe('print bed W × D × H, mm: a printed part larger than this is split into pieces that fit, joined by dovetail keys'),
-        wall: z
-          .union([z.literal(0), length(0.8, 50)], { error: 'allowed: 0 (a solid wedge) or a number from 0.8 mm to 50 mm' })
+        wall: length(0, 50)
+          .refine((v) => v === 0 || v >= 0.8, { error: 'allowed: 0 (a solid wedge) or a number from 0.8 mm to 50 mm (two 0.4 mm extrusion widths at least)' })
           .default(3)
           .describe('wall thickness of the hollow printed wedge (outer skin and inner ribs), mm; 0 prints it solid'),
         ribSpacing: length(10, 500).default(40).describe('largest gap between the inner ribs of the hollow wedge, mm (the seat skin bridges it)'),
