@@ -8,8 +8,7 @@
  */
 import { mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { buildFiles, readSpecFile } from '@umbrafab/cli';
 import { REPORT_SCHEMA_PATH, reportSchemaText } from './report-schema.ts';
 
 export const GOLDEN_SPECS = ['fixtures/demo.yaml', 'fixtures/golden-specs/south-waterjet.yaml', 'fixtures/golden-specs/router-brass.yaml', 'fixtures/golden-specs/print-body.yaml'];

@@ -3,7 +3,7 @@ import { existsSync, lstatSync, mkdirSync, mkdtempSync, readdirSync, readFileSyn
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { recoverInterrupted } from '../packages/cli/src/writeFilesAtomic.ts';
+import { recoverInterrupted } from '@umbrafab/cli';
 
 const ROOT = resolve(import.meta.dirname, '..');
 const BIN = join(ROOT, 'packages/cli/bin/umbrafab.js');

@@ -1,11 +1,7 @@
-import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
-import { parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-
-// geomagnetism is a dependency of packages/geometry (not of the root): resolve it from there.
-const requireFromGeometry = createRequire(new URL('../packages/geometry/package.json', import.meta.url));
-const geomagnetism = requireFromGeometry('geomagnetism') as { model(date: Date): { point(latLon: [number, number]): { decl: number } } };
+import { parseSpec } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
+import geomagnetism from 'geomagnetism';
 
 const sites = [
   { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' },

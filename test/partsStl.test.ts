@@ -2,9 +2,8 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { parseSpecText, readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { parseSpec } from '@umbrafab/geometry';
+import { buildFiles, parseSpecText, readSpecFile } from '@umbrafab/cli';
 import { runAdmesh } from './helpers/admesh.ts';
 import { readFileSync } from 'node:fs';
 

@@ -3,19 +3,9 @@ import { join, resolve } from 'node:path';
 import { inflateSync } from 'node:zlib';
 import { parse as parseYaml } from 'yaml';
 import { describe, expect, it } from 'vitest';
-import {
-  defaultPictureDate,
-  faceToWorld,
-  layoutDial,
-  parseSpec,
-  plateDrawing,
-  projectToPicture,
-  sunForPicture,
-  viewAssembly,
-  type Vec2,
-} from '../packages/geometry/src/index.ts';
-import { svgWidthMm, toAssemblySvg, toPng, toSvg } from '../packages/fabricate/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { defaultPictureDate, faceToWorld, layoutDial, parseSpec, plateDrawing, projectToPicture, sunForPicture, viewAssembly, type Vec2 } from '@umbrafab/geometry';
+import { svgWidthMm, toAssemblySvg, toPng, toSvg } from '@umbrafab/fabricate';
+import { buildFiles } from '@umbrafab/cli';
 import { expectClose } from './helpers/closeTo.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');

@@ -3,8 +3,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
-import { checkPlanar, layoutPlanar, parseSpec, planarGnomonSolid, type PlanarLayout } from '../packages/geometry/src/index.ts';
-import { buildAnyFiles } from '../packages/cli/src/buildFiles.ts';
+import { checkPlanar, layoutPlanar, parseSpec, planarGnomonSolid, type PlanarLayout } from '@umbrafab/geometry';
+import { buildAnyFiles } from '@umbrafab/cli';
 import { runAdmesh } from './helpers/admesh.ts';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 
@@ -74,7 +74,7 @@ describe('every planar face type: build, read back, check on the real gnomon', (
     const polar = await buildAnyFiles(parseSpec(raw));
     expect(polar.files.map((f) => f.name)).toContain('wedge.stl');
     expect((polar.report.spec as Record<string, unknown>).face).toBeUndefined();
-    const { layoutDial } = await import('../packages/geometry/src/index.ts');
+    const { layoutDial } = await import('@umbrafab/geometry');
     expect(() => layoutDial(specOf('garden-horizontal'))).toThrow(/face\.type/);
   });
 });

@@ -2,8 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import Ajv2020 from 'ajv/dist/2020.js';
 import { describe, expect, it } from 'vitest';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { buildFiles, readSpecFile } from '@umbrafab/cli';
 import { REPORT_SCHEMA_PATH, reportSchemaText } from '../scripts/report-schema.ts';
 import { GOLDEN_SPECS } from '../scripts/update-golden.ts';
 

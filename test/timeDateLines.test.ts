@@ -2,8 +2,8 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { calendarLines, parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { calendarLines, parseSpec } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
 import { ezdxfDump, type DxfDump } from './helpers/ezdxf.ts';
 
 const cases = [

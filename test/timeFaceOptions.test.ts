@@ -1,7 +1,7 @@
 import { Body, HourAngle, Observer } from 'astronomy-engine';
 import { describe, expect, it } from 'vitest';
-import { layoutDial, parseSpec, timeFaceExtras } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { layoutDial, parseSpec, timeFaceExtras } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
 
 const site = { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' };
 

@@ -1,12 +1,7 @@
-import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
-import { equationOfTimeMin, equationOfTimeTable, offsetHoursAt, parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-
-// astronomy-engine is a dependency of packages/geometry (not of the root): resolve it from there.
-const requireFromGeometry = createRequire(new URL('../packages/geometry/package.json', import.meta.url));
-type AstronomyEngine = typeof import('../packages/geometry/node_modules/astronomy-engine/astronomy.js');
-const { Body, Observer, SearchHourAngle } = requireFromGeometry('astronomy-engine') as AstronomyEngine;
+import { equationOfTimeMin, equationOfTimeTable, offsetHoursAt, parseSpec } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
+import { Body, Observer, SearchHourAngle } from 'astronomy-engine';
 
 type Row = { date: string; clock: string; daylightSaving: boolean; utcOffsetHours: number };
 

@@ -1,18 +1,10 @@
 import { readFileSync } from 'node:fs';
-import cliProgress from 'cli-progress';
-import { WEDGE_MAX_TILT_DEG, type DialLayout, type DialSpec } from '@umbrafab/geometry';
-import { toReportJson } from '@umbrafab/fabricate';
-import { buildContext, GENERATOR } from '../buildFiles.ts';
-import { partsOutputs } from '../outputs/partsOutputs.ts';
-import { plateOutputs } from '../outputs/plateOutputs.ts';
+import type { DialLayout, DialSpec } from '@umbrafab/geometry';
 import { utf8 } from '../outputs/outputTypes.ts';
-import { readSpecFile } from '../readSpec.ts';
-import { writeFilesAtomic, type OutputFile } from '../writeFilesAtomic.ts';
+import type { OutputFile } from '../writeFilesAtomic.ts';
 import { specBaseName } from './build.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
-/** The steepest wedge that can be printed. */
-const MAX_LATITUDE_DEG = WEDGE_MAX_TILT_DEG;
 /** Show a progress bar from this many latitudes on ("long runs"). */
 const PROGRESS_FROM = 4;
 
@@ -38,7 +30,9 @@ export const batchCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' })
       .option('progress', { type: 'boolean', default: true, describe: `show a progress bar on stderr (from ${PROGRESS_FROM} latitudes on)` }),
   run: async (args, io) => {
-    const latitudes = batchLatitudes(args.latitudes, args['latitudes-file']);
+    // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
+    const { WEDGE_MAX_TILT_DEG, buildContext, cliProgress, GENERATOR, partsOutputs, plateOutputs, readSpecFile, toReportJson, writeFilesAtomic } = await import('./batchDeps.ts');
+    const latitudes = batchLatitudes(args.latitudes, args['latitudes-file'], WEDGE_MAX_TILT_DEG);
     const base = readSpecFile(args.spec);
     const outDir: string = args.out ?? `out/${specBaseName(args.spec)}-batch`;
 
@@ -92,7 +86,7 @@ export const batchCommand: CommandModule = {
         latitudeDeg: b.lat,
         wedgeAngleDeg: round(b.wedgeAngleDeg, 3),
         wedgeFile,
-        plateFile: samePlate ? 'plate.dxf' : `plate-${tag}.dxf`,
+        plateFile: samePlate ? plateDxfName(b.plate) : plateDxfName(b.plate).replace(/\.dxf$/, `-${tag}.dxf`),
         riseMm: round(p.lengthMm * Math.sin((Math.abs(b.lat) * Math.PI) / 180), 1),
       });
     }
@@ -100,14 +94,14 @@ export const batchCommand: CommandModule = {
     const summary = {
       generator: GENERATOR,
       spec: base,
-      plate: samePlate ? { shared: true, file: 'plate.dxf', note: `one plate serves every latitude: its lines do not depend on the latitude; the title block names the spec's first listed latitude (${builds[0].lat}°)` } : { shared: false, note: 'one plate per latitude (the faces differ, e.g. across hemispheres)' },
+      plate: samePlate ? { shared: true, file: plateDxfName(builds[0].plate), note: `one plate serves every latitude: its lines do not depend on the latitude; the title block names the spec's first listed latitude (${builds[0].lat}°)` } : { shared: false, note: 'one plate per latitude (the faces differ, e.g. across hemispheres)' },
       latitudes: rows,
       files: [...files.map((f) => f.name), 'batch.json'],
     };
     files.push({ name: 'batch.json', bytes: utf8(toReportJson(summary)) });
     writeFilesAtomic(outDir, files, args.force);
 
-    io.out(`umbrafab: batch of ${rows.length} latitudes written to ${outDir}: ${samePlate ? 'one shared plate.dxf' : `${rows.length} plates`}, ${rows.length} wedges`);
+    io.out(`umbrafab: batch of ${rows.length} latitudes written to ${outDir}: ${samePlate ? `one shared ${plateDxfName(builds[0].plate)}` : `${rows.length} plates`}, ${rows.length} wedges`);
     io.out(formatTable(['latitude', 'wedge angle', 'rise over plate', 'wedge file', 'plate file'], rows.map((r) => [`${r.latitudeDeg}°`, `${r.wedgeAngleDeg.toFixed(2)}°`, `${r.riseMm.toFixed(1)} mm`, r.wedgeFile, r.plateFile])));
     if (samePlate) io.out(`note: ${summary.plate.note}`);
     return 0;
@@ -116,9 +110,11 @@ export const batchCommand: CommandModule = {
 
 /**
  * The latitudes of a batch from --latitudes and/or --latitudes-file: numbers
- * from −89° to 89° (a printable wedge), no repeats, at least one.
+ * from −maxDeg to maxDeg (the steepest printable wedge, WEDGE_MAX_TILT_DEG
+ * = 89°), no repeats, at least one.
  */
-export function batchLatitudes(list: unknown, file: unknown): number[] {
+export function batchLatitudes(list: unknown, file: unknown, maxDeg: number): number[] {
+  const MAX_LATITUDE_DEG = maxDeg;
   const items: { text: string; where: string }[] = [];
   if (list === undefined && file === undefined) throw new UsageError('--latitudes: missing; allowed: --latitudes 30,35,40 or --latitudes-file <file>');
   if (list !== undefined) {
@@ -158,6 +154,11 @@ export function batchLatitudes(list: unknown, file: unknown): number[] {
 /** "N35", "S33.9": a latitude for file names. */
 export function latitudeTag(lat: number): string {
   return `${lat < 0 ? 'S' : 'N'}${Math.abs(lat)}`;
+}
+
+/** The plate's cutting drawing among its files: plate.dxf, or plate-offset-K mm.dxf when pre-compensated. */
+function plateDxfName(files: readonly OutputFile[]): string {
+  return files.find((f) => /^plate(-offset-[0-9.]+mm)?\.dxf$/.test(f.name))?.name ?? 'plate.dxf';
 }
 
 /** What makes two plates the same, apart from the title text. */

@@ -1,7 +1,4 @@
 import { join } from 'node:path';
-import { buildAnyFiles } from '../buildFiles.ts';
-import { readSpecFile } from '../readSpec.ts';
-import { writeFilesAtomic } from '../writeFilesAtomic.ts';
 import type { CommandModule } from './commandTypes.ts';
 
 export const buildCommand: CommandModule = {
@@ -13,6 +10,8 @@ export const buildCommand: CommandModule = {
       .option('out', { type: 'string', alias: 'o', describe: 'output folder (default: out/<spec name>)' })
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
+    // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
+    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }] = await Promise.all([import('../buildFiles.ts'), import('../readSpec.ts'), import('../writeFilesAtomic.ts')]);
     const spec = readSpecFile(args.spec);
     const result = await buildAnyFiles(spec);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
@@ -25,9 +24,30 @@ export const buildCommand: CommandModule = {
     );
     // The polar build adds its producers' lines (a part split to fit the print bed) to the layout's notes.
     for (const note of 'notes' in result ? result.notes : result.layout.notes) io.out(`note: ${note}`);
+    for (const line of cutFileLines(result.report)) io.out(line);
     return 0;
   },
 };
+
+/**
+ * The console lines about the cutting drawings: which are pre-compensated
+ * (offset by kerf/2: the machine must not offset again), which are true size.
+ */
+export function cutFileLines(report: object): string[] {
+  const r = report as { plate?: unknown; parts?: unknown };
+  const plate = (r.plate as { cut?: { file?: string; drawn?: string; offsetMm?: number; kerfMm?: number } } | undefined)?.cut;
+  const gnomon = (r.parts as { gnomonDxf?: { file?: string; drawn?: string; offsetMm?: number } } | undefined)?.gnomonDxf;
+  const out: string[] = [];
+  for (const c of [plate, gnomon]) {
+    if (!c?.file) continue;
+    out.push(
+      c.drawn === 'precompensated'
+        ? `PRE-COMPENSATED: ${c.file} is offset by ${c.offsetMm} mm (kerf/2) for a machine with no offset of its own; do not apply a kerf offset again`
+        : `cut file: ${c.file} is true size (nominal); the machine or CAM applies its own kerf or tool offset`,
+    );
+  }
+  return out;
+}
 
 /** "fixtures/demo.yaml" → "demo". */
 export function specBaseName(path: string): string {

@@ -1,9 +1,5 @@
 import { join } from 'node:path';
-import { checkDial, layoutDial, marksFromPlate, parseSpec, type CheckResult } from '@umbrafab/geometry';
-import { checkTableText, toCheckJson, toCheckSvg } from '@umbrafab/fabricate';
-import { readPlateDxf } from '../readPlateDxf.ts';
-import { readSpecFile } from '../readSpec.ts';
-import { writeFilesAtomic } from '../writeFilesAtomic.ts';
+import type { CheckResult } from '@umbrafab/geometry';
 import { utf8 } from '../outputs/outputTypes.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
@@ -17,16 +13,36 @@ export const checkCommand: CommandModule = {
       .option('year', { type: 'number', describe: 'calendar year to simulate (default: calendar.year of the spec)' })
       .option('out', { type: 'string', alias: 'o', describe: 'also write check.json and check.svg to this folder' })
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
-  run: (args, io) => {
+  run: async (args, io) => {
+    // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick; the DXF reader only with --plate.
+    const { checkDial, checkPlanar, checkTableText, faceOrientationOf, layoutDial, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, readSpecFile, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
     let spec = readSpecFile(args.spec);
     if (args.year !== undefined) {
       const year = Number(args.year);
       if (!Number.isInteger(year) || year < 1900 || year > 2200) throw new UsageError(`--year: got ${args.year}; allowed: a whole year from 1900 to 2200`);
       spec = parseSpec({ ...spec, calendar: { ...spec.calendar, year } });
     }
+    if (faceOrientationOf(spec)) {
+      // Horizontal, wall, meridian and equatorial faces: the planar check on their own gnomon.
+      if (args.plate !== undefined) throw new UsageError('--plate: reading marks back from a DXF is for the polar plate only; check a planar face from its spec');
+      const planar = checkPlanar(layoutPlanar(spec));
+      io.out(planarCheckText(planar));
+      if (args.out !== undefined) {
+        const dir = String(args.out);
+        writeFilesAtomic(dir, [{ name: 'check.json', bytes: utf8(toReportJson(planar)) }], Boolean(args.force));
+        io.out(`umbrafab: wrote check.json to ${join(dir)}`);
+      }
+      if (!planar.pass) {
+        const f = planar.failures[0];
+        io.err(f ? `umbrafab check: line ${f.label} ${f.edge} is ${Math.abs(f.errorMm).toFixed(4)} mm off the simulated shadow on ${f.date} (tolerance ${planar.toleranceMm} mm)` : 'umbrafab check: a curve lies beyond its tolerance');
+        return 1;
+      }
+      return 0;
+    }
     const layout = layoutDial(spec);
     let result: CheckResult;
     if (args.plate !== undefined) {
+      const { readPlateDxf } = await import('../readPlateDxf.ts');
       const plate = readPlateDxf(String(args.plate));
       const found = marksFromPlate(layout, plate.lines);
       result = checkDial(layout, { drawn: found.drawn, source: 'plate' });
