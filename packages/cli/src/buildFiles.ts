@@ -11,7 +11,7 @@ export interface BuildResult {
   readonly layout: DialLayout;
   readonly files: readonly OutputFile[];
   readonly report: Report;
-  /** the layout's notes and the producers', in producer order: the console lines of a build */
+  /** the layout's notes, then the producers' (also in report.json) */
   readonly notes: readonly string[];
 }
 

@@ -2,6 +2,7 @@ export * from './process/roundTo.ts';
 export * from './process/rectVertices.ts';
 export * from './dxf/toDxf.ts';
 export * from './svg/toSvg.ts';
+export * from './svg/previewFrame.ts';
 export * from './report/toReportJson.ts';
 export * from './engrave/index.ts';
 export * from './stl/index.ts';

@@ -15,7 +15,7 @@ export interface BuildContext {
 export interface ProducerResult<R extends object = object> {
   readonly files: readonly OutputFile[];
   readonly report: R;
-  /** console lines for the user (a part split to fit the bed, …), also listed in report.json's notes */
+  /** notes for the user: report.json's notes (after the layout's) and the console */
   readonly notes?: readonly string[];
 }
 

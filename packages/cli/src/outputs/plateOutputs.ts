@@ -1,5 +1,5 @@
 import type { Hemisphere, Mark } from '@umbrafab/geometry';
-import { toSvg } from '@umbrafab/fabricate';
+import { toSvg, type SvgOptions } from '@umbrafab/fabricate';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
 import { cutPartFiles, cutParts, type CutFileSection } from './cutParts.ts';
 
@@ -91,6 +91,11 @@ export const plateOutputs: Producer<PlateSections> = async (ctx) => {
 };
 
 /** The text of preview.svg (shared with the pictures, which render it to PNG). */
-export function previewSvgText({ spec, layout, drawing }: BuildContext): string {
-  return toSvg(drawing, { caption: `${spec.name} - preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+export function previewSvgText(ctx: BuildContext): string {
+  return toSvg(ctx.drawing, previewSvgOptions(ctx));
+}
+
+/** How preview.svg is drawn; with `previewFrame` the page finds the plate in it. */
+export function previewSvgOptions({ spec, layout }: BuildContext): SvgOptions {
+  return { caption: `${spec.name} - preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` };
 }
