@@ -60,7 +60,7 @@ describe('serve: where it listens', () => {
   });
 
   it('refuses a non-loopback host without --allow-remote, and warns with it', () => {
-    expect(bindPolicy({})).toEqual({ host: '127.0.0.1' });
+    expect(bindPolicy({})).toEqual({ host: '127.0.0.1', hostCheck: { names: [], ipLiterals: false } });
     expect(() => bindPolicy({ host: '0.0.0.0' })).toThrow(/--host: 0\.0\.0\.0 is not a loopback address; allowed: 127\.0\.0\.1.*--allow-remote/);
     expect(() => bindPolicy({ host: '192.168.1.20', allowRemote: false })).toThrow(/not a loopback address/);
     const remote = bindPolicy({ host: '0.0.0.0', allowRemote: true });

@@ -22,7 +22,7 @@ export const buildCommand: CommandModule = {
     io.out(
       `umbrafab: wrote ${result.files.length} files (${(total / 1024).toFixed(1)} KiB) to ${outDir}: ${result.files.map((f) => f.name).join(', ')} — plate ${p.widthMm} x ${p.lengthMm} mm, ${result.layout.marks.length} marks, ${spec.process.method} kerf ${spec.process.kerf} mm`,
     );
-    for (const note of result.layout.notes) io.out(`note: ${note}`);
+    for (const note of 'notes' in result ? result.notes : result.layout.notes) io.out(`note: ${note}`);
     for (const line of cutFileLines(result.report)) io.out(line);
     return 0;
   },

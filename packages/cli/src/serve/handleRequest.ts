@@ -1,16 +1,17 @@
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import type { IncomingMessage, ServerResponse } from 'node:http';
+import { isIP } from 'node:net';
 import { basename, dirname } from 'node:path';
 import { isSpecError, parseSpec, type DialSpec } from '@umbrafab/geometry';
 import { writeFilesAtomic } from '../writeFilesAtomic.ts';
-import { isLoopbackHost } from './bindPolicy.ts';
+import { isLoopbackHost, type HostCheck } from './bindPolicy.ts';
 import type { BuildCache } from './buildCache.ts';
 import { formValuesToSpec, specToFormValues, type FormValue } from './formValues.ts';
 import { HttpError } from './httpError.ts';
 import { plateToPreview, previewFrame } from '@umbrafab/fabricate';
 import { previewSvgOptions } from '../outputs/plateOutputs.ts';
-import { MAX_BODY_BYTES, readJsonBody } from './readJsonBody.ts';
+import { BodyAbortedError, MAX_BODY_BYTES, readJsonBody } from './readJsonBody.ts';
 import { sceneMeshes } from './sceneMeshes.ts';
 import { specFields } from './specFields.ts';
 import { specToCommentedYaml } from './specYaml.ts';
@@ -31,8 +32,8 @@ export interface ServeContext {
   readonly initialError: string | null;
   /** the port actually bound (for the Host header check) */
   readonly port: () => number;
-  /** false: only requests naming a loopback host are served (DNS-rebinding guard) */
-  readonly allowRemote: boolean;
+  /** which Host headers are answered (DNS-rebinding guard), from bindPolicy */
+  readonly hostCheck: HostCheck;
   readonly maxBodyBytes?: number;
   readonly log: (line: string) => void;
 }
@@ -91,18 +92,33 @@ export async function handleRequest(ctx: ServeContext, req: IncomingMessage, res
       if (e.status === 413) res.setHeader('Connection', 'close');
       return sendJson(res, e.status, { ok: false, error: { field: null, message: e.message } });
     }
+    if (e instanceof BodyAbortedError) {
+      // A slow or vanished upload: one line in the log, and the connection is already closed or closing.
+      ctx.log(`umbrafab serve: ${e.message}`);
+      if (!res.headersSent && !res.destroyed) return sendJson(res, 408, { ok: false, error: { field: null, message: 'request body: did not arrive in time' } });
+      return;
+    }
     ctx.log(`umbrafab serve: internal error: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
     return sendJson(res, 500, { ok: false, error: { field: null, message: `internal error: ${e instanceof Error ? e.message : String(e)}` } });
   }
 }
 
-/** Only loopback Host names unless --allow-remote: a page on another site cannot reach us through a rebound DNS name. */
+/**
+ * Answer only a Host naming this server: a loopback name or address, and with
+ * --allow-remote an IP address literal or a name given with --allowed-host,
+ * with this server's port. A page on another site that reaches us through a
+ * rebound DNS name sends its own name, and is refused.
+ */
 function checkHost(ctx: ServeContext, req: IncomingMessage): void {
-  if (ctx.allowRemote) return;
+  const { names, ipLiterals } = ctx.hostCheck;
+  if (names === null) return;
   const host = String(req.headers.host ?? '');
   const m = /^(\[[^\]]+\]|[^:]+)(?::(\d+))?$/.exec(host);
-  if (!m || !isLoopbackHost(m[1]) || (m[2] !== undefined && Number(m[2]) !== ctx.port())) {
-    throw new HttpError(403, `Host ${JSON.stringify(host)}: allowed: 127.0.0.1, localhost or [::1] with this server's port`);
+  const name = m ? m[1].replace(/^\[|\]$/g, '').toLowerCase().replace(/\.$/, '') : '';
+  const known = m !== null && (isLoopbackHost(name) || (ipLiterals && isIP(name) !== 0) || names.some((n) => n.replace(/\.$/, '') === name));
+  if (!known || (m[2] !== undefined && Number(m[2]) !== ctx.port())) {
+    const allowed = ['127.0.0.1', 'localhost', '[::1]', ...(ipLiterals ? ['an IP address of this machine'] : []), ...names].join(', ');
+    throw new HttpError(403, `Host ${JSON.stringify(host)}: allowed: ${allowed}, with this server's port`);
   }
 }
 
