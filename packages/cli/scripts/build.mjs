@@ -92,14 +92,13 @@ export async function buildDist() {
     for (const f of listFiles(tmp).sort()) hash.update(relative(tmp, f)).update('\0').update(readFileSync(f)).update('\0');
     const name = hash.digest('hex').slice(0, 16);
     const dir = join(DIST, name);
-    if (existsSync(join(dir, 'main.mjs'))) rmSync(tmp, { recursive: true, force: true });
-    else {
-      rmSync(dir, { recursive: true, force: true });
+    // A build folder appears whole (one rename) and is never replaced: another
+    // process may be loading its chunks. If it exists, it holds these very bytes.
+    if (!existsSync(join(dir, 'main.mjs'))) {
       try {
         renameSync(tmp, dir);
       } catch (e) {
-        if (!existsSync(join(dir, 'main.mjs'))) throw e; // another process put the same build there first
-        rmSync(tmp, { recursive: true, force: true });
+        if (!existsSync(join(dir, 'main.mjs'))) throw e; // not another process's identical build
       }
     }
     const current = { format: FORMAT, dir: name, inputs: [...new Set(inputs)].sort().map((f) => stamp(f)) };
