@@ -43,17 +43,17 @@ describe('umbrafab batch', () => {
     expect(r.code).toBe(0);
     const names = readdirSync(out).sort();
     expect(names.filter((n) => n.endsWith('.dxf') && n.startsWith('plate'))).toEqual(['plate.dxf']);
-    expect(names.filter((n) => n.startsWith('wedge-'))).toEqual(lats.map((l) => `wedge-N${l}.stl`));
+    expect(names.filter((n) => n.startsWith('stand-') && n.endsWith('.stl'))).toEqual(lats.map((l) => `stand-N${l}.stl`));
     const summary = JSON.parse(readFileSync(join(out, 'batch.json'), 'utf8'));
     expect(summary.plate.shared).toBe(true);
     for (const lat of lats) {
       // The tilt equals |latitude| (docs/design.md §4), read back from the STL's seat facets.
-      expectClose(seatTiltDeg(readFileSync(join(out, `wedge-N${lat}.stl`))), lat, 0.01, `wedge-N${lat}.stl seat tilt`, '°');
+      expectClose(seatTiltDeg(readFileSync(join(out, `stand-N${lat}.stl`))), lat, 0.01, `stand-N${lat}.stl seat tilt`, '°');
       expect(summary.latitudes.find((x: { latitudeDeg: number }) => x.latitudeDeg === lat).wedgeAngleDeg).toBe(lat);
     }
     // Summary table: a header and one row per latitude.
     expect(r.out).toMatch(/latitude\s+wedge angle/);
-    for (const lat of lats) expect(r.out).toMatch(new RegExp(`^${lat}°\\s+${lat}\\.00°.*wedge-N${lat}\\.stl\\s+plate\\.dxf$`, 'm'));
+    for (const lat of lats) expect(r.out).toMatch(new RegExp(`^${lat}°\\s+${lat}\\.00°.*stand-N${lat}\\.stl\\s+plate\\.dxf$`, 'm'));
   });
 
   it('makes one plate per latitude when the hemispheres differ', async () => {
@@ -61,7 +61,7 @@ describe('umbrafab batch', () => {
     const r = await runCli(['batch', DEMO, '--latitudes', '35,-35', '--out', out, '--no-progress']);
     expect(r.code).toBe(0);
     expect(readdirSync(out).filter((n) => n.endsWith('.dxf') && n.startsWith('plate')).sort()).toEqual(['plate-N35.dxf', 'plate-S35.dxf']);
-    expectClose(seatTiltDeg(readFileSync(join(out, 'wedge-S35.stl'))), 35, 0.01, 'southern wedge tilt', '°');
+    expectClose(seatTiltDeg(readFileSync(join(out, 'stand-S35.stl'))), 35, 0.01, 'southern wedge tilt', '°');
   });
 
   it('reads latitudes from a file with comments', async () => {
@@ -70,7 +70,7 @@ describe('umbrafab batch', () => {
     writeFileSync(list, '# shop list\n30, 32.5\n34 # south coast\n');
     const r = await runCli(['batch', DEMO, '--latitudes-file', list, '--out', join(dir, 'out'), '--no-progress']);
     expect(r.code).toBe(0);
-    expect(readdirSync(join(dir, 'out')).filter((n) => n.startsWith('wedge-'))).toEqual(['wedge-N30.stl', 'wedge-N32.5.stl', 'wedge-N34.stl']);
+    expect(readdirSync(join(dir, 'out')).filter((n) => n.startsWith('stand-') && n.endsWith('.stl'))).toEqual(['stand-N30.stl', 'stand-N32.5.stl', 'stand-N34.stl']);
   });
 
   for (const [bad, why] of [

@@ -34,5 +34,8 @@ export * from './parts/index.ts';
 export * from './spec/sections/partsSection.ts';
 export * from './shadow/index.ts';
 export * from './assembly/index.ts';
+export * from './stand/index.ts';
+export * from './spec/sections/standSection.ts';
+export * from './spec/materials.ts';
 export * from './planar/index.ts';
 export * from './spec/sections/faceSection.ts';

@@ -5,6 +5,8 @@ import type { OutputFile } from '../writeFilesAtomic.ts';
 import { specBaseName } from './build.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
+/** The files that change with the latitude: the printed wedge, or the cut stand. */
+const LATITUDE_FILES: readonly string[] = ['wedge.stl', 'stand.dxf', 'stand.stl'];
 /** Show a progress bar from this many latitudes on ("long runs"). */
 const PROGRESS_FROM = 4;
 
@@ -12,7 +14,10 @@ const PROGRESS_FROM = 4;
 export interface BatchRow {
   readonly latitudeDeg: number;
   readonly wedgeAngleDeg: number;
+  /** the latitude's wedge (printed) or assembled stand (cut processes) */
   readonly wedgeFile: string;
+  /** every file made for this latitude (wedge.stl, or stand.dxf and stand.stl, tagged) */
+  readonly latitudeFiles: readonly string[];
   readonly plateFile: string;
   /** rise of the plate's pole-ward edge over its lower edge, mm: length × sin(tilt) (docs/design.md §4) */
   readonly riseMm: number;
@@ -20,7 +25,7 @@ export interface BatchRow {
 
 export const batchCommand: CommandModule = {
   command: 'batch <spec>',
-  describe: 'write one plate and a latitude wedge for each of several latitudes (the plate once when it is the same for all)',
+  describe: 'write one plate and a latitude wedge (print) or stand (laser, waterjet, router) for each of several latitudes (the plate once when it is the same for all)',
   builder: (y) =>
     y
       .positional('spec', { type: 'string', demandOption: true, describe: 'dial spec file (.yaml or .json); its site.latitude is replaced by each listed latitude' })
@@ -31,7 +36,7 @@ export const batchCommand: CommandModule = {
       .option('progress', { type: 'boolean', default: true, describe: `show a progress bar on stderr (from ${PROGRESS_FROM} latitudes on)` }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
-    const { WEDGE_MAX_TILT_DEG, buildContext, cliProgress, GENERATOR, partsOutputs, plateOutputs, readSpecFile, toReportJson, writeFilesAtomic } = await import('./batchDeps.ts');
+    const { WEDGE_MAX_TILT_DEG, buildContext, cliProgress, GENERATOR, partsOutputs, plateOutputs, readSpecFile, standOutputs, toReportJson, writeFilesAtomic } = await import('./batchDeps.ts');
     const latitudes = batchLatitudes(args.latitudes, args['latitudes-file'], WEDGE_MAX_TILT_DEG);
     const base = readSpecFile(args.spec);
     const outDir: string = args.out ?? `out/${specBaseName(args.spec)}-batch`;
@@ -52,7 +57,8 @@ export const batchCommand: CommandModule = {
         const { layout } = ctx;
         const plate = (await plateOutputs(ctx)).files;
         const parts = await partsOutputs(ctx);
-        builds.push({ lat, spec, layout, plate, parts: parts.files, wedgeAngleDeg: parts.report.wedge.angleDeg });
+        const stand = await standOutputs(ctx);
+        builds.push({ lat, spec, layout, plate, parts: [...parts.files, ...stand.files], wedgeAngleDeg: parts.report.wedge.angleDeg });
         bar?.increment(1, { lat: latitudeTag(lat) });
       }
     } finally {
@@ -63,7 +69,6 @@ export const batchCommand: CommandModule = {
     const samePlate = builds.every((b) => faceKey(b.layout) === faceKey(builds[0].layout));
     const files: OutputFile[] = [];
     const rows: BatchRow[] = [];
-    const pick = (list: readonly OutputFile[], name: string) => list.find((f) => f.name === name);
     if (samePlate) {
       for (const f of builds[0].plate) files.push(f);
     }
@@ -71,12 +76,13 @@ export const batchCommand: CommandModule = {
     for (const b of builds) {
       const tag = latitudeTag(b.lat);
       if (!samePlate) for (const f of b.plate) files.push({ name: f.name.replace(/\.(\w+)$/, `-${tag}.$1`), bytes: f.bytes });
-      const wedge = pick(b.parts, 'wedge.stl');
-      if (!wedge) throw new UsageError(`parts.write: the spec writes no wedge.stl; allowed: "auto" or a list that includes "wedge.stl" for umbrafab batch`);
-      const wedgeFile = `wedge-${tag}.stl`;
-      files.push({ name: wedgeFile, bytes: wedge.bytes });
+      const own = b.parts.filter((f) => LATITUDE_FILES.includes(f.name));
+      if (own.length === 0) throw new UsageError(`parts.write: the spec writes no wedge.stl, stand.dxf or stand.stl; allowed: "auto" or a list that includes one of them for umbrafab batch`);
+      const tagged = own.map((f) => ({ name: f.name.replace(/\.(\w+)$/, `-${tag}.$1`), bytes: f.bytes }));
+      files.push(...tagged);
+      const wedgeFile = tagged.find((f) => f.name.endsWith('.stl'))?.name ?? tagged[0].name;
       for (const f of b.parts) {
-        if (f.name === 'wedge.stl' || f.name === 'body.stl') continue;
+        if (LATITUDE_FILES.includes(f.name) || f.name === 'body.stl') continue;
         const prev = sharedParts.get(f.name);
         if (!prev) sharedParts.set(f.name, f.bytes);
         else if (!sameBytes(prev, f.bytes)) throw new Error(`batch: ${f.name} differs between latitudes; it should not depend on the latitude`);
@@ -86,6 +92,7 @@ export const batchCommand: CommandModule = {
         latitudeDeg: b.lat,
         wedgeAngleDeg: round(b.wedgeAngleDeg, 3),
         wedgeFile,
+        latitudeFiles: tagged.map((f) => f.name),
         plateFile: samePlate ? plateDxfName(b.plate) : plateDxfName(b.plate).replace(/\.dxf$/, `-${tag}.dxf`),
         riseMm: round(p.lengthMm * Math.sin((Math.abs(b.lat) * Math.PI) / 180), 1),
       });

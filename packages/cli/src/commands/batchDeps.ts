@@ -8,5 +8,6 @@ export { toReportJson } from '@umbrafab/fabricate';
 export { buildContext, GENERATOR } from '../buildFiles.ts';
 export { partsOutputs } from '../outputs/partsOutputs.ts';
 export { plateOutputs } from '../outputs/plateOutputs.ts';
+export { standOutputs } from '../outputs/standOutputs.ts';
 export { readSpecFile } from '../readSpec.ts';
 export { writeFilesAtomic } from '../writeFilesAtomic.ts';

@@ -8,6 +8,8 @@ import { installSection } from './sections/installSection.ts';
 import { partsSection } from './sections/partsSection.ts';
 import { templateSection } from './sections/templateSection.ts';
 import { picturesSection } from './sections/picturesSection.ts';
+import { standSection } from './sections/standSection.ts';
+import { MATERIALS } from './materials.ts';
 import { faceSection } from './sections/faceSection.ts';
 
 /**
@@ -41,7 +43,7 @@ const autoLength = z.union([z.literal('auto'), num({ min: 20, max: 3000, unit: '
 export const METHODS = ['laser', 'waterjet', 'router', 'print'] as const;
 export type ProcessMethod = (typeof METHODS)[number];
 
-export const MATERIALS = ['aluminium', 'brass', 'stainless', 'steel', 'acrylic', 'hardwood', 'plywood', 'slate', 'pla', 'petg'] as const;
+export { MATERIALS } from './materials.ts';
 
 export const NUMERAL_STYLES = ['arabic', 'arabic24', 'roman'] as const;
 
@@ -134,6 +136,7 @@ export const specSchema = z.strictObject({
     })
     .prefault({}),
   parts: partsSection,
+  stand: standSection,
   engrave: engraveSection,
   install: installSection,
   check: checkSection,
