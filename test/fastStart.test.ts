@@ -84,12 +84,11 @@ describe('the bin loads only what a command needs', () => {
     });
   }
 
-  it('the probe sees the heavy modules when an output needs them (the demo build writes a PDF and PNGs; a printed body needs the mesh kernel)', () => {
+  it('the probe sees the heavy modules when an output needs them (the demo build writes a PDF and PNGs; a printed body's booleans need the mesh kernel)', () => {
     const demo = loaded(['build', join(ROOT, 'fixtures/demo.yaml'), '--out', join(work, 'demo'), '--force']);
     expect(demo.status, demo.stderr).toBe(0);
     expect(demo.urls.some((u) => HEAVY_PACKAGES['the PDF writer (pdfkit)'].test(u))).toBe(true);
     expect(demo.urls.some((u) => HEAVY_PACKAGES['the rasteriser (@resvg/resvg-js)'].test(u))).toBe(true);
-    expect(demo.urls.some((u) => HEAVY_PACKAGES['the mesh kernel (manifold-3d)'].test(u))).toBe(false);
     expect(holds(distSources(demo.urls), 'fabricate/src/template/toTemplatePdf.ts')).toBe(true);
     expect(holds(distSources(demo.urls), 'fabricate/src/engrave/')).toBe(true);
     const body = loaded(['build', join(ROOT, 'fixtures/golden-specs/print-body.yaml'), '--out', join(work, 'body'), '--force']);
