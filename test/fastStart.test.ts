@@ -84,7 +84,7 @@ describe('the bin loads only what a command needs', () => {
     });
   }
 
-  it('the probe sees the heavy modules when an output needs them (the demo build writes a PDF and PNGs; a printed body's booleans need the mesh kernel)', () => {
+  it('the probe sees the heavy modules when an output needs them (the demo build writes a PDF and PNGs; the booleans of a printed body need the mesh kernel)', () => {
     const demo = loaded(['build', join(ROOT, 'fixtures/demo.yaml'), '--out', join(work, 'demo'), '--force']);
     expect(demo.status, demo.stderr).toBe(0);
     expect(demo.urls.some((u) => HEAVY_PACKAGES['the PDF writer (pdfkit)'].test(u))).toBe(true);
