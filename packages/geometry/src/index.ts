@@ -4,6 +4,8 @@ export * from './guards.ts';
 export * from './spec/schema.ts';
 export * from './spec/parseSpec.ts';
 export * from './spec/parseClock.ts';
+export * from './spec/derivedDefaults.ts';
+export * from './spec/textFields.ts';
 export * from './spec/didYouMean.ts';
 export * from './text/strokeText.ts';
 export * from './polar/markOffset.ts';

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { boundedNumber } from './boundedNumber.ts';
+import { clockField } from './textFields.ts';
 import { freeText } from './freeText.ts';
 import { checkSection } from './sections/checkSection.ts';
 import { cutFilesSection } from './sections/cutFilesSection.ts';
@@ -30,10 +31,7 @@ function oneOf<const T extends readonly [string, ...string[]]>(values: T) {
   return z.enum(values, { error: `allowed: ${values.map((v) => JSON.stringify(v)).join(', ')}` });
 }
 
-const HHMM = /^([01]\d|2[0-3]):([0-5]\d)$/;
-const clock = z.string({ error: 'allowed: a time "HH:MM" in quotes, e.g. "07:00"' }).regex(HHMM, {
-  error: 'allowed: a time "HH:MM" with hours 00-23 and minutes 00-59, e.g. "07:00"',
-});
+const clock = clockField('07:00');
 
 /** A length or the word auto (sized from the layout). */
 const autoLength = z.union([z.literal('auto'), num({ min: 20, max: 3000, unit: 'mm' })], {
@@ -96,8 +94,8 @@ export const specSchema = z.strictObject({
     .prefault({}),
   hours: z
     .strictObject({
-      from: clock.default('07:00').describe('first mark, "HH:MM"'),
-      to: clock.default('17:00').describe('last mark, "HH:MM"'),
+      from: clock.default('07:00').describe('first mark, "HH:MM" (or "H:MM")'),
+      to: clock.default('17:00').describe('last mark, "HH:MM" (or "H:MM")'),
       step: z.union([z.literal(60), z.literal(30), z.literal(15)], { error: 'allowed: 60, 30 or 15 (minutes)' }).default(15).describe('finest mark spacing in minutes: 60, 30 or 15'),
       maxHourAngle: num({ min: 30, max: 85, unit: '°' }).default(75).describe('widest hour angle a mark may have, degrees (75° puts 07:00 at 3.73 gnomon heights)'),
     })
