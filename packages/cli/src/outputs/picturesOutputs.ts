@@ -97,7 +97,7 @@ async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[];
   const date = pics.date ?? defaultPictureDate(layout);
   const sun = sunForPicture(layout, date, pics.time);
   const picture = viewAssembly(layout, drawing, sun, { viewAzimuthDeg: pics.viewAzimuth, viewElevationDeg: pics.viewElevation });
-  const assemblySvg = toAssemblySvg(picture, { title: `${spec.name} on its ${Math.abs(spec.site.latitude)}° wedge, ${date}, shadow on ${pics.time}` });
+  const assemblySvg = toAssemblySvg(picture, { title: `${spec.name} on its ${Math.abs(spec.site.latitude)}° ${picture.assembly.stand !== null ? 'flat-pack stand' : 'wedge'}, ${date}, shadow on ${pics.time}` });
   const assemblyFit = fitPixelBudget(picture.widthMm, picture.heightMm, ppm);
   const [previewPng, assemblyPng] = await Promise.all([previewPngJob, toPngAsync(assemblySvg, { pxPerMm: assemblyFit.pxPerMm })]);
   const lowered = [

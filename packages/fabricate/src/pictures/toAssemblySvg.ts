@@ -11,10 +11,12 @@ export interface AssemblySvgOptions {
 
 export const ASSEMBLY_SVG_DEFAULTS: AssemblySvgOptions = { decimals: 2, title: '' };
 
-/** Base colours, sRGB, of fully lit faces (a light PLA wedge, a bare aluminium plate and gnomon). */
+/** Base colours, sRGB, of fully lit faces (a light PLA wedge, a sheet stand, a bare aluminium plate and gnomon, steel fixings). */
 const PART_RGB: Readonly<Record<AssemblyPartName, readonly [number, number, number]>> = {
   wedge: [168, 186, 204],
+  stand: [196, 198, 200],
   plate: [226, 224, 218],
+  fixings: [120, 124, 130],
   gnomon: [214, 211, 203],
 };
 

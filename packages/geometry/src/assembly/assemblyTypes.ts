@@ -16,7 +16,7 @@ export interface Facet {
   readonly normal: Vec3;
 }
 
-export type AssemblyPartName = 'wedge' | 'plate' | 'gnomon';
+export type AssemblyPartName = 'wedge' | 'stand' | 'plate' | 'fixings' | 'gnomon';
 
 /** A part placed in the world: its flat faces (triangles or polygons). */
 export interface PlacedPart {

@@ -6,6 +6,9 @@ import type { WedgePart } from '../parts/wedgeSolid.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { Hemisphere, Vec2 } from '../types.ts';
 import type { FaceFrame, Facet, PlacedPart } from './assemblyTypes.ts';
+import { flatStand, type SizedStand } from '../stand/flatStand.ts';
+import { placePoint } from '../stand/placeStandPart.ts';
+import { standFacets } from './standFacets.ts';
 
 /** The dial as it stands: wedge on level ground, plate on the wedge's seat, gnomon in the plate's slots. */
 export interface Assembly {
@@ -16,8 +19,12 @@ export interface Assembly {
   readonly face: FaceFrame;
   /** the plate outline on the face, face coordinates, CCW */
   readonly faceOutline: readonly Vec2[];
-  /** the wedge as built, in its own frame (for reports) */
-  readonly wedge: WedgePart;
+  /** the wedge as built, in its own frame (for reports), or null on a flat-pack stand */
+  readonly wedge: WedgePart | null;
+  /** the flat-pack stand (cut processes), or null on a printed wedge */
+  readonly stand: SizedStand | null;
+  /** what stands on the ground, in the wedge's or stand's frame (x across, y toward the pole), mm */
+  readonly footprint: { readonly xMinMm: number; readonly xMaxMm: number; readonly yMinMm: number; readonly yMaxMm: number };
 }
 
 /** Segments per quarter circle of the plate's rounded corners in the picture. */
@@ -26,7 +33,9 @@ const CORNER_SEGMENTS = 6;
 /**
  * Place the three parts of a dial in the world frame (X east, Y north, Z up,
  * ground Z = 0, mm) for its spec's site:
- * - the latitude wedge and the gnomon exactly as wedge.stl and gnomon.stl
+ * - the flat-pack stand (cut processes: as stand.stl, with its anchors and
+ *   the plate's screws, washers and nuts) or the latitude wedge (print),
+ *   and the gnomon exactly as stand.stl, wedge.stl and gnomon.stl
  *   are built (`partsPlan`, `dialWedge`, `dialGnomon`), placed with the parts'
  *   own maps (`faceToWedge`: the plate on the seat against the lip;
  *   `gnomonOnPlate`: the fin on the face, tabs in the slots);
@@ -44,9 +53,11 @@ export function placeAssembly(layout: DialLayout): Assembly {
   const t = plate.thicknessMm;
   // The very parts gnomon.stl and wedge.stl are written from, and their placement (parts/dialParts.ts).
   const plan = partsPlan(layout);
-  const wedge = dialWedge(plan, layout);
+  // Cut processes stand on the flat-pack stand (stand.dxf / stand.stl), printed dials on the wedge.
+  const stand = plan.files.includes('stand.dxf') || plan.files.includes('stand.stl') ? flatStand(layout) : null;
+  const wedge = stand === null ? dialWedge(plan, layout) : null;
   const fin = dialGnomon(plan, layout);
-  const faceToWedgeFrame = faceToWedge(layout, wedge);
+  const faceToWedgeFrame = wedge !== null ? faceToWedge(layout, wedge) : faceToSeat(layout, stand!);
   const sign = layout.hemisphere === 'north' ? 1 : -1;
   // Wedge frame (x across, y toward the elevated pole, z up) to world: a half turn about Z in the south.
   const toWorld = (p: Vec3): Vec3 => [sign * p[0], sign * p[1], p[2]];
@@ -59,20 +70,44 @@ export function placeAssembly(layout: DialLayout): Assembly {
   const faceOutline = roundedRectOutline(-plate.substyleX, -plate.faceOriginY, plate.widthMm, plate.lengthMm, plate.cornerRadiusMm);
   const plateFacets = prismFacets(faceOutline, -t, 0).map((f) => ({ points: f.points.map(onFace), normal: rotate(face, f.normal) }));
   const gnomonFacets = meshFacets(gnomonOnPlate(fin, plan), onFace);
-  const wedgeFacets = meshFacets(wedge.mesh, toWorld);
-
+  const turn = (d: Vec3): Vec3 => [sign * d[0], sign * d[1], d[2]];
+  const worldFacets = (fs: readonly { points: readonly Vec3[]; normal: Vec3 }[]): Facet[] => fs.map((f) => ({ points: f.points.map(toWorld), normal: turn(f.normal) }));
+  const sf = stand !== null ? standFacets(layout, stand) : null;
+  const parts: PlacedPart[] = sf !== null
+    ? [
+        { name: 'stand', facets: worldFacets(sf.stand) },
+        { name: 'plate', facets: plateFacets },
+        { name: 'fixings', facets: worldFacets(sf.fixings) },
+        { name: 'gnomon', facets: gnomonFacets },
+      ]
+    : [
+        { name: 'wedge', facets: meshFacets(wedge!.mesh, toWorld) },
+        { name: 'plate', facets: plateFacets },
+        { name: 'gnomon', facets: gnomonFacets },
+      ];
+  const fp = stand !== null ? stand.footprint : wedge!.footprint;
   return {
     hemisphere: layout.hemisphere,
-    tiltRad: wedge.tiltRad,
-    parts: [
-      { name: 'wedge', facets: wedgeFacets },
-      { name: 'plate', facets: plateFacets },
-      { name: 'gnomon', facets: gnomonFacets },
-    ],
+    tiltRad: stand !== null ? stand.dims.tiltRad : wedge!.tiltRad,
+    parts,
     face,
     faceOutline,
     wedge,
+    stand,
+    footprint: fp,
   };
+}
+
+/**
+ * Map from the face frame to the stand's frame for the plate lying on the
+ * seat rails: plate coordinates (x + substyleX, y + faceOriginY, z from the
+ * plate's underside) laid on the seat from the point under the plate's
+ * lower-left corner (its lower edge flush with the lower rail's, its sides
+ * flush with the rails' ends), as the installation sheet says.
+ */
+export function faceToSeat(layout: DialLayout, stand: SizedStand): (p: Vec3) => Vec3 {
+  const { substyleX, faceOriginY, thicknessMm } = layout.plate;
+  return ([x, y, z]) => placePoint(stand.seat, [x + substyleX, y + faceOriginY, z + thicknessMm]);
 }
 
 /** Face coordinates to world. */

@@ -78,7 +78,7 @@ export function viewAssembly(layout: DialLayout, drawing: PlateDrawing, sun: Pic
   const sunFace = worldToFaceDirection(assembly.face, s);
 
   // Ground: the wedge's footprint grown by groundMm (world, Z = 0), CCW seen from above.
-  const fp = assembly.wedge.footprint;
+  const fp = assembly.footprint;
   const g = o.groundMm;
   const sign = north ? 1 : -1;
   const groundRect: Vec2[] = (

@@ -537,6 +537,8 @@ function render() {
 
 const PART_LOOK = {
   wedge: { color: 0xb9c4c9, roughness: 0.9 },
+  stand: { color: 0xc4c6c8, roughness: 0.6, metalness: 0.3 },
+  fixings: { color: 0x787c82, roughness: 0.4, metalness: 0.6 },
   plate: { color: 0xd9d4c7, roughness: 0.55, metalness: 0.25 },
   gnomon: { color: 0x8d6a4f, roughness: 0.6, metalness: 0.2 },
 };
