@@ -1,12 +1,14 @@
 // Regenerates the README's pictures from the demo spec, so they never drift from the code:
 //   npx tsx scripts/readme-pictures.ts
-// writes docs/images/preview.png, docs/images/assembly.png and docs/images/template-page1.png
+// writes docs/images/preview.png, docs/images/assembly.png, docs/images/stand-parts.png and docs/images/template-page1.png
 // (the last one rasterised from template.pdf with poppler-utils' pdftoppm, when installed).
 import { execFileSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { buildFiles, readSpecFile, buildAnyFiles } from '@umbrafab/cli';
+import { flatStand, pieceRows } from '@umbrafab/geometry';
+import { piecesDrawing, toCutSvg, toPngAsync } from '@umbrafab/fabricate';
 
 /** One picture per planar face type, from fixtures/planar/ (docs/images/face-<name>.png). */
 const PLANAR_PICTURES = ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial'];
@@ -26,6 +28,14 @@ async function run(): Promise<void> {
   writeFileSync(join(OUT, 'preview.png'), file('preview.png'));
   writeFileSync(join(OUT, 'assembly.png'), file('assembly.png'));
   const written = ['preview.png', 'assembly.png'];
+  // The demo's flat-pack stand as cut: the very drawing of stand.dxf, as a true-scale SVG, rasterised.
+  const stand = flatStand(result.layout);
+  // (the cutter's hairlines, 0.05 mm, widened to 0.6 mm so the picture reads at README size; a white page behind)
+  const standSvg = toCutSvg(piecesDrawing(stand.parts, pieceRows(stand.parts), new Map(), []))
+    .replaceAll('stroke-width="0.05"', 'stroke-width="0.6"')
+    .replace(/(<svg[^>]*>)/, '$1<rect x="-1000" y="-1000" width="4000" height="4000" fill="#ffffff"/>');
+  writeFileSync(join(OUT, 'stand-parts.png'), await toPngAsync(standSvg, { pxPerMm: 2 }));
+  written.push('stand-parts.png');
   try {
     const dir = mkdtempSync(join(tmpdir(), 'umbrafab-readme-'));
     writeFileSync(join(dir, 'template.pdf'), file('template.pdf'));
