@@ -3,6 +3,7 @@ import { DEG } from '../guards.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import { METRIC_SIZES, screwForHole, type MetricSize } from './metricFasteners.ts';
 import type { StandDimensions } from './standTypes.ts';
+import { WEDGE_MAX_TILT_DEG } from '../parts/wedgeSolid.ts';
 import { RELIEF_OVERSIZE_MM } from '../sheet/cornerRelief.ts';
 import { reliefToolRadius } from '../sheet/sheetParts.ts';
 
@@ -65,6 +66,9 @@ export function standDimensions(layout: DialLayout): StandSizing {
   const L = layout.plate.lengthMm;
   const Tp = layout.plate.thicknessMm;
 
+  if (Math.abs(spec.site.latitude) > WEDGE_MAX_TILT_DEG) {
+    throw new SpecError('site.latitude', spec.site.latitude, `allowed: a latitude of at most ${WEDGE_MAX_TILT_DEG}° north or south`, `got ${spec.site.latitude}, so the latitude wedge cannot be made (its seat would stand vertical)`);
+  }
   if (!(2 * c < T)) {
     throw new SpecError('process.clearance', c, `allowed: less than ${T / 2} mm per side, half the stand's sheet thickness (stand.thickness ${T} mm)`, 'the slots of the stand would be more than twice as wide as its tabs');
   }
