@@ -10,6 +10,8 @@ export * from './polar/markOffset.ts';
 export * from './polar/numeralText.ts';
 export * from './polar/layoutDial.ts';
 export * from './plate/plateDrawing.ts';
+export * from './parts/manifoldEngine.ts';
+export { shoelaceArea } from './parts/ring2d.ts';
 export * from './sheet/sheetPart.ts';
 export * from './sheet/sheetParts.ts';
 export * from './sheet/arcPoints.ts';

@@ -66,6 +66,33 @@ const toolSection = z
   })
   .prefault({});
 
+export const MILLING_DIRECTIONS = ['climb', 'conventional'] as const;
+
+const CUT_PRESET = 'default: the cutting preset of plate.material';
+
+/** `engrave.cut`: the router cutting program cut.ngc (holes, slots, outer profiles). */
+const cutSection = z
+  .strictObject({
+    write: z
+      .boolean({ error: 'allowed: true or false' })
+      .default(true)
+      .describe('write cut.ngc when process.method is router: holes, slots, then the outer profiles of the plate and the gnomon, cut through with the process.kerf end mill'),
+    spindleRpm: num({ min: 0, max: 100000, unit: 'rev/min', exclusiveMin: true }).optional().describe(`spindle speed for cutting, rev/min (${CUT_PRESET}, e.g. aluminium 18000)`),
+    feedMmPerMin: num({ min: 0, max: 100000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`cutting feed, mm/min (${CUT_PRESET}, e.g. aluminium 600)`),
+    plungeMmPerMin: num({ min: 0, max: 100000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`plunge feed, and the most a ramp descends per minute, mm/min (${CUT_PRESET}, e.g. aluminium 150)`),
+    stepDownMm: num({ min: 0, max: 50, unit: 'mm', exclusiveMin: true }).optional().describe(`deepest single pass, mm (${CUT_PRESET}, e.g. aluminium 0.5)`),
+    breakthroughMm: num({ min: 0, max: 5, unit: 'mm' }).default(0.3).describe('how far the last pass goes below the stock into a sacrificial spoilboard, mm'),
+    tabs: num({ min: 0, max: 12, unit: '', int: true }).default(4).describe('holding tabs per outer profile (0 = none), at the middles of its longest straight edges'),
+    tabWidthMm: num({ min: 0, max: 50, unit: 'mm', exclusiveMin: true }).default(4).describe('width of the bridge each tab leaves, along the profile, mm'),
+    tabHeightMm: num({ min: 0, max: 50, unit: 'mm', exclusiveMin: true }).default(0.8).describe('height of each tab above the bottom of the stock, mm (less than plate.thickness)'),
+    leadInMm: num({ min: 0, max: 20, unit: 'mm' }).optional().describe('straight lead-in from the waste side and lead-out, mm (default: the tool radius; shortened to fit inside a slot)'),
+    direction: z
+      .enum(MILLING_DIRECTIONS, { error: `allowed: ${MILLING_DIRECTIONS.map((v) => JSON.stringify(v)).join(', ')}` })
+      .default('climb')
+      .describe('climb (with M3: outer profiles counter-clockwise, cut-outs clockwise; the better finish on a rigid machine) or conventional'),
+  })
+  .prefault({});
+
 export const engraveSection = z
   .strictObject({
     programs: z
@@ -73,6 +100,7 @@ export const engraveSection = z
       .default('auto')
       .describe('engraving programs to write: auto (router/waterjet: engrave.ngc, laser: engrave-laser.gcode, print: none), ngc, laser, both or none'),
     tool: toolSection,
+    cut: cutSection,
     spindleRpm: num({ min: 0, max: 100000, unit: 'rev/min', exclusiveMin: true }).optional().describe(`spindle speed, rev/min (${PRESET}, e.g. aluminium 16000)`),
     feedMmPerMin: num({ min: 0, max: 100000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`cutting feed along the lines, mm/min (${PRESET}, e.g. aluminium 400)`),
     plungeMmPerMin: num({ min: 0, max: 100000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`plunge feed into the stock, mm/min (${PRESET}, e.g. aluminium 100)`),

@@ -1,0 +1,14 @@
+import { cutFromSpec } from '@umbrafab/fabricate';
+import { utf8, type Producer } from './outputTypes.ts';
+
+/**
+ * The router cutting program of `umbrafab build` (cut.ngc: holes, slots, then
+ * the outer profiles of the plate and the sheet gnomon, cut through with the
+ * process.kerf end mill; process.method router with engrave.cut.write) and
+ * the report's `cutting` section.
+ */
+export const cutOutputs: Producer = async ({ spec, layout, drawing }) => {
+  const r = await cutFromSpec(spec, layout, drawing);
+  if (r === null) return { files: [], report: {} };
+  return { files: [{ name: r.file.name, bytes: utf8(r.file.text) }], report: { cutting: r.report } };
+};
