@@ -6,7 +6,7 @@
 //
 // Prints the cold first run (track building, JIT warm-up) and the median of
 // five warm runs, all on one core (the simulation is single-threaded).
-import { checkDial, layoutDial, parseSpec } from '../packages/geometry/src/index.ts';
+import { checkDial, layoutDial, parseSpec } from '@umbrafab/geometry';
 
 const spec = parseSpec({
   name: 'Bench dial',

@@ -3,7 +3,7 @@
 // Run: npx tsx scripts/page-screenshot.ts
 import { mkdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import { startServer } from '../packages/cli/src/serve/startServer.ts';
+import { startServer } from '@umbrafab/cli';
 import { launchChromium } from '../test/browserChromium.ts';
 
 // page.evaluate functions run in the browser; the project compiles without the DOM library.

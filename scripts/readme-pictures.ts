@@ -6,8 +6,7 @@ import { execFileSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { buildFiles, readSpecFile } from '@umbrafab/cli';
 
 const ROOT = resolve(import.meta.dirname, '..');
 const OUT = join(ROOT, 'docs/images');

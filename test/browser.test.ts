@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startServer, type RunningServer } from '../packages/cli/src/serve/startServer.ts';
+import { startServer, type RunningServer } from '@umbrafab/cli';
 import { CHROMIUM, launchChromium } from './browserChromium.ts';
 import { runCli } from './helpers/runCli.ts';
 

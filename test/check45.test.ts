@@ -1,6 +1,6 @@
 import { Body, Equator, Horizon, Observer, SearchHourAngle, Seasons } from './checkAstronomy.ts';
 import { describe, expect, it } from 'vitest';
-import { dialFrame, eastToFaceX, gnomonForLayout, instantAtHourAngle, layoutDial, parseSpec, shadowOnFace, shadowOnLine, styleEdges, sunOnDay, sunTrack, toDialFrame } from '../packages/geometry/src/index.ts';
+import { dialFrame, eastToFaceX, gnomonForLayout, instantAtHourAngle, layoutDial, parseSpec, shadowOnFace, shadowOnLine, styleEdges, sunOnDay, sunTrack, toDialFrame } from '@umbrafab/geometry';
 
 const DEG = Math.PI / 180;
 

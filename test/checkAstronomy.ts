@@ -1,6 +1,6 @@
 /**
- * astronomy-engine for the check tests in test/: it is a dependency of
- * @umbrafab/geometry, not of the workspace root, so the root test folder
- * reaches it through the geometry package (named imports only, DEPS.md).
+ * astronomy-engine for the check tests in test/ (a dev dependency of the
+ * workspace root, the same version as @umbrafab/geometry's; named imports
+ * only, DEPS.md).
  */
-export { Body, Equator, Horizon, MakeTime, Observer, SearchHourAngle, Seasons } from '../packages/geometry/node_modules/astronomy-engine';
+export { Body, Equator, Horizon, MakeTime, Observer, SearchHourAngle, Seasons } from 'astronomy-engine';

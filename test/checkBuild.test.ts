@@ -3,10 +3,9 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { parse as parseYaml } from 'yaml';
 import { describe, expect, it } from 'vitest';
-import { checkDial, eastToFaceX, markOffsetEastMm, marksFromPlate, parseSpec, type DialLayout } from '../packages/geometry/src/index.ts';
-import { checkTableText } from '../packages/fabricate/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { parsePlateDxf } from '../packages/cli/src/readPlateDxf.ts';
+import { checkDial, eastToFaceX, markOffsetEastMm, marksFromPlate, parseSpec, type DialLayout } from '@umbrafab/geometry';
+import { checkTableText } from '@umbrafab/fabricate';
+import { buildFiles, parsePlateDxf } from '@umbrafab/cli';
 import { runCli } from './helpers/runCli.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');

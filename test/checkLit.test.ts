@@ -1,6 +1,6 @@
 import { Body, Equator, Horizon, MakeTime, Observer, SearchHourAngle } from './checkAstronomy.ts';
 import { describe, expect, it } from 'vitest';
-import { checkDial, dialFrame, isFaceLit, layoutDial, parseSpec, shadowOnFace, sunOnDay, sunTrack, toDialFrame } from '../packages/geometry/src/index.ts';
+import { checkDial, dialFrame, isFaceLit, layoutDial, parseSpec, shadowOnFace, sunOnDay, sunTrack, toDialFrame } from '@umbrafab/geometry';
 
 const DEG = Math.PI / 180;
 const site = { latitude: 64.1, longitude: -21.9, timezone: 'Atlantic/Reykjavik' };

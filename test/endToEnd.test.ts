@@ -25,7 +25,7 @@ describe('end to end: the umbrafab bin on the demo spec', () => {
   });
 
   it('writes byte-identical files on a second run', () => {
-    for (const f of report.files as string[]) expect(readFileSync(join(b, f)).equals(readFileSync(join(a, f))), f).toBe(true);
+    for (const f of report.files) expect(readFileSync(join(b, f)).equals(readFileSync(join(a, f))), f).toBe(true);
   });
 
   it('fills the report contract of docs/design.md §6', () => {

@@ -1,11 +1,10 @@
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { layoutDial, plateDrawing, timeFaceExtras, type PlateDrawing, type Vec2 } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { layoutDial, plateDrawing, timeFaceExtras, type PlateDrawing, type Vec2 } from '@umbrafab/geometry';
+import { buildFiles, readSpecFile } from '@umbrafab/cli';
 import { expectClose } from './helpers/closeTo.ts';
 import { canonTimes, checkMillStartEnd, feedRuns, motions, runRs274, uncutAtFinalDepthMm, xyLength, type CanonMotion } from './helpers/rs274.ts';
-import { clipToPlate } from '../packages/fabricate/src/index.ts';
+import { clipToPlate } from '@umbrafab/fabricate';
 
 // Outside validator: Debian's linuxcnc-uspace `rs274 -g`, the standalone
 // RS274NGC interpreter (docs/design.md §7). Every program `umbrafab build` writes

@@ -5,8 +5,8 @@ import { join, resolve } from 'node:path';
 import MarkdownIt from 'markdown-it';
 import { afterAll, describe, expect, it } from 'vitest';
 import { parse as parseYaml, stringify } from 'yaml';
-import { parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { parseSpec } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
 import { runCli } from './helpers/runCli.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');

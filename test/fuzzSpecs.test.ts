@@ -6,8 +6,8 @@ import { fileURLToPath } from 'node:url';
 import fc from 'fast-check';
 import { stringify } from 'yaml';
 import { afterAll, describe, expect, it } from 'vitest';
-import { isSpecError, parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { isSpecError, parseSpec } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
 import { runCli } from './helpers/runCli.ts';
 
 /**

@@ -1,11 +1,7 @@
-import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
-import { parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-
-// geomagnetism is a dependency of packages/geometry (not of the root): resolve it from there.
-const requireFromGeometry = createRequire(new URL('../packages/geometry/package.json', import.meta.url));
-const geomagnetism = requireFromGeometry('geomagnetism') as { model(date: Date): { point(latLon: [number, number]): { decl: number } } };
+import { parseSpec } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
+import geomagnetism from 'geomagnetism';
 
 const sites = [
   { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' },
@@ -38,7 +34,7 @@ describe('install.md', () => {
     const site = sites[0];
     const built = await buildFiles(parseSpec({ site, dial: { reads: 'standard' }, hours: { from: '08:00', to: '16:00' }, calendar: { year: 2027 } }));
     const md = text(built.files.find((f) => f.name === 'install.md')!.bytes);
-    const inst = built.report.install as { date: string; tilt: { angleDeg: number; riseMm: number; plateLengthMm: number }; reach: { reached: boolean; daysReached: number }[] };
+    const inst = built.report.install;
     expect(inst.date).toBe('2027-04-01'); // default: April 1 of calendar.year, never today
     const L = built.layout.plate.lengthMm;
     expect(inst.tilt.angleDeg).toBe(50.62);
@@ -56,7 +52,7 @@ describe('install.md', () => {
 
   it('counts fewer days for an early mark than for noon at a high latitude (Sun above the horizon, |H| < 90°)', async () => {
     const built = await buildFiles(parseSpec({ site: sites[2], hours: { from: '07:00', to: '17:00', step: 60 }, calendar: { year: 2027 } }));
-    const reach = (built.report.install as { reach: { label: string; daysReached: number }[] }).reach;
+    const reach = built.report.install.reach;
     const at = (l: string) => reach.find((r) => r.label === l)!.daysReached;
     // At 64.1° N the Sun is above the horizon at H = −75° only when δ > about −7.5° (tan δ > −cos H / tan φ).
     expect(at('12:00')).toBe(365);

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { stringify } from 'yaml';
 import { describe, expect, it } from 'vitest';
-import { parseSpec } from '../packages/geometry/src/index.ts';
+import { parseSpec } from '@umbrafab/geometry';
 import { runCli } from './helpers/runCli.ts';
 
 const good = {

@@ -1,7 +1,7 @@
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { bodySolid, layoutDial, partsPlan, plateDrawing, validateMesh } from '../packages/geometry/src/index.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { bodySolid, layoutDial, partsPlan, plateDrawing, validateMesh } from '@umbrafab/geometry';
+import { readSpecFile } from '@umbrafab/cli';
 import { expectClose } from './helpers/closeTo.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');

@@ -2,20 +2,8 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import {
-  dialGnomon,
-  dialWedge,
-  faceToWedge,
-  gnomonOnPlate,
-  layoutDial,
-  meshBounds,
-  meshVolumeMm3,
-  parseSpec,
-  partsPlan,
-  type Vec3,
-} from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { dialGnomon, dialWedge, faceToWedge, gnomonOnPlate, layoutDial, meshBounds, meshVolumeMm3, parseSpec, partsPlan, type Vec3 } from '@umbrafab/geometry';
+import { buildFiles, readSpecFile } from '@umbrafab/cli';
 import { expectClose } from './helpers/closeTo.ts';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 
@@ -111,7 +99,7 @@ describe('wedge seat normal at |latitude| from the vertical within 0.01°, read 
       // Rising toward +y (the elevated pole): the seat faces the equator, −y.
       if (lat !== 0) expect(n[1]).toBeLessThan(0);
     }
-    const report = built.report.wedge as { angleDeg: number; risesToward: string };
+    const report = built.report.wedge;
     expect(report.angleDeg).toBe(Math.abs(lat));
     expect(report.risesToward).toBe(lat >= 0 ? 'true north' : 'true south');
   });
@@ -164,7 +152,7 @@ describe('fits as assembled', () => {
     const zs = stlFacets(stl.bytes).flat().map((p) => p[2]);
     expectClose(Math.max(...zs), 30 + 4, 0.01, 'body style height above the underside', ' mm');
     expectClose(Math.min(...zs), 0, 1e-9, 'body underside', ' mm');
-    const body = built.report.parts as { body: { volumeMm3: number } };
+    const body = built.report.parts as Required<typeof built.report.parts>;
     expect(body.body.volumeMm3).toBeGreaterThan(0);
   });
 
@@ -199,7 +187,7 @@ describe('fits as assembled', () => {
       expectClose(s.w, t + 2 * c - kerf, 1e-6, 'slot width in plate.dxf', ' mm');
       expectClose(s.l, layout.gnomon.tabs[i].lengthMm + 2 * c - kerf, 1e-6, 'slot length in plate.dxf', ' mm');
     }
-    const parts = built.report.parts as { slots: { widthMm: number; tabWidthMm: number }[] };
+    const parts = built.report.parts;
     for (const s of parts.slots) expectClose(s.widthMm - s.tabWidthMm, 2 * c, 1e-9, 'report slot − tab', ' mm');
   });
 });

@@ -2,9 +2,8 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { parseSpecText, readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { parseSpec } from '@umbrafab/geometry';
+import { buildFiles, parseSpecText, readSpecFile } from '@umbrafab/cli';
 import { runAdmesh } from './helpers/admesh.ts';
 import { readFileSync } from 'node:fs';
 
@@ -46,7 +45,7 @@ describe.each(built)('STL files of $name', ({ name, result, expect: names }) => 
     expect([r.edgesFixed, r.facetsRemoved, r.facetsAdded, r.facetsReversed, r.backwardsEdges, r.normalsFixed]).toEqual([0, 0, 0, 0, 0, 0]);
     expect(r.volumeMm3).toBeGreaterThan(0);
     const key = file.replace('.stl', '') as 'gnomon' | 'wedge' | 'body';
-    const reported = (result.report.parts as Record<string, { volumeMm3: number; facets: number }>)[key];
+    const reported = result.report.parts[key]!;
     expect(r.facets).toBe(reported.facets);
     // admesh sums float32 corners in float32: agree with the float64 mesh volume to 0.01 %.
     expect(Math.abs(r.volumeMm3 - reported.volumeMm3)).toBeLessThanOrEqual(1e-4 * reported.volumeMm3);

@@ -3,19 +3,9 @@ import { join, resolve } from 'node:path';
 import { inflateSync } from 'node:zlib';
 import { parse as parseYaml } from 'yaml';
 import { describe, expect, it } from 'vitest';
-import {
-  defaultPictureDate,
-  faceToWorld,
-  layoutDial,
-  parseSpec,
-  plateDrawing,
-  projectToPicture,
-  sunForPicture,
-  viewAssembly,
-  type Vec2,
-} from '../packages/geometry/src/index.ts';
-import { svgWidthMm, toAssemblySvg, toPng, toSvg } from '../packages/fabricate/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { defaultPictureDate, faceToWorld, layoutDial, parseSpec, plateDrawing, projectToPicture, sunForPicture, viewAssembly, type Vec2 } from '@umbrafab/geometry';
+import { svgWidthMm, toAssemblySvg, toPng, toSvg } from '@umbrafab/fabricate';
+import { buildFiles } from '@umbrafab/cli';
 import { expectClose } from './helpers/closeTo.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');
@@ -96,7 +86,7 @@ describe('pictures: preview.png and assembly.png from the demo build', async () 
   it('writes assembly.svg and assembly.png of the same size in mm', () => {
     const svg = new TextDecoder().decode(file('assembly.svg'));
     const png = decodePng(file('assembly.png'));
-    const a = result.report.pictures as { assembly: { widthMm: number; heightMm: number; widthPx: number; heightPx: number } };
+    const a = result.report.pictures!;
     expect(png.width).toBe(a.assembly.widthMm * spec.pictures.pxPerMm);
     expect(png.height).toBe(a.assembly.heightMm * spec.pictures.pxPerMm);
     expect([png.width, png.height]).toEqual([a.assembly.widthPx, a.assembly.heightPx]);

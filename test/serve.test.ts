@@ -5,14 +5,8 @@ import { networkInterfaces, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse as parseYaml } from 'yaml';
-import { parseSpec, specSchema } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
-import { bindPolicy, isLoopbackHost } from '../packages/cli/src/serve/bindPolicy.ts';
-import { formValuesToSpec, specToFormValues } from '../packages/cli/src/serve/formValues.ts';
-import { MAX_BODY_BYTES } from '../packages/cli/src/serve/readJsonBody.ts';
-import { specFields } from '../packages/cli/src/serve/specFields.ts';
-import { startServer, type RunningServer } from '../packages/cli/src/serve/startServer.ts';
+import { parseSpec, specSchema } from '@umbrafab/geometry';
+import { buildFiles, readSpecFile, bindPolicy, isLoopbackHost, formValuesToSpec, specToFormValues, MAX_BODY_BYTES, specFields, startServer, type RunningServer } from '@umbrafab/cli';
 import { runCli } from './helpers/runCli.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');

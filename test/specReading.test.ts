@@ -3,9 +3,8 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { isSpecError } from '../packages/geometry/src/index.ts';
-import { MAX_SPEC_BYTES, MAX_SPEC_NODES, parseSpecText } from '../packages/cli/src/readSpec.ts';
-import { startServer } from '../packages/cli/src/serve/startServer.ts';
+import { isSpecError } from '@umbrafab/geometry';
+import { MAX_SPEC_BYTES, MAX_SPEC_NODES, parseSpecText, startServer } from '@umbrafab/cli';
 import { runCli } from './helpers/runCli.ts';
 
 /**

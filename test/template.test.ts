@@ -4,8 +4,8 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { parse as parseYaml } from 'yaml';
 import { describe, expect, it } from 'vitest';
-import { layoutDial, parseSpec, plateDrawing } from '../packages/geometry/src/index.ts';
-import { CALIBRATION_BAR_RGB, templateTiles, toTemplatePdf } from '../packages/fabricate/src/index.ts';
+import { layoutDial, parseSpec, plateDrawing } from '@umbrafab/geometry';
+import { CALIBRATION_BAR_RGB, templateTiles, toTemplatePdf } from '@umbrafab/fabricate';
 import { expectClose } from './helpers/closeTo.ts';
 
 // pdfjs-dist 6 wants two Node 22 built-ins; Node 20 lacks them (plain equivalents, test-only).

@@ -2,8 +2,8 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { calendarLines, parseSpec } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
 import { ezdxfDump, type DxfDump } from './helpers/ezdxf.ts';
 
 const cases = [
@@ -117,8 +117,8 @@ describe('date-line options', () => {
     const on = await buildFiles(parseSpec({ site, gnomon: { nodus: true } }));
     const svg = new TextDecoder().decode(on.files.find((f) => f.name === 'preview.svg')!.bytes);
     expect(svg).toContain('date line June solstice');
-    const labels = (on.report.calendar as { engravedLabels: string[] }[]).flatMap((l) => l.engravedLabels);
-    const unlabelled = on.report.unlabelledDateLines as string[];
+    const labels = calendarLines(on.layout).flatMap((l) => l.engravedLabels);
+    const unlabelled = on.report.unlabelledDateLines;
     console.log(`labels placed: ${labels.length - unlabelled.length} of ${labels.length}; without room: ${unlabelled.join('; ') || 'none'}`);
     expect(labels.length - unlabelled.length).toBeGreaterThan(0);
   });

@@ -1,7 +1,7 @@
 import { Body, HourAngle, Observer } from 'astronomy-engine';
 import { describe, expect, it } from 'vitest';
-import { layoutDial, parseSpec, timeFaceExtras } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { layoutDial, parseSpec, timeFaceExtras } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
 
 const site = { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' };
 
@@ -32,7 +32,7 @@ describe('face options for clock time', () => {
   it('dial.meanTimeCurves draws a figure-of-eight per whole hour, reaching x = t/2 + h·tan((λ−λs) + E/4) at the EoT maximum', async () => {
     const spec = parseSpec({ site, dial: { reads: 'standard', meanTimeCurves: true }, hours: { from: '08:00', to: '16:00' }, gnomon: { nodus: true }, calendar: { year: 2027 } });
     const built = await buildFiles(spec);
-    const curves = built.report.meanTimeCurves as { clockTime: string; polylines: [number, number][][] }[];
+    const curves = built.report.meanTimeCurves;
     expect(curves.map((c) => c.clockTime)).toEqual(['08:00', '09:00', '10:00', '11:00', '12:00', '13:00', '14:00', '15:00', '16:00']);
     // 13:00: H = 15° − 3.41° + E/4 (docs/design.md §3), with E at its 2027
     // maximum taken from astronomy-engine (an outside ephemeris): at 12:00 UT

@@ -2,7 +2,7 @@
 // readSpecFile and prints, as one JSON line, how long the read took, the
 // message it ended with and the process's peak resident memory
 // (process.resourceUsage().maxRSS, KiB).
-import { readSpecFile } from '../../packages/cli/src/readSpec.ts';
+import { readSpecFile } from '@umbrafab/cli';
 
 const path = process.argv[2];
 const t0 = performance.now();

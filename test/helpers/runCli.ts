@@ -1,4 +1,4 @@
-import { main } from '../../packages/cli/src/main.ts';
+import { main } from '@umbrafab/cli';
 
 /** Run the CLI in-process and capture its exit code and output lines. */
 export async function runCli(argv: readonly string[]): Promise<{ code: number; out: string; err: string }> {

@@ -1,8 +1,16 @@
 #!/usr/bin/env node
-// Runs the TypeScript CLI straight from source through tsx's ESM loader, so
-// `pnpm exec umbrafab` works right after install with no build step.
-import { register } from 'tsx/esm/api';
+// Runs the CLI's plain-JavaScript build (packages/cli/dist/, made on install
+// by scripts/build.mjs); if the sources changed since, it rebuilds first
+// (scripts/distEntry.mjs), so it never runs old code and never needs a
+// TypeScript transform at run time.
+import { pathToFileURL } from 'node:url';
+import { distEntry } from '../scripts/distEntry.mjs';
 
-register();
-const { main } = await import('../src/main.ts');
+let main;
+try {
+  ({ main } = await import(pathToFileURL(await distEntry()).href));
+} catch (e) {
+  process.stderr.write(`${e instanceof Error && e.code === 'UMBRAFAB_STALE_BUILD' ? e.message : `umbrafab: internal error: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`}\n`);
+  process.exit(2);
+}
 process.exitCode = await main(process.argv.slice(2));

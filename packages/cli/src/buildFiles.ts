@@ -1,14 +1,16 @@
-import { layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec } from '@umbrafab/geometry';
+import { faceOrientationOf, layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec } from '@umbrafab/geometry';
+import { buildPlanarFiles, type PlanarBuildResult } from './buildPlanarFiles.ts';
 import { toReportJson } from '@umbrafab/fabricate';
 import { PRODUCERS, START_ORDER } from './outputs/index.ts';
 import { utf8, type BuildContext, type ProducerResult } from './outputs/outputTypes.ts';
+import type { Report } from './outputs/report.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
 /** Everything one build produces, in memory (no I/O): the CLI writes it, other front ends serve it. */
 export interface BuildResult {
   readonly layout: DialLayout;
   readonly files: readonly OutputFile[];
-  readonly report: Record<string, unknown>;
+  readonly report: Report;
 }
 
 export const GENERATOR = 'umbrafab 0.1.0';
@@ -21,7 +23,7 @@ export const GENERATOR = 'umbrafab 0.1.0';
 export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContext(spec)): Promise<BuildResult> {
   const { layout } = ctx;
   const files: OutputFile[] = [];
-  const sections: Record<string, unknown> = {};
+  const sections: Partial<Report> = {};
   // Producers whose work runs mostly on worker threads (PNG rendering) start
   // first, so that their threads overlap the others' work on this one; the
   // results are still taken in PRODUCERS order, and the first failure in that
@@ -39,17 +41,27 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   for (const s of settled) {
     const r = (s as PromiseFulfilledResult<ProducerResult>).value;
     files.push(...r.files);
-    for (const [key, value] of Object.entries(r.report)) {
-      const prev = sections[key];
-      sections[key] = isPlainObject(prev) && isPlainObject(value) ? { ...prev, ...value } : value;
-    }
+    const twice = Object.keys(r.report).find((key) => key in sections);
+    if (twice) throw new Error(`two producers both write the report section ${twice}`);
+    Object.assign(sections, r.report);
   }
   const names = [...files.map((f) => f.name), 'report.json'];
   const dup = names.find((n, i) => names.indexOf(n) !== i);
   if (dup) throw new Error(`two producers both write ${dup}`);
-  const report = { generator: GENERATOR, spec, ...sections, notes: layout.notes, files: names };
+  // Each producer's sections are typed beside it; together they make the
+  // Report (test/reportSchema.test.ts holds every build to its schema).
+  const report = { generator: GENERATOR, spec, ...sections, notes: layout.notes, files: names } as Report;
   files.push({ name: 'report.json', bytes: utf8(toReportJson(report)) });
   return { layout, files, report };
+}
+
+/**
+ * `umbrafab build` for any face type: the polar plate through the producers
+ * (`buildFiles`), a horizontal, wall, meridian or equatorial face through
+ * `buildPlanarFiles` (spec `face.type`).
+ */
+export async function buildAnyFiles(spec: DialSpec): Promise<BuildResult | PlanarBuildResult> {
+  return faceOrientationOf(spec) ? buildPlanarFiles(spec, GENERATOR) : buildFiles(spec);
 }
 
 /** The geometry every producer reads, computed once per spec (the local page draws its views from it before the full build). */
@@ -58,8 +70,4 @@ export function buildContext(spec: DialSpec): BuildContext {
   const extras = timeFaceExtras(layout); // date lines, mean-time curves, engraved equation of time
   const drawing = plateDrawing(layout, extras.lines, extras.text);
   return { spec, layout, drawing };
-}
-
-function isPlainObject(v: unknown): v is Record<string, unknown> {
-  return v !== null && typeof v === 'object' && !Array.isArray(v);
 }

@@ -13,4 +13,5 @@ export * from './install/markdownText.ts';
 export * from './template/index.ts';
 export * from './pictures/index.ts';
 export * from './check/index.ts';
+export * from './install/toPlanarInstallMd.ts';
 export * from './process/assertToolFits.ts';

@@ -36,3 +36,4 @@ export * from './spec/sections/partsSection.ts';
 export * from './shadow/index.ts';
 export * from './assembly/index.ts';
 export * from './planar/index.ts';
+export * from './spec/sections/faceSection.ts';

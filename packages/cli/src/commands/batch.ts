@@ -1,18 +1,10 @@
 import { readFileSync } from 'node:fs';
-import cliProgress from 'cli-progress';
-import { WEDGE_MAX_TILT_DEG, type DialLayout, type DialSpec } from '@umbrafab/geometry';
-import { toReportJson } from '@umbrafab/fabricate';
-import { buildContext, GENERATOR } from '../buildFiles.ts';
-import { partsOutputs } from '../outputs/partsOutputs.ts';
-import { plateOutputs } from '../outputs/plateOutputs.ts';
+import type { DialLayout, DialSpec } from '@umbrafab/geometry';
 import { utf8 } from '../outputs/outputTypes.ts';
-import { readSpecFile } from '../readSpec.ts';
-import { writeFilesAtomic, type OutputFile } from '../writeFilesAtomic.ts';
+import type { OutputFile } from '../writeFilesAtomic.ts';
 import { specBaseName } from './build.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
-/** The steepest wedge that can be printed. */
-const MAX_LATITUDE_DEG = WEDGE_MAX_TILT_DEG;
 /** Show a progress bar from this many latitudes on ("long runs"). */
 const PROGRESS_FROM = 4;
 
@@ -38,7 +30,9 @@ export const batchCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' })
       .option('progress', { type: 'boolean', default: true, describe: `show a progress bar on stderr (from ${PROGRESS_FROM} latitudes on)` }),
   run: async (args, io) => {
-    const latitudes = batchLatitudes(args.latitudes, args['latitudes-file']);
+    // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
+    const { WEDGE_MAX_TILT_DEG, buildContext, cliProgress, GENERATOR, partsOutputs, plateOutputs, readSpecFile, toReportJson, writeFilesAtomic } = await import('./batchDeps.ts');
+    const latitudes = batchLatitudes(args.latitudes, args['latitudes-file'], WEDGE_MAX_TILT_DEG);
     const base = readSpecFile(args.spec);
     const outDir: string = args.out ?? `out/${specBaseName(args.spec)}-batch`;
 
@@ -58,8 +52,7 @@ export const batchCommand: CommandModule = {
         const { layout } = ctx;
         const plate = (await plateOutputs(ctx)).files;
         const parts = await partsOutputs(ctx);
-        const wedge = parts.report.wedge as { angleDeg?: number } | undefined;
-        builds.push({ lat, spec, layout, plate, parts: parts.files, wedgeAngleDeg: wedge?.angleDeg ?? Math.abs(lat) });
+        builds.push({ lat, spec, layout, plate, parts: parts.files, wedgeAngleDeg: parts.report.wedge.angleDeg });
         bar?.increment(1, { lat: latitudeTag(lat) });
       }
     } finally {
@@ -117,9 +110,11 @@ export const batchCommand: CommandModule = {
 
 /**
  * The latitudes of a batch from --latitudes and/or --latitudes-file: numbers
- * from −89° to 89° (a printable wedge), no repeats, at least one.
+ * from −maxDeg to maxDeg (the steepest printable wedge, WEDGE_MAX_TILT_DEG
+ * = 89°), no repeats, at least one.
  */
-export function batchLatitudes(list: unknown, file: unknown): number[] {
+export function batchLatitudes(list: unknown, file: unknown, maxDeg: number): number[] {
+  const MAX_LATITUDE_DEG = maxDeg;
   const items: { text: string; where: string }[] = [];
   if (list === undefined && file === undefined) throw new UsageError('--latitudes: missing; allowed: --latitudes 30,35,40 or --latitudes-file <file>');
   if (list !== undefined) {

@@ -1,7 +1,4 @@
 import { join } from 'node:path';
-import { buildFiles } from '../buildFiles.ts';
-import { readSpecFile } from '../readSpec.ts';
-import { writeFilesAtomic } from '../writeFilesAtomic.ts';
 import type { CommandModule } from './commandTypes.ts';
 
 export const buildCommand: CommandModule = {
@@ -13,10 +10,13 @@ export const buildCommand: CommandModule = {
       .option('out', { type: 'string', alias: 'o', describe: 'output folder (default: out/<spec name>)' })
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
+    // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
+    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }] = await Promise.all([import('../buildFiles.ts'), import('../readSpec.ts'), import('../writeFilesAtomic.ts')]);
     const spec = readSpecFile(args.spec);
-    const result = await buildFiles(spec);
+    const result = await buildAnyFiles(spec);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
-    writeFilesAtomic(outDir, result.files, args.force);
+    const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
+    if (recovered) io.out(`note: ${outDir}: ${recovered}`);
     const p = result.layout.plate;
     const total = result.files.reduce((s, f) => s + f.bytes.length, 0);
     io.out(

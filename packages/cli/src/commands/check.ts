@@ -1,9 +1,5 @@
 import { join } from 'node:path';
-import { checkDial, layoutDial, marksFromPlate, parseSpec, type CheckResult } from '@umbrafab/geometry';
-import { checkTableText, toCheckJson, toCheckSvg } from '@umbrafab/fabricate';
-import { readPlateDxf } from '../readPlateDxf.ts';
-import { readSpecFile } from '../readSpec.ts';
-import { writeFilesAtomic } from '../writeFilesAtomic.ts';
+import type { CheckResult } from '@umbrafab/geometry';
 import { utf8 } from '../outputs/outputTypes.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
@@ -17,7 +13,9 @@ export const checkCommand: CommandModule = {
       .option('year', { type: 'number', describe: 'calendar year to simulate (default: calendar.year of the spec)' })
       .option('out', { type: 'string', alias: 'o', describe: 'also write check.json and check.svg to this folder' })
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
-  run: (args, io) => {
+  run: async (args, io) => {
+    // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick; the DXF reader only with --plate.
+    const { checkDial, checkTableText, layoutDial, marksFromPlate, parseSpec, readSpecFile, toCheckJson, toCheckSvg, writeFilesAtomic } = await import('./checkDeps.ts');
     let spec = readSpecFile(args.spec);
     if (args.year !== undefined) {
       const year = Number(args.year);
@@ -27,6 +25,7 @@ export const checkCommand: CommandModule = {
     const layout = layoutDial(spec);
     let result: CheckResult;
     if (args.plate !== undefined) {
+      const { readPlateDxf } = await import('../readPlateDxf.ts');
       const plate = readPlateDxf(String(args.plate));
       const found = marksFromPlate(layout, plate.lines);
       result = checkDial(layout, { drawn: found.drawn, source: 'plate' });

@@ -1,4 +1,4 @@
-import { DEFAULT_PORT, startServer } from '../serve/startServer.ts';
+import { DEFAULT_PORT } from '../serve/bindPolicy.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
 export const serveCommand: CommandModule = {
@@ -13,6 +13,7 @@ export const serveCommand: CommandModule = {
   run: async (args, io) => {
     const port = args.port;
     if (!Number.isInteger(port) || port < 0 || port > 65535) throw new UsageError(`--port: got ${args.port}; allowed: a whole number from 0 to 65535`);
+    const { startServer } = await import('../serve/startServer.ts'); // the server and the whole build: loaded only when the command runs
     let server;
     try {
       server = await startServer({ specPath: args.spec, host: args.host, port, allowRemote: args.allowRemote, log: io.err });

@@ -1,4 +1,4 @@
-import { engraveFromSpec } from '@umbrafab/fabricate';
+import { engraveFromSpec, type EngravingReport } from '@umbrafab/fabricate';
 import { utf8, type Producer } from './outputTypes.ts';
 
 /**
@@ -7,7 +7,12 @@ import { utf8, type Producer } from './outputTypes.ts';
  * chooses) and the report's `engraving` section (depths, passes, time
  * estimate, rapid travel before and after ordering with its lower bound).
  */
-export const engraveOutputs: Producer = ({ spec, drawing }) => {
+/** The report.json section of the engraving programs. */
+export interface EngraveSections {
+  readonly engraving: EngravingReport;
+}
+
+export const engraveOutputs: Producer<EngraveSections> = ({ spec, drawing }) => {
   const r = engraveFromSpec(spec, drawing);
   return {
     files: r.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })),

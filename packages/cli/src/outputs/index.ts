@@ -8,8 +8,8 @@ import type { Producer } from './outputTypes.ts';
 
 /**
  * Every producer of `umbrafab build`, in file order. Add an output group:
- * one file in outputs/, one line here. Sections of report.json with the same
- * top-level key are merged shallowly (later producers add keys).
+ * one file in outputs/ (its report sections typed beside it), one line here
+ * and one in report.ts. No two producers write the same report section.
  */
 export const PRODUCERS: readonly Producer[] = [plateOutputs, partsOutputs, engraveOutputs, cutOutputs, timeOutputs, picturesOutputs];
 

@@ -8,17 +8,21 @@ export interface BuildContext {
   readonly drawing: PlateDrawing;
 }
 
-/** What a producer adds: files, and top-level sections merged into report.json. */
-export interface ProducerResult {
+/**
+ * What a producer adds: files, and its own top-level sections of report.json
+ * (`R`, declared beside the producer; no two producers share a section).
+ */
+export interface ProducerResult<R extends object = object> {
   readonly files: readonly OutputFile[];
-  readonly report: Readonly<Record<string, unknown>>;
+  readonly report: R;
 }
 
 /**
  * One group of outputs (the plate, the printed parts, the toolpaths, …), in
- * its own file under outputs/. Pure: no file system, no clock. May be async
- * (e.g. a WASM mesh engine that loads once).
+ * its own file under outputs/, with the type `R` of the report sections it
+ * writes. Pure: no file system, no clock. May be async (e.g. a WASM mesh
+ * engine that loads once).
  */
-export type Producer = (ctx: BuildContext) => ProducerResult | Promise<ProducerResult>;
+export type Producer<R extends object = object> = (ctx: BuildContext) => ProducerResult<R> | Promise<ProducerResult<R>>;
 
 export const utf8 = (s: string): Uint8Array => new TextEncoder().encode(s);

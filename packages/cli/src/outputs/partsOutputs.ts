@@ -15,8 +15,76 @@ import { stlHeader, toGnomonDxf, toStl } from '@umbrafab/fabricate';
 import { utf8, type Producer } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 
+/** The report.json sections of the parts: the stand's geometry and every part file's figures. */
+export interface PartsSections {
+  readonly wedge: WedgeSection;
+  readonly parts: PartsSection;
+}
+
+/** Volume, bounding box and facet count of a part's mesh as written (its file's frame), mm³ and mm. */
+export interface MeshFigures {
+  readonly volumeMm3: number;
+  readonly bbox: { readonly minMm: readonly number[]; readonly maxMm: readonly number[] };
+  readonly facets: number;
+}
+
+/** The latitude wedge: its tilt and which way it rises; its geometry when it is built. */
+export interface WedgeSection {
+  /** the seat's tilt from the horizontal = |latitude|, degrees */
+  readonly angleDeg: number;
+  /** 'true north' or 'true south': the elevated pole */
+  readonly risesToward: string;
+  readonly arrowPointsTo: string;
+  /** 'slab' below 5° tilt, 'stand' above */
+  readonly design?: 'slab' | 'stand';
+  readonly seatWidthMm?: number;
+  readonly seatLengthMm?: number;
+  /** outward unit normal of the seat, wedge frame (x across, y toward the pole, z up) */
+  readonly seatNormal?: readonly number[];
+  readonly toeLengthMm?: number;
+  /** the wedge's footprint on the ground, wedge frame, mm */
+  readonly footprintMm?: { readonly xMinMm: number; readonly xMaxMm: number; readonly yMinMm: number; readonly yMaxMm: number };
+  readonly mountingHoles?: number;
+}
+
+/** The parts plan and the figures of each part file written. */
+export interface PartsSection {
+  /** part files written */
+  readonly files: readonly string[];
+  /** 'sheet': the gnomon is cut from the plate's stock; 'separate': its own stock or printed */
+  readonly gnomonFrom: string;
+  /** depth of the tabs below the face, mm */
+  readonly tabDepthMm: number;
+  /** fit clearance per side of a tab in its slot, mm */
+  readonly fitClearancePerSideMm: number;
+  /** each slot with the tab it takes, mm */
+  readonly slots: readonly { readonly widthMm: number; readonly lengthMm: number; readonly tabWidthMm: number; readonly tabLengthMm: number }[];
+  readonly gnomon: MeshFigures & {
+    /** the style edges' height above the face when assembled, mm */
+    readonly styleHeightAboveFaceMm: number;
+    /** the tab bottoms' depth below the face when assembled, mm */
+    readonly tabBottomBelowFaceMm: number;
+    readonly thicknessMm: number;
+    /** length of the style, mm */
+    readonly lengthMm: number;
+    /** area of the fin's side profile, mm² (volume = area × thickness) */
+    readonly profileAreaMm2: number;
+    /** face y of the nodus, mm (with a nodus) */
+    readonly nodusFaceYMm?: number;
+  };
+  /** gnomon.dxf, when written */
+  readonly gnomonDxf?: { readonly kerfMm: number; readonly offsetMm: number; readonly layers: readonly string[] };
+  /** wedge.stl, when written */
+  readonly wedge?: MeshFigures;
+  /** body.stl, when written */
+  readonly body?: MeshFigures & { readonly grooveDepthMm: number; readonly withWedge: boolean };
+}
+
+/** A section under construction: its fields may be set one by one. */
+type Writable<T> = { -readonly [K in keyof T]: T[K] };
+
 /** Volume and bounding box of a written part, as report.json gives them. */
-function figures(mesh: Mesh): { volumeMm3: number; bbox: { minMm: readonly number[]; maxMm: readonly number[] }; facets: number } {
+function figures(mesh: Mesh): MeshFigures {
   const b = meshBounds(mesh);
   return { volumeMm3: meshVolumeMm3(mesh), bbox: { minMm: b.min, maxMm: b.max }, facets: mesh.triangles.length };
 }
@@ -37,7 +105,7 @@ function figures(mesh: Mesh): { volumeMm3: number; bbox: { minMm: readonly numbe
  * - body.stl: plate coordinates (origin at the plate's lower-left corner,
  *   underside on z = 0), or the wedge's frame when the wedge is fused on.
  */
-export const partsOutputs: Producer = async ({ spec, layout, drawing }) => {
+export const partsOutputs: Producer<PartsSections> = async ({ spec, layout, drawing }) => {
   const plan = partsPlan(layout);
   const gnomon = dialGnomon(plan, layout);
   const g = layout.gnomon;
@@ -45,21 +113,6 @@ export const partsOutputs: Producer = async ({ spec, layout, drawing }) => {
   const needWedge = plan.files.includes('wedge.stl') || (plan.files.includes('body.stl') && plan.body.withWedge);
   const wedge: WedgePart | null = needWedge ? dialWedge(plan, layout) : null;
   const files: OutputFile[] = [];
-  const parts: Record<string, unknown> = {
-    files: plan.files,
-    gnomonFrom: plan.gnomonFrom,
-    tabDepthMm: plan.tabDepthMm,
-    fitClearancePerSideMm: plan.clearanceMm,
-    slots: layout.plate.slots.map((s, i) => ({
-      widthMm: s.widthMm,
-      lengthMm: s.heightMm,
-      tabWidthMm: g.thicknessMm,
-      tabLengthMm: g.tabs[i].lengthMm,
-    })),
-  };
-  const lat = spec.site.latitude;
-  const latText = `${Math.abs(lat).toFixed(2)} deg ${lat >= 0 ? 'N' : 'S'}`;
-
   // Assembled: style edges gnomon height above the face, tab bottoms at the plate's underside.
   const assembled = meshBounds(gnomonOnPlate(gnomon, plan));
   const gnomonReport = {
@@ -71,6 +124,22 @@ export const partsOutputs: Producer = async ({ spec, layout, drawing }) => {
     profileAreaMm2: gnomon.profileAreaMm2,
     ...(gnomon.nodusMm ? { nodusFaceYMm: gnomon.nodusMm[1] + plan.gnomonCentreYMm } : {}),
   };
+  const parts: Writable<PartsSection> = {
+    files: plan.files,
+    gnomonFrom: plan.gnomonFrom,
+    tabDepthMm: plan.tabDepthMm,
+    fitClearancePerSideMm: plan.clearanceMm,
+    slots: layout.plate.slots.map((s, i) => ({
+      widthMm: s.widthMm,
+      lengthMm: s.heightMm,
+      tabWidthMm: g.thicknessMm,
+      tabLengthMm: g.tabs[i].lengthMm,
+    })),
+    gnomon: gnomonReport,
+  };
+  const lat = spec.site.latitude;
+  const latText = `${Math.abs(lat).toFixed(2)} deg ${lat >= 0 ? 'N' : 'S'}`;
+
   if (plan.files.includes('gnomon.stl')) {
     const tab = plan.tabDepthMm;
     const t2 = gnomon.thicknessMm / 2;
@@ -82,30 +151,28 @@ export const partsOutputs: Producer = async ({ spec, layout, drawing }) => {
       bytes: toStl(flat, { header: stlHeader([`umbrafab gnomon h=${g.heightMm} t=${g.thicknessMm} L=${(2 * halfL).toFixed(1)} mm, ${g.tabs.length} tabs, laid flat`, spec.name]) }),
     });
     parts.gnomon = { ...gnomonReport, ...figures(flat) };
-  } else {
-    parts.gnomon = gnomonReport;
   }
   if (plan.files.includes('gnomon.dxf')) {
     files.push({ name: 'gnomon.dxf', bytes: utf8(toGnomonDxf({ profile: gnomon.profile, styleHeightMm: gnomon.styleHeightMm }, { kerfMm: spec.process.kerf })) });
     parts.gnomonDxf = { kerfMm: spec.process.kerf, offsetMm: spec.process.kerf / 2, layers: ['CUT_PROFILE', 'REFERENCE_NO_CUT'] };
   }
 
-  const wedgeReport: Record<string, unknown> = {
+  const wedgeReport: WedgeSection = {
     angleDeg: plan.tiltDeg,
     risesToward: pole,
     arrowPointsTo: pole,
+    ...(wedge === null
+      ? {}
+      : {
+          design: wedge.design,
+          seatWidthMm: plan.wedge.seatWidthMm,
+          seatLengthMm: plan.wedge.seatLengthMm,
+          seatNormal: wedge.seatNormal,
+          toeLengthMm: wedge.toeLengthMm,
+          footprintMm: wedge.footprint,
+          mountingHoles: wedge.holes.length,
+        }),
   };
-  if (wedge !== null) {
-    Object.assign(wedgeReport, {
-      design: wedge.design,
-      seatWidthMm: plan.wedge.seatWidthMm,
-      seatLengthMm: plan.wedge.seatLengthMm,
-      seatNormal: wedge.seatNormal,
-      toeLengthMm: wedge.toeLengthMm,
-      footprintMm: wedge.footprint,
-      mountingHoles: wedge.holes.length,
-    });
-  }
   if (wedge !== null && plan.files.includes('wedge.stl')) {
     files.push({
       name: 'wedge.stl',

@@ -4,25 +4,77 @@ import { previewSvgText } from './plateOutputs.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
 
+/** The report.json sections of the pictures and the paper template, each present when written. */
+export interface PicturesSections {
+  readonly pictures?: PicturesSection;
+  readonly template?: TemplateSection;
+}
+
+/** The pictures as rendered. */
+export interface PicturesSection {
+  /** PNG resolution, pixels per mm of the drawing */
+  readonly pxPerMm: number;
+  /** preview.svg / preview.png: the face at 1:1 */
+  readonly preview: { readonly widthMm: number; readonly widthPx: number; readonly heightPx: number };
+  /** assembly.svg / assembly.png: the dial on its stand with the shadow at pictures.date / pictures.time */
+  readonly assembly: {
+    readonly widthMm: number;
+    readonly heightMm: number;
+    readonly widthPx: number;
+    readonly heightPx: number;
+    /** local date 'YYYY-MM-DD' */
+    readonly date: string;
+    /** the dial reading shown, 'HH:MM' */
+    readonly dialTime: string;
+    /** the local clock then, 'HH:MM:SS' */
+    readonly clock: string;
+    readonly daylightSaving: boolean;
+    /** the instant, ISO 8601 UTC */
+    readonly utc: string;
+    readonly sunAltitudeDeg: number;
+    /** from true north toward the east, degrees */
+    readonly sunAzimuthDeg: number;
+    /** 'west' or 'east': the style edge casting the shadow */
+    readonly shadowStyle: string;
+    /** face x of the shadow's edge on the face, mm */
+    readonly shadowEdgeXMm: number;
+    readonly wedgeTiltDeg: number;
+    readonly viewAzimuthDeg: number;
+    readonly viewElevationDeg: number;
+  };
+}
+
+/** template.pdf as laid out. */
+export interface TemplateSection {
+  readonly paper: string;
+  readonly orientation: string;
+  /** how many sheets across and down tile the plate */
+  readonly sheets: { readonly columns: number; readonly rows: number };
+  readonly overlapMm: number;
+  /** length of the calibration bar, mm */
+  readonly calibrationBarMm: number;
+  readonly scale: string;
+}
+
 /**
  * preview.png (rendered from the very preview.svg the plate outputs write),
  * assembly.svg and assembly.png (the dial on its wedge with the shadow for
  * pictures.date / pictures.time), and template.pdf (1:1 paper template);
  * the report's `pictures` and `template` sections.
  */
-export const picturesOutputs: Producer = async (ctx) => {
+export const picturesOutputs: Producer<PicturesSections> = async (ctx) => {
   // The pictures start first: their PNGs render on worker threads while the PDF is laid out here.
   const pictures = ctx.spec.pictures.write ? pictureOutputs(ctx) : undefined;
   const template = ctx.spec.template.write ? templateOutputs(ctx) : undefined;
   const [p, t] = await Promise.all([pictures, template]);
   return {
     files: [...(p?.files ?? []), ...(t?.files ?? [])],
-    report: { pictures: p?.report, template: t?.report },
+    report: { ...(p ? { pictures: p.report } : {}), ...(t ? { template: t.report } : {}) },
   };
 };
 
 /** preview.png, assembly.svg and assembly.png, and the report's `pictures` section. */
-async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: Record<string, unknown> }> {
+async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: PicturesSection }> {
   const { spec, layout, drawing } = ctx;
   const pics = spec.pictures;
   const ppm = pics.pxPerMm;
@@ -67,7 +119,7 @@ async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[];
 }
 
 /** template.pdf and the report's `template` section. */
-async function templateOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: Record<string, unknown> }> {
+async function templateOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: TemplateSection }> {
   const { spec, layout, drawing } = ctx;
   const tOpts = { paper: spec.template.paper, orientation: spec.template.orientation, overlapMm: spec.template.overlap, marginMm: spec.template.margin };
   const pdf = await toTemplatePdf({ drawing, marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name }, tOpts);

@@ -1,8 +1,61 @@
+import type { Hemisphere, Mark } from '@umbrafab/geometry';
 import { kerfCompensate, toDxf, toSvg } from '@umbrafab/fabricate';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
 
-/** plate.dxf and preview.svg, and the report's marks, plate, gnomon and time sections. */
-export const plateOutputs: Producer = ({ spec, layout, drawing }) => {
+/** The report.json sections of the plate: the face's marks, the plate and the gnomon as laid out. */
+export interface PlateSections {
+  /** the hemisphere the face is drawn for (east on the right in the north, on the left in the south) */
+  readonly hemisphere: Hemisphere;
+  /** every line of the face, engraved or lying under the fin (`underGnomon`), docs/design.md §6 */
+  readonly marks: readonly Mark[];
+  readonly plate: PlateSection;
+  readonly gnomon: GnomonSection;
+}
+
+/** The plate as laid out; plate coordinates: mm from the plate's lower-left corner. */
+export interface PlateSection {
+  readonly widthMm: number;
+  readonly lengthMm: number;
+  readonly thicknessMm: number;
+  readonly cornerRadiusMm: number;
+  /** plate x of the gnomon's centre plane (the substyle), mm: plate x = substyleX + mark xMm */
+  readonly substyleX: number;
+  /** plate y of the face origin, mm: plate y = faceOriginY + mark y */
+  readonly faceOriginY: number;
+  /** mounting holes: centre (plate coordinates) and diameter, mm */
+  readonly holes: readonly { readonly xMm: number; readonly yMm: number; readonly diameterMm: number }[];
+  /** gnomon slots: centre (plate coordinates), width across the style and length along it, mm */
+  readonly slots: readonly { readonly xMm: number; readonly yMm: number; readonly widthMm: number; readonly lengthMm: number }[];
+  /** the cut as plate.dxf draws it */
+  readonly cut: {
+    readonly method: string;
+    /** cut width of the process, mm */
+    readonly kerfMm: number;
+    /** offset of the drawn profile from the nominal one, mm (outer grown, inner shrunk by it) */
+    readonly offsetMm: number;
+    /** outer profile as drawn, mm */
+    readonly outlineWidthMm: number;
+    readonly outlineLengthMm: number;
+    /** fit clearance per side of a tab in its slot, mm */
+    readonly fitClearancePerSideMm: number;
+  };
+}
+
+/** The gnomon as laid out on the face (face coordinates, mm). */
+export interface GnomonSection {
+  /** height of the style edges above the face, mm */
+  readonly heightMm: number;
+  /** fin thickness, mm: the two style edges lie at x = ±thickness/2 */
+  readonly thicknessMm: number;
+  /** face y of the style's two ends, mm */
+  readonly y0Mm: number;
+  readonly y1Mm: number;
+  /** tabs through the plate: face y of each centre and length along the style, mm */
+  readonly tabs: readonly { readonly centerYMm: number; readonly lengthMm: number }[];
+}
+
+/** plate.dxf and preview.svg, and the report's hemisphere, marks, plate and gnomon sections. */
+export const plateOutputs: Producer<PlateSections> = ({ spec, layout, drawing }) => {
   const cut = kerfCompensate(drawing, spec.process.kerf);
   const dxf = toDxf(drawing, { method: spec.process.method, kerfMm: spec.process.kerf });
   const svg = previewSvgText({ spec, layout, drawing });
@@ -39,7 +92,6 @@ export const plateOutputs: Producer = ({ spec, layout, drawing }) => {
         y1Mm: layout.gnomon.y1Mm,
         tabs: layout.gnomon.tabs,
       },
-      time: layout.time,
     },
   };
 };

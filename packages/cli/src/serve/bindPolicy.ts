@@ -4,6 +4,9 @@ import { UsageError } from '../commands/commandTypes.ts';
 /** The address the page is served on when none is asked for: loopback only. */
 export const DEFAULT_HOST = '127.0.0.1';
 
+/** The page's port when --port is not given. */
+export const DEFAULT_PORT = 7370;
+
 /** Is this a loopback address or name (127.0.0.0/8, ::1, localhost)? Only loopback binds are safe by default. */
 export function isLoopbackHost(host: string): boolean {
   const h = host.replace(/^\[|\]$/g, '').toLowerCase();

@@ -5,7 +5,7 @@ import { resolve } from 'node:path';
 import { SpecError } from '@umbrafab/geometry';
 import { parseSpecText, readSpecText } from '../readSpec.ts';
 import { starterSpecYaml } from '../starterSpec.ts';
-import { bindPolicy } from './bindPolicy.ts';
+import { bindPolicy, DEFAULT_PORT } from './bindPolicy.ts';
 import { buildCache } from './buildCache.ts';
 import { fullBuilder } from './fullBuilder.ts';
 import { handleRequest } from './handleRequest.ts';
@@ -38,7 +38,7 @@ export interface RunningServer {
   readonly close: () => Promise<void>;
 }
 
-export const DEFAULT_PORT = 7370;
+export { DEFAULT_PORT } from './bindPolicy.ts';
 
 /**
  * Start the local page server (node:http). Refuses a non-loopback host

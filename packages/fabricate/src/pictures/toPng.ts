@@ -1,4 +1,12 @@
-import { Resvg, renderAsync } from '@resvg/resvg-js';
+import { createRequire } from 'node:module';
+import type * as ResvgJs from '@resvg/resvg-js';
+
+/**
+ * The rasteriser (resvg, a native module) loads on the first picture, not
+ * with this package: commands that write no PNG never load it.
+ */
+let resvgJs: Promise<typeof ResvgJs> | undefined;
+const loadResvg = (): Promise<typeof ResvgJs> => (resvgJs ??= import('@resvg/resvg-js'));
 
 /** Options of `toPng`. */
 export interface PngOptions {
@@ -27,6 +35,7 @@ export function toPng(svg: string, options: Partial<PngOptions> = {}): Uint8Arra
   if (!(Number.isFinite(o.pxPerMm) && o.pxPerMm > 0 && o.pxPerMm <= 50)) {
     throw new Error(`pxPerMm = ${o.pxPerMm} is not allowed: it must be a number greater than 0 and at most 50`);
   }
+  const { Resvg } = createRequire(import.meta.url)('@resvg/resvg-js') as typeof ResvgJs; // sync: a CommonJS load from this file's own dependencies
   const r = new Resvg(svg, resvgOptions(svg, o));
   return new Uint8Array(r.render().asPng());
 }
@@ -40,6 +49,7 @@ export async function toPngAsync(svg: string, options: Partial<PngOptions> = {})
   if (!(Number.isFinite(o.pxPerMm) && o.pxPerMm > 0 && o.pxPerMm <= 50)) {
     throw new Error(`pxPerMm = ${o.pxPerMm} is not allowed: it must be a number greater than 0 and at most 50`);
   }
+  const { renderAsync } = await loadResvg();
   const img = await renderAsync(svg, resvgOptions(svg, o));
   return new Uint8Array(img.asPng());
 }

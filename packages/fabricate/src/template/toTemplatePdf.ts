@@ -1,4 +1,4 @@
-import PDFDocument from 'pdfkit';
+import type PDFDocument from 'pdfkit';
 import type { Mark, Path, PlateDrawing, RoundedRect, Vec2 } from '@umbrafab/geometry';
 import { roundTo } from '../process/roundTo.ts';
 import { BORDER_MM, FOOTER_MM, PT_PER_MM, tileLayout, type PaperName, type TileLayout } from './templatePages.ts';
@@ -85,7 +85,8 @@ export async function toTemplatePdf(input: TemplateInput, options: Partial<Templ
   const o = { ...TEMPLATE_DEFAULTS, ...options };
   const d = input.drawing;
   const tiles = templateTiles(d, o);
-  const doc = new PDFDocument({
+  const { default: PDFKit } = await import('pdfkit'); // the PDF writer loads only when a template is written
+  const doc = new PDFKit({
     autoFirstPage: false,
     size: [tiles.pageWidthMm * PT_PER_MM, tiles.pageHeightMm * PT_PER_MM],
     margins: { top: 0, bottom: 0, left: 0, right: 0 },

@@ -1,4 +1,4 @@
-import Module, { type ManifoldToplevel } from 'manifold-3d';
+import type { ManifoldToplevel } from 'manifold-3d';
 
 let engine: Promise<ManifoldToplevel> | undefined;
 
@@ -12,7 +12,8 @@ let engine: Promise<ManifoldToplevel> | undefined;
  * @example const { Manifold } = await manifoldEngine();
  */
 export function manifoldEngine(): Promise<ManifoldToplevel> {
-  engine ??= Module().then((wasm) => {
+  // The module itself (and its WASM) loads only when a solid needs a boolean, not with this package.
+  engine ??= import('manifold-3d').then(({ default: Module }) => Module()).then((wasm) => {
     wasm.setup();
     return wasm;
   });

@@ -12,3 +12,8 @@ export * from './faceSeesSun.ts';
 export * from './planarDateLine.ts';
 export * from './planarMeanTimeCurve.ts';
 export * from './lineHourAngle.ts';
+export * from './plateFrame.ts';
+export * from './layoutPlanar.ts';
+export * from './planarPlateDrawing.ts';
+export * from './planarGnomonSolid.ts';
+export * from './planarInstallSheet.ts';

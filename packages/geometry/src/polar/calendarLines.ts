@@ -8,6 +8,7 @@ import { DEG } from '../guards.ts';
 import { formatIsoDate, parseLocalDate } from '../sun/localDate.ts';
 import { offsetHoursAt } from '../sun/zoneOffsets.ts';
 import type { DialLayout } from './layoutDial.ts';
+import type { DialSpec } from '../spec/schema.ts';
 import { markField, nodusFootY } from './markField.ts';
 
 /** One date (declination) line of a nodus dial. */
@@ -36,7 +37,7 @@ export const DATE_LINE_STEP_MM = 1;
 const SAME_LINE_DEG = 0.1;
 const MONTHS = ['JAN', 'FEB', 'MAR', 'APR', 'MAY', 'JUN', 'JUL', 'AUG', 'SEP', 'OCT', 'NOV', 'DEC'] as const;
 
-interface Entry {
+export interface DateLineEntry {
   readonly label: string;
   readonly engraved: string;
   readonly date: string;
@@ -67,8 +68,8 @@ export function calendarLines(layout: DialLayout): readonly CalendarLine[] {
     }
     return [];
   }
-  const entries = chosenEntries(layout);
-  const groups: Entry[][] = [];
+  const entries = dateLineEntries(spec);
+  const groups: DateLineEntry[][] = [];
   for (const e of entries) {
     const g = e.custom ? undefined : groups.find((gr) => !gr[0].custom && Math.abs(gr[0].declinationRad - e.declinationRad) < SAME_LINE_DEG * DEG);
     if (g) g.push(e);
@@ -85,12 +86,12 @@ export function calendarLines(layout: DialLayout): readonly CalendarLine[] {
   return lines.sort((a, b) => b.declinationDeg - a.declinationDeg);
 }
 
-function chosenEntries(layout: DialLayout): Entry[] {
-  const { spec } = layout;
+/** The dates a spec asks to draw (calendar.lines and calendar.dates), each with its declination (shared by every face type). */
+export function dateLineEntries(spec: DialSpec): DateLineEntry[] {
   const year = spec.calendar.year;
   const zone = spec.site.timezone;
   const sets = new Set(spec.calendar.lines);
-  const out: Entry[] = [];
+  const out: DateLineEntry[] = [];
   if (sets.size > 0) {
     for (const l of standardDateLines(year)) {
       const pick = sets.has('zodiac') || (sets.has('solstices') && l.kind === 'solstice') || (sets.has('equinox') && l.kind === 'equinox');

@@ -93,6 +93,9 @@ interface MarkTime {
  * @example layoutDial(parseSpec({ site: { latitude: 41.2, longitude: -8.6, timezone: 'Europe/Lisbon' } }))
  */
 export function layoutDial(spec: DialSpec): DialLayout {
+  if (spec.face && spec.face.type !== 'polar') {
+    throw new SpecError('face.type', spec.face.type, 'allowed here: "polar" (this command draws the polar plate; `umbrafab build` and `umbrafab check` take every face type)');
+  }
   const hemisphere: Hemisphere = spec.site.latitude >= 0 ? 'north' : 'south';
   const h = spec.gnomon.height;
   const t = spec.gnomon.thickness;
@@ -207,7 +210,7 @@ export function layoutDial(spec: DialSpec): DialLayout {
   return { spec, hemisphere, marks, numerals, title, gnomon, plate, time, notes };
 }
 
-function timeLayout(spec: DialSpec): TimeLayout {
+export function timeLayout(spec: DialSpec): TimeLayout {
   const offset = Math.round(zoneYearOffsets(spec.site.timezone, spec.calendar.year).standardOffsetHours * 60);
   const meridian = standardMeridianDeg(spec.site.timezone, spec.calendar.year);
   const standard = spec.dial.reads === 'standard';

@@ -6,3 +6,4 @@ export * from './shadowOnFace.ts';
 export * from './drawnMarks.ts';
 export * from './marksFromPlate.ts';
 export * from './checkDial.ts';
+export * from './checkPlanar.ts';

@@ -21,11 +21,13 @@ const EPS_MM = 1e-9;
  * border a triangle facing upward (normal z > 0) above the face (z > 0).
  * For a plain fin these are the two top edges at z = height; a nodus notch
  * adds its sloping flanks. The mesh must be closed and outward-wound
- * (validateMesh), as gnomonSolid makes it.
+ * (validateMesh), as gnomonSolid makes it. With `fromRoot` (the fin of a
+ * face whose style rises from a root, planarGnomonSolid) an edge may end on
+ * the face (z = 0).
  *
  * @example styleEdges(gnomonSolid().mesh).plusX // [[[1.5, −60, 20], [1.5, 60, 20]]]
  */
-export function styleEdges(mesh: Mesh): StyleEdges {
+export function styleEdges(mesh: Mesh, options: { readonly fromRoot?: boolean } = {}): StyleEdges {
   const P = mesh.positions;
   let xMin = Infinity;
   let xMax = -Infinity;
@@ -50,7 +52,8 @@ export function styleEdges(mesh: Mesh): StyleEdges {
       const b = tri[(i + 1) % 3];
       const pa = P[a];
       const pb = P[b];
-      if (!(pa[2] > EPS_MM && pb[2] > EPS_MM)) continue;
+      // A style rising from a root on the face (ψ > 0, `fromRoot`) has one end at z = 0.
+      if (options.fromRoot ? !(Math.max(pa[2], pb[2]) > EPS_MM && Math.min(pa[2], pb[2]) > -EPS_MM) : !(pa[2] > EPS_MM && pb[2] > EPS_MM)) continue;
       const side = Math.abs(pa[0] - xMin) < EPS_MM && Math.abs(pb[0] - xMin) < EPS_MM ? 'minusX' : Math.abs(pa[0] - xMax) < EPS_MM && Math.abs(pb[0] - xMax) < EPS_MM ? 'plusX' : null;
       if (!side) continue;
       const key = a < b ? `${a},${b}` : `${b},${a}`;

@@ -8,6 +8,7 @@ import { installSection } from './sections/installSection.ts';
 import { partsSection } from './sections/partsSection.ts';
 import { templateSection } from './sections/templateSection.ts';
 import { picturesSection } from './sections/picturesSection.ts';
+import { faceSection } from './sections/faceSection.ts';
 
 /**
  * The dial spec schema: one source for validation, defaults and the field
@@ -69,6 +70,7 @@ export const specSchema = z.strictObject({
     timezone: z.string({ error: 'allowed: an IANA time zone name in quotes, e.g. "Europe/Lisbon"' }).describe('IANA time zone name, e.g. "Europe/Lisbon"'),
     place: freeText({ maxLength: 60 }).optional().describe('place name for the title block (optional)'),
   }),
+  face: faceSection,
   dial: z
     .strictObject({
       reads: oneOf(['solar', 'standard']).default('solar').describe('solar: apparent solar time; standard: lines shifted to the zone standard meridian'),

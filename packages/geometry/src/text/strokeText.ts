@@ -1,10 +1,11 @@
-import fonts from 'hersheytext/hersheytext.json' with { type: 'json' };
+import futural from './hershey/futural.json' with { type: 'json' };
 import type { Path, Vec2 } from '../types.ts';
 
 /**
  * Single-stroke text from the Hershey "futural" (Roman simplex) font, as
- * shipped by the `hersheytext` package (MIT; the Hershey fonts were created
- * by Dr. A. V. Hershey at the U.S. National Bureau of Standards). Glyph data:
+ * vendored from the `hersheytext` package in `hershey/futural.json` (its
+ * provenance and licences in `hershey/README.md`; the Hershey fonts were
+ * created by Dr. A. V. Hershey at the U.S. National Bureau of Standards). Glyph data:
  * an SVG-like "M x,y L x,y …" path on a grid whose cap height runs from y=1
  * (top) to y=22 (baseline), y downward; `o` is half the advance width.
  * Characters are indexed from "!" (code 33), as the package's own reader does.
@@ -14,7 +15,7 @@ interface Glyph {
   readonly o: number;
 }
 
-const FONT = (fonts as unknown as Record<string, { chars: Glyph[] }>).futural.chars;
+const FONT: readonly Glyph[] = futural.chars;
 const CAP_TOP = 1;
 const BASELINE = 22;
 const CAP_UNITS = BASELINE - CAP_TOP;

@@ -1,0 +1,166 @@
+// Builds the CLI to plain JavaScript (packages/cli/dist/), so the bin runs
+// with no TypeScript transform: one esbuild bundle of the three workspace
+// packages, split at every dynamic import() so that a command loads only the
+// code (and the third-party modules) its outputs need.
+//
+//   node packages/cli/scripts/build.mjs        (the root `prepare` hook runs it on install)
+//
+// Layout: dist/<hash>/main.mjs (the CLI), fullBuildWorker.mjs (the page
+// server's build thread), chunk-*.mjs, page/ (the page's static files), and
+// dist/current.json naming that folder with every input's size and mtime, so
+// the bin (scripts/distEntry.mjs) can tell a stale build and rebuild it. The
+// folder name is a hash of the output, so concurrent rebuilds of the same
+// sources agree and never write into a folder another process is running.
+//
+// Plain-JavaScript dependencies are bundled too (zod alone is 95 module
+// files, yargs about 40: one file each parses much faster). The packages that
+// find their own files at run time (the PDF writer's font metrics, the
+// rasteriser's native binary, the mesh kernel's WASM) stay outside, imported
+// by their real path relative to the output (pnpm gives each package only its
+// own dependencies, so a bare name would not resolve from packages/cli/dist);
+// the code loads them with import() only when an output needs them.
+import { createHash } from 'node:crypto';
+import { cpSync, existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { builtinModules } from 'node:module';
+import { dirname, join, relative, resolve, sep } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const CLI = resolve(dirname(fileURLToPath(import.meta.url)), '..');
+const ROOT = resolve(CLI, '../..');
+const DIST = join(CLI, 'dist');
+const PAGE = join(CLI, 'src/serve/page');
+/** Files whose change must rebuild beside the bundled sources: this script and the package manifests (exports, sideEffects). */
+const CONFIG_INPUTS = [fileURLToPath(import.meta.url), ...['cli', 'geometry', 'fabricate'].map((p) => join(ROOT, 'packages', p, 'package.json'))];
+
+/** The dist format; a change here rebuilds every dist. */
+const FORMAT = 1;
+/** Packages left outside the bundle: they read files beside their own code. */
+const NOT_BUNDLED = new Set(['pdfkit', '@resvg/resvg-js', 'manifold-3d']);
+
+/**
+ * Build dist/ from the sources and point dist/current.json at it.
+ * @returns the absolute path of the built main.mjs
+ */
+export async function buildDist() {
+  const esbuild = await import('esbuild');
+  mkdirSync(DIST, { recursive: true });
+  const tmp = join(DIST, `.tmp-${process.pid}-${Date.now().toString(36)}`);
+  const externals = new Set();
+  try {
+    const r = await esbuild.build({
+      absWorkingDir: CLI,
+      entryPoints: { main: 'src/main.ts', fullBuildWorker: 'src/serve/fullBuildWorker.ts' },
+      outdir: tmp,
+      bundle: true,
+      splitting: true,
+      format: 'esm',
+      platform: 'node',
+      target: 'node20',
+      outExtension: { '.js': '.mjs' },
+      chunkNames: 'chunk-[hash]',
+      metafile: true,
+      sourcemap: 'linked',
+      sourcesContent: false,
+      legalComments: 'none',
+      // Bundled CommonJS packages require() Node's built-ins: give ESM chunks a require.
+      banner: { js: "import { createRequire as __umbrafabRequire } from 'node:module';\nconst require = __umbrafabRequire(import.meta.url);" },
+      logLevel: 'error',
+      plugins: [thirdPartyByRealPath(externals)],
+    });
+    cpSync(PAGE, join(tmp, 'page'), { recursive: true });
+
+    const inputs = [
+      ...Object.keys(r.metafile.inputs).map((p) => resolve(CLI, p)),
+      ...listFiles(PAGE),
+      ...CONFIG_INPUTS,
+      ...externals,
+    ];
+    const hash = createHash('sha256');
+    for (const f of listFiles(tmp).sort()) hash.update(relative(tmp, f)).update('\0').update(readFileSync(f)).update('\0');
+    const name = hash.digest('hex').slice(0, 16);
+    const dir = join(DIST, name);
+    if (existsSync(join(dir, 'main.mjs'))) rmSync(tmp, { recursive: true, force: true });
+    else {
+      rmSync(dir, { recursive: true, force: true });
+      try {
+        renameSync(tmp, dir);
+      } catch (e) {
+        if (!existsSync(join(dir, 'main.mjs'))) throw e; // another process put the same build there first
+        rmSync(tmp, { recursive: true, force: true });
+      }
+    }
+    const current = { format: FORMAT, dir: name, inputs: [...new Set(inputs)].sort().map((f) => stamp(f)) };
+    const part = join(DIST, `.current-${process.pid}.json`);
+    writeFileSync(part, JSON.stringify(current) + '\n');
+    renameSync(part, join(DIST, 'current.json'));
+    pruneOld(name);
+    return join(dir, 'main.mjs');
+  } finally {
+    rmSync(tmp, { recursive: true, force: true });
+  }
+}
+
+/** [path relative to packages/cli, size, mtime in ms] of one input. */
+function stamp(file) {
+  const s = statSync(file);
+  return [relative(CLI, file).split(sep).join('/'), s.size, s.mtimeMs];
+}
+
+function listFiles(dir) {
+  const out = [];
+  for (const e of readdirSync(dir, { withFileTypes: true })) {
+    const p = join(dir, e.name);
+    if (e.isDirectory()) out.push(...listFiles(p));
+    else out.push(p);
+  }
+  return out;
+}
+
+/** "@scope/name/sub/path" → "@scope/name"; "name/sub" → "name". */
+function packageName(specifier) {
+  const parts = specifier.split('/');
+  return specifier.startsWith('@') ? parts.slice(0, 2).join('/') : parts[0];
+}
+
+/** Remove older builds, keeping the current one and any built in the last hour (a running process may still load its chunks). */
+function pruneOld(keep) {
+  const hourAgo = Date.now() - 3600_000;
+  for (const e of readdirSync(DIST, { withFileTypes: true })) {
+    if (!e.isDirectory() || e.name === keep) continue;
+    const p = join(DIST, e.name);
+    try {
+      if (statSync(p).mtimeMs < hourAgo) rmSync(p, { recursive: true, force: true });
+    } catch {
+      /* removed meanwhile */
+    }
+  }
+}
+
+/**
+ * Node built-ins and the NOT_BUNDLED packages are left to Node, the latter
+ * rewritten to the real path of the file esbuild resolves, relative to the
+ * output folder (dist/<hash>/); everything else is bundled.
+ */
+function thirdPartyByRealPath(externals) {
+  const builtins = new Set(builtinModules);
+  return {
+    name: 'third-party-by-real-path',
+    setup(build) {
+      build.onResolve({ filter: /^[^./]/ }, async (args) => {
+        if (args.pluginData === 'inner') return undefined;
+        if (args.path.startsWith('node:') || builtins.has(args.path)) return { path: args.path, external: true };
+        if (args.path.startsWith('@umbrafab/') || !NOT_BUNDLED.has(packageName(args.path))) return undefined;
+        const r = await build.resolve(args.path, { kind: args.kind, resolveDir: args.resolveDir, importer: args.importer, pluginData: 'inner' });
+        if (r.errors.length) return { errors: r.errors };
+        externals.add(r.path);
+        const fromOut = relative(join(DIST, 'x'), r.path).split(sep).join('/');
+        return { path: fromOut.startsWith('.') ? fromOut : `./${fromOut}`, external: true };
+      });
+    },
+  };
+}
+
+if (process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
+  const main = await buildDist();
+  console.log(`umbrafab: built ${relative(ROOT, dirname(main))}`);
+}

@@ -1,0 +1,86 @@
+import {
+  layoutPlanar,
+  mapMesh,
+  meshBounds,
+  planarGnomonSolid,
+  planarInstallSheet,
+  planarPlateDrawing,
+  validateMesh,
+  type DialSpec,
+  type PlanarLayout,
+  type PlateDrawing,
+} from '@umbrafab/geometry';
+import { engraveFromSpec, stlHeader, toDxf, toGnomonDxf, toPlanarInstallMd, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
+import { utf8 } from './outputs/outputTypes.ts';
+import type { OutputFile } from './writeFilesAtomic.ts';
+
+/** What a planar build produces, in memory (the same shape as the polar `BuildResult`). */
+export interface PlanarBuildResult {
+  readonly layout: PlanarLayout;
+  readonly drawing: PlateDrawing;
+  readonly files: readonly OutputFile[];
+  readonly report: Record<string, unknown>;
+}
+
+/**
+ * The files of a horizontal, wall, meridian or equatorial face, through the
+ * same writers as the polar plate (plate.dxf, preview.svg, the engraving
+ * programs read the one `PlateDrawing`); the gnomon (a fin as gnomon.dxf
+ * for sheet work and gnomon.stl for printing, or an equatorial rod as
+ * gnomon.stl); install.md; report.json. No wedge: these faces mount flat
+ * on their wall, pillar or stand. Byte-identical run to run.
+ */
+export function buildPlanarFiles(spec: DialSpec, generator: string): PlanarBuildResult {
+  const layout = layoutPlanar(spec);
+  const drawing = planarPlateDrawing(layout);
+  const files: OutputFile[] = [];
+  files.push({ name: 'plate.dxf', bytes: utf8(toDxf(drawing, { method: spec.process.method, kerfMm: spec.process.kerf })) });
+  files.push({ name: 'preview.svg', bytes: utf8(toSvg(drawing, { caption: `${spec.name} - ${layout.faceType} face, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` })) });
+  const engraving = engraveFromSpec(spec, drawing);
+  files.push(...engraving.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })));
+
+  const part = planarGnomonSolid(layout);
+  const b = meshBounds(part.mesh);
+  // Laid flat for printing: the fin on its side (x → z), the rod on its end; +z up, min corner at the origin.
+  const flat = validateMesh(part.kind === 'fin'
+    ? mapMesh(part.mesh, ([x, y, z]) => [y - b.min[1], z - b.min[2], x - b.min[0]])
+    : mapMesh(part.mesh, ([x, y, z]) => [x - b.min[0], y - b.min[1], z - b.min[2]]));
+  files.push({ name: 'gnomon.stl', bytes: toStl(flat, { header: stlHeader([`umbrafab ${part.kind} for a ${layout.faceType} face, t=${part.thicknessMm} mm, style ${layout.gnomon.styleHeightDeg.toFixed(2)} deg`, spec.name]) }) });
+  if (part.kind === 'fin' && spec.process.method !== 'print') {
+    files.push({ name: 'gnomon.dxf', bytes: utf8(toGnomonDxf({ profile: part.profile, styleHeightMm: layout.gnomon.heightMm }, { kerfMm: spec.process.kerf })) });
+  }
+  files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout))) });
+
+  const names = [...files.map((f) => f.name), 'report.json'];
+  const report = {
+    generator,
+    spec,
+    face: {
+      type: layout.faceType,
+      styleHeightDeg: layout.gnomon.styleHeightDeg,
+      substyleHourAngleDeg: layout.substyleHourAngleDeg,
+      plateTurnDeg: layout.plateTurnDeg,
+      normalEnu: layout.face.normal,
+    },
+    hemisphere: layout.hemisphere,
+    marks: layout.marks.map((m) => ({ label: m.label, kind: m.kind, hourAngleDeg: m.hourAngleDeg, edge: m.edge, x0Mm: m.a[0], y0Mm: m.a[1], x1Mm: m.b[0], y1Mm: m.b[1], widthMm: m.widthMm, ...(m.underGnomon ? { underGnomon: true } : {}) })),
+    leftOut: layout.leftOut,
+    curves: layout.curves.map((c) => ({ label: c.label, kind: c.kind, pieces: c.paths.length })),
+    plate: {
+      widthMm: layout.plate.widthMm,
+      lengthMm: layout.plate.lengthMm,
+      thicknessMm: layout.plate.thicknessMm,
+      substyleX: layout.plate.substyleX,
+      faceOriginY: layout.plate.faceOriginY,
+      holes: layout.plate.holes.map((c) => ({ xMm: c.cx, yMm: c.cy, diameterMm: 2 * c.radiusMm })),
+      slots: layout.plate.slots.map((s) => ({ xMm: s.cx, yMm: s.cy, widthMm: s.widthMm, lengthMm: s.heightMm })),
+    },
+    gnomon: { ...layout.gnomon, profileAreaMm2: part.profileAreaMm2, belowFaceMm: part.belowFaceMm },
+    time: layout.time,
+    engraving: engraving.report,
+    notes: layout.notes,
+    files: names,
+  };
+  files.push({ name: 'report.json', bytes: utf8(toReportJson(report)) });
+  return { layout, drawing, files, report };
+}

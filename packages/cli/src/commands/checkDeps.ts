@@ -1,0 +1,8 @@
+// What `umbrafab check` needs, loaded by its run() only (a dynamic import of
+// this file), so that `--help`, `--version` and the other commands never
+// load the simulation. Named re-exports, not whole packages: the bundle
+// (scripts/build.mjs) then keeps this chunk to what check uses.
+export { checkDial, layoutDial, marksFromPlate, parseSpec } from '@umbrafab/geometry';
+export { checkTableText, toCheckJson, toCheckSvg } from '@umbrafab/fabricate';
+export { readSpecFile } from '../readSpec.ts';
+export { writeFilesAtomic } from '../writeFilesAtomic.ts';

@@ -1,0 +1,90 @@
+import { INSTALL_CAUTIONS } from '../install/installSheet.ts';
+import type { PlanarLayout } from './layoutPlanar.ts';
+
+/** The installation sheet of a planar face: plain data, every length mm, angle degrees. */
+export interface PlanarInstallSheet {
+  readonly title: string;
+  readonly faceType: PlanarLayout['faceType'];
+  readonly latitudeDeg: number;
+  readonly longitudeDeg: number;
+  readonly styleHeightDeg: number;
+  readonly substyleHourAngleDeg: number;
+  /** the steps in order, plain sentences */
+  readonly steps: readonly string[];
+  readonly leftOut: readonly string[];
+  readonly cautions: readonly string[];
+}
+
+const f1 = (x: number) => x.toFixed(1);
+const f2 = (x: number) => x.toFixed(2);
+
+/**
+ * How to set a horizontal, wall, meridian or equatorial face (common
+ * practice): a level face is levelled and its substyle turned onto the true
+ * meridian; a wall face is marked with a plumb line and a level — the root
+ * (the fin's foot end) and the substyle's angle from the plumb line — then
+ * fixed through its holes; a meridian face is plumbed and its style set
+ * level-true at the latitude; an equatorial face is tilted to 90° − |φ| with
+ * its rod on the celestial pole. Angles and lengths come from the layout.
+ */
+export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
+  const spec = layout.spec;
+  const lat = spec.site.latitude;
+  const pole = lat >= 0 ? 'north' : 'south';
+  const eqWard = lat >= 0 ? 'south' : 'north';
+  const psi = layout.gnomon.styleHeightDeg;
+  const steps: string[] = [];
+  const rootAt = `${f1(layout.plate.substyleX)} mm from the plate's left edge and ${f1(layout.plate.faceOriginY)} mm from its lower edge`;
+  switch (layout.faceType) {
+    case 'horizontal':
+      steps.push(
+        `Set the plate level in both directions with a spirit level on a firm pillar (a digital level should read 0.0°).`,
+        `Turn it so the substyle (the reference line under the fin, through the root at ${rootAt}) lies on the true meridian, the fin rising toward the true ${pole}. Find the meridian from a plumb line's shadow at local apparent noon, never from the Sun itself.`,
+        `Fit the fin in its slots: its style must rise at ${f2(psi)}° from the plate (the site's |latitude|) toward the ${pole}.`,
+      );
+      break;
+    case 'vertical': {
+      const f = spec.face!;
+      steps.push(
+        `The wall's declination is ${f1(Math.abs(f.wallDeclination))}° ${f.wallDeclination >= 0 ? 'west' : 'east'} of due ${eqWard}${f.reclination ? `, the face leaning ${f.reclination > 0 ? 'back' : 'forward'} ${f1(Math.abs(f.reclination))}° from upright` : ''}; measure it again on the day (umbrafab wall) if the wall may differ from the spec.`,
+        `Hang a plumb line where the dial goes and mark it on the wall with a pencil. Choose the root's point on that line: the root is the fin's sharp foot, at ${rootAt}.`,
+        Math.abs(layout.plateTurnDeg) > 1e-9
+          ? `The substyle is not plumb: mark it through the root at ${f2(Math.abs(layout.plateTurnDeg))}° from the plumb line, turned ${layout.plateTurnDeg > 0 ? 'clockwise' : 'anticlockwise'} seen from in front (set a bevel gauge or a digital level on the drawn line). The plate's long edges follow the substyle; its 'plumb line' reference line must lie on your pencil line.`
+          : `The substyle is plumb: the plate's long edges stand vertical; check them with a level.`,
+        `Hold the plate on the marks, drill the fixings through its holes (wall plugs and stainless screws sized for the wall and the plate's weight), and fix it.`,
+        `Fit the fin in its slots, square to the face: its style makes ${f2(psi)}° with the face and points at the celestial ${pole} pole.`,
+      );
+      break;
+    }
+    case 'meridian':
+      steps.push(
+        `The face looks due ${spec.face!.facing}: set it plumb (check both edges with a level) in the vertical plane of the true meridian.`,
+        `The substyle (the plate's long axis) must rise toward the ${pole} at ${f2(Math.abs(lat))}° from the horizontal (the site's |latitude|): mark a level line through the plate's centre, then the substyle at that angle with a bevel gauge.`,
+        `Fix the plate through its holes, then fit the fin: its style runs parallel to the face, ${f1(layout.gnomon.heightMm)} mm above it.`,
+      );
+      break;
+    case 'equatorial':
+      steps.push(
+        `The plate lies square to the Earth's axis: tilt it ${f2(90 - Math.abs(lat))}° from the horizontal (90° − |latitude|), its ${spec.face!.side} face toward the ${spec.face!.side === 'upper' ? `celestial ${pole} pole` : `${eqWard}ern sky`}.`,
+        `Turn it so the 12 line points straight down the slope, on the true meridian; the rod then points at the celestial ${pole} pole.`,
+        `Push the rod (${f1(layout.gnomon.thicknessMm)} mm diameter) through the centre hole until ${f1(layout.gnomon.heightMm)} mm stands above each face; the rod's shadow is a band centred on the line.`,
+      );
+      break;
+  }
+  steps.push(
+    spec.dial.reads === 'solar'
+      ? 'The dial reads apparent solar time: add the equation of time and the longitude correction (report.json, time) to get clock time.'
+      : `The lines are shifted for standard time at ${f2(layout.time.standardMeridianDeg)}° (longitude correction ${f1(layout.time.longitudeCorrectionMin)} min); add the equation of time (and an hour in summer time).`,
+  );
+  return {
+    title: spec.name,
+    faceType: layout.faceType,
+    latitudeDeg: lat,
+    longitudeDeg: spec.site.longitude,
+    styleHeightDeg: psi,
+    substyleHourAngleDeg: layout.substyleHourAngleDeg,
+    steps,
+    leftOut: layout.leftOut.map((l) => `${l.label}: ${l.reason}`),
+    cautions: INSTALL_CAUTIONS,
+  };
+}

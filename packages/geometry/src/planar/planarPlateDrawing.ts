@@ -1,0 +1,65 @@
+import type { DrawnLine, DrawnText, PlateDrawing } from '../plate/plateDrawing.ts';
+import { clipPolyline } from '../polar/clipPolyline.ts';
+import type { Path, Vec2 } from '../types.ts';
+import type { PlanarLayout } from './layoutPlanar.ts';
+
+/**
+ * The plate drawing of a planar layout: the same plain shape as the polar
+ * plate's (`plateDrawing`), so plate.dxf, preview.svg and the engraving
+ * programs read every face type alike. Face coordinates move to plate
+ * coordinates by (substyleX, faceOriginY). References (never cut): the
+ * substyle, the gnomon's footprint and, on a wall whose substyle leans, the
+ * plumb line through the face origin.
+ *
+ * @example planarPlateDrawing(layoutPlanar(spec)).lines.length
+ */
+export function planarPlateDrawing(layout: PlanarLayout): PlateDrawing {
+  const { plate, gnomon } = layout;
+  const dx = plate.substyleX;
+  const dy = plate.faceOriginY;
+  const move = (p: Vec2): Vec2 => [p[0] + dx, p[1] + dy];
+  const path = (pts: readonly Vec2[], closed = false): Path => ({ kind: 'path', points: pts.map(move), closed });
+
+  const lines: DrawnLine[] = layout.marks.filter((m) => !m.underGnomon).map((m) => ({
+    label: `${m.label} ${m.edge}`,
+    kind: m.kind,
+    widthMm: m.widthMm,
+    path: path([m.a, m.b]),
+  }));
+  for (const c of layout.curves) {
+    c.paths.forEach((p, i) => lines.push({ label: `${c.label}${c.paths.length > 1 ? ` ${i + 1}` : ''}`, kind: 'curve', widthMm: c.widthMm, path: path(p) }));
+  }
+  const text: DrawnText[] = [...layout.numerals, ...layout.title].map((b) => ({
+    role: b.role,
+    text: b.text,
+    strokeWidthMm: b.strokeWidthMm,
+    strokes: b.strokes.map((s) => path(s.points)),
+  }));
+  const t2 = gnomon.thicknessMm / 2;
+  const reference: { label: string; path: Path }[] = [
+    { label: 'substyle', path: path([[0, -dy], [0, plate.lengthMm - dy]]) },
+    gnomon.kind === 'rod'
+      ? { label: 'rod footprint', path: path([[-t2, -t2], [t2, -t2], [t2, t2], [-t2, t2]], true) }
+      : { label: 'gnomon footprint', path: path([[-t2, gnomon.y0Mm], [t2, gnomon.y0Mm], [t2, gnomon.y1Mm], [-t2, gnomon.y1Mm]], true) },
+  ];
+  if (layout.faceType === 'vertical' && Math.abs(layout.plateTurnDeg) > 1e-9) {
+    const a = (layout.plateTurnDeg * Math.PI) / 180;
+    // The plumb line in plate coordinates: the face's "up" turned back by the plate's turn.
+    const u: Vec2 = [-Math.sin(a), Math.cos(a)];
+    const r = Math.hypot(plate.widthMm, plate.lengthMm);
+    const box = { xMinMm: -dx, xMaxMm: plate.widthMm - dx, yMinMm: -dy, yMaxMm: plate.lengthMm - dy };
+    for (const piece of clipPolyline([[-u[0] * r, -u[1] * r], [u[0] * r, u[1] * r]], box)) reference.push({ label: 'plumb line', path: path(piece) });
+  }
+  return {
+    widthMm: plate.widthMm,
+    lengthMm: plate.lengthMm,
+    substyleX: dx,
+    faceOriginY: dy,
+    outline: { kind: 'rect', cx: plate.widthMm / 2, cy: plate.lengthMm / 2, widthMm: plate.widthMm, heightMm: plate.lengthMm, cornerRadiusMm: plate.cornerRadiusMm },
+    holes: plate.holes,
+    slots: plate.slots,
+    lines,
+    text,
+    reference,
+  };
+}

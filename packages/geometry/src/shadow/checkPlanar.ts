@@ -1,0 +1,413 @@
+import { SpecError } from '../errors.ts';
+import { DEG } from '../guards.ts';
+import type { Vec3 } from '../parts/mesh.ts';
+import { dot3 } from '../parts/vec3.ts';
+import { dateLineEntries } from '../polar/calendarLines.ts';
+import { parseClock } from '../spec/parseClock.ts';
+import { instantAtHourAngle, sunOnDay, sunTrack, type RefractionModel, type SunDay, type SunSample } from '../sun/sunTrack.ts';
+import type { Vec2 } from '../types.ts';
+import { edgeSign } from '../planar/styleEdgeAnchor.ts';
+import type { PlanarLayout, PlanarMark } from '../planar/layoutPlanar.ts';
+import { planarGnomonSolid } from '../planar/planarGnomonSolid.ts';
+import type { FinEdge } from '../planar/planarTypes.ts';
+import { sunDirectionEnu } from '../planar/sunDirectionEnu.ts';
+import { styleEdges, type Edge3 } from './styleEdges.ts';
+
+/** Rate of the hour angle, rad per second of time (one turn per solar day, as the polar check). */
+const HOUR_ANGLE_RAD_PER_S = (2 * Math.PI) / 86_400;
+/** Curves (date lines, mean-time curves) are drawn as polylines of sampled points: their own tolerance, mm. */
+export const CURVE_TOLERANCE_MM = 0.05;
+
+export interface PlanarCheckOptions {
+  /** largest accepted shadow-to-line distance, mm (default spec.check.tolerance) */
+  readonly toleranceMm?: number;
+  /** sweep step, minutes (default spec.check.sampling.stepMinutes, 1) */
+  readonly stepMinutes?: number;
+  readonly everyDays?: number;
+  readonly refraction?: RefractionModel;
+  readonly year?: number;
+  /** the lines as drawn (default: the layout's marks), e.g. one moved on purpose */
+  readonly marks?: readonly PlanarMark[];
+}
+
+export interface PlanarMarkCheck {
+  readonly label: string;
+  readonly kind: PlanarMark['kind'];
+  readonly edge: FinEdge;
+  readonly hourAngleDeg: number;
+  /** days on which the Sun is up and in front of the face at this mark's hour angle */
+  readonly litDays: number;
+  /** lit days on which the style's shadow reaches the drawn line */
+  readonly reachedDays: number;
+  /** perpendicular distance of the style's shadow from the drawn line, mm: worst (signed) and mean |·| */
+  readonly errorMm: { readonly worst: number; readonly meanAbs: number };
+  /** the same in seconds of time (distance / the shadow's speed across the line) */
+  readonly errorS: { readonly worst: number; readonly meanAbs: number };
+  readonly worstDate: string | null;
+  readonly daysOverTolerance: number;
+}
+
+export interface PlanarCurveCheck {
+  readonly label: string;
+  readonly kind: 'date' | 'meanTime';
+  /** sun positions tested (those whose nodus shadow falls inside the drawn field) */
+  readonly samples: number;
+  /** largest distance of the nodus shadow from the drawn curve, mm */
+  readonly worstMm: number;
+  /** the same in seconds of time (along the Sun's hourly motion) */
+  readonly worstS: number;
+  readonly worstDate: string | null;
+  readonly pass: boolean;
+}
+
+export interface PlanarCheckResult {
+  readonly faceType: PlanarLayout['faceType'];
+  readonly year: number;
+  readonly toleranceMm: number;
+  readonly curveToleranceMm: number;
+  readonly stepMinutes: number;
+  readonly everyDays: number;
+  readonly refraction: RefractionModel;
+  /** minutes of sunshine on the face over the simulated days, at the sweep step */
+  readonly litMinutes: number;
+  readonly sunPositions: number;
+  readonly gnomon: { readonly kind: 'fin' | 'rod'; readonly styleEdges: number; readonly triangles: number };
+  readonly method: readonly string[];
+  readonly marks: readonly PlanarMarkCheck[];
+  readonly curves: readonly PlanarCurveCheck[];
+  readonly worst: { readonly label: string; readonly edge: FinEdge; readonly date: string; readonly errorMm: number; readonly errorS: number } | null;
+  readonly failures: readonly { readonly label: string; readonly edge: FinEdge; readonly errorMm: number; readonly date: string }[];
+  readonly pass: boolean;
+}
+
+/**
+ * Prove a planar face (horizontal, wall, meridian, equatorial) on its real
+ * gnomon: the solid of `planarGnomonSolid` (what gnomon.stl / gnomon.dxf
+ * make), the real Sun of `sunTrack` (astronomy-engine, topocentric) over the
+ * year, day by day:
+ * 1. a sweep every `stepMinutes` counts the minutes the face is lit (Sun
+ *    above the horizon and in front of the face, n · s > 0);
+ * 2. for every drawn line, the instant the Sun's hour angle equals the
+ *    line's; its direction turned into the face frame; the style edges
+ *    found in the mesh (`styleEdges`: the fin's two top edges; for a rod,
+ *    the centre of its top) projected along the rays onto the face; the
+ *    error is the perpendicular distance of that shadow from the drawn line
+ *    where the shadow overlaps it, and in seconds through the shadow's
+ *    speed across the line (the Sun turned by one second of hour angle);
+ * 3. date lines: on each line's date, at the hour angles of the sweep, the
+ *    nodus (the style's point at `nodusAlongStyleMm` on the mesh edge) cast
+ *    with the declination held at the line's own (the drawing's claim);
+ *    mean-time curves: the real Sun at the curve's clock time on every
+ *    simulated day. Each: distance of the shadow from the drawn polyline.
+ *
+ * @example checkPlanar(layoutPlanar(parseSpec(raw))).pass
+ */
+export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = {}): PlanarCheckResult {
+  const spec = layout.spec;
+  const c = spec.check;
+  const toleranceMm = options.toleranceMm ?? c.tolerance;
+  const stepMinutes = options.stepMinutes ?? c.sampling.stepMinutes;
+  const everyDays = options.everyDays ?? c.sampling.everyDays;
+  const refraction = options.refraction ?? c.refraction;
+  const year = options.year ?? spec.calendar.year;
+  const drawn = options.marks ?? layout.marks.filter((m) => !m.underGnomon);
+  if (drawn.length === 0) throw new SpecError('marks', 0, 'allowed: at least one mark to check');
+  const face = layout.face;
+  const frame = (v: Vec3): Vec3 => [dot3(v, face.right), dot3(v, face.up), dot3(v, face.normal)];
+  const track = sunTrack({ latitudeDeg: spec.site.latitude, longitudeDeg: spec.site.longitude, timezone: spec.site.timezone, year, everyDays, refraction });
+  const part = planarGnomonSolid(layout);
+  const found = styleEdges(part.mesh, { fromRoot: true });
+  const finSideSign = Math.sign(dot3(face.fin, face.right)) || 1;
+  const edgesOf = (edge: FinEdge): readonly Edge3[] => (edgeSign(edge) * finSideSign > 0 ? found.plusX : found.minusX);
+  const rodTop = part.kind === 'rod' ? rodTopCentre(part.mesh.positions) : null;
+  const nodusOf = (edge: FinEdge): Vec3 | null => (layout.gnomon.nodusAlongStyleMm === null ? null : rodTop ?? nodusOnEdges(edgesOf(edge), layout));
+
+  const acc = drawn.map(() => ({ lit: 0, reached: 0, over: 0, worstMm: 0, worstS: 0, worstDate: null as string | null, sumMm: 0, sumS: 0 }));
+  const hours = drawn.map((m) => m.hourAngleDeg * DEG);
+  let litMinutes = 0;
+  let sunPositions = 0;
+  const stepMs = stepMinutes * 60_000;
+  const lit = (s: SunSample, sun: Vec3) => s.enu[2] > 0 && sun[2] > 0;
+
+  for (const day of track.days) {
+    for (let tMs = day.startMs; tMs < day.startMs + 86_400_000; tMs += stepMs) {
+      const s = sunOnDay(track, day, tMs);
+      sunPositions++;
+      if (lit(s, frame(s.enu))) litMinutes += stepMinutes;
+    }
+    drawn.forEach((m, i) => {
+      const t = instantAtHourAngle(track, day, hours[i]);
+      const s = sunOnDay(track, day, t);
+      sunPositions++;
+      const sun = frame(s.enu);
+      if (!lit(s, sun)) return;
+      const a = acc[i];
+      a.lit++;
+      const cast = rodTop ? rodShadowOnSegment(rodTop, sun, m.a, m.b) : shadowOnSegment(edgesOf(m.edge), sun, m.a, m.b);
+      if (!cast) return;
+      const moved = frame(turnSun(s.enu, spec.site.latitude * DEG, HOUR_ANGLE_RAD_PER_S));
+      const next = rodTop ? rodShadowOnSegment(rodTop, moved, m.a, m.b) : shadowOnSegment(edgesOf(m.edge), moved, m.a, m.b);
+      const speed = next ? next.meanOffsetMm - cast.meanOffsetMm : 0;
+      const errS = speed !== 0 ? -cast.errorMm / speed : 0;
+      a.reached++;
+      a.sumMm += Math.abs(cast.errorMm);
+      a.sumS += Math.abs(errS);
+      if (Math.abs(cast.errorMm) > toleranceMm) a.over++;
+      if (a.worstDate === null || Math.abs(cast.errorMm) > Math.abs(a.worstMm)) {
+        a.worstMm = cast.errorMm;
+        a.worstS = errS;
+        a.worstDate = day.date;
+      }
+    });
+  }
+
+  const marks: PlanarMarkCheck[] = drawn.map((m, i) => {
+    const a = acc[i];
+    return {
+      label: m.label,
+      kind: m.kind,
+      edge: m.edge,
+      hourAngleDeg: m.hourAngleDeg,
+      litDays: a.lit,
+      reachedDays: a.reached,
+      errorMm: { worst: a.worstMm, meanAbs: a.reached ? a.sumMm / a.reached : 0 },
+      errorS: { worst: a.worstS, meanAbs: a.reached ? a.sumS / a.reached : 0 },
+      worstDate: a.worstDate,
+      daysOverTolerance: a.over,
+    };
+  });
+
+  const curves = checkCurves(layout, track.days, frame, nodusOf, (s) => lit(s, frame(s.enu)), track);
+  sunPositions += curves.reduce((n, cv) => n + cv.samples, 0);
+
+  let worst: PlanarCheckResult['worst'] = null;
+  for (const m of marks) {
+    if (m.worstDate !== null && (worst === null || Math.abs(m.errorMm.worst) > Math.abs(worst.errorMm))) {
+      worst = { label: m.label, edge: m.edge, date: m.worstDate, errorMm: m.errorMm.worst, errorS: m.errorS.worst };
+    }
+  }
+  const failures = marks
+    .filter((m) => m.daysOverTolerance > 0 && m.worstDate !== null)
+    .map((m) => ({ label: m.label, edge: m.edge, errorMm: m.errorMm.worst, date: m.worstDate as string }))
+    .sort((p, q) => Math.abs(q.errorMm) - Math.abs(p.errorMm) || p.label.localeCompare(q.label));
+  return {
+    faceType: layout.faceType,
+    year,
+    toleranceMm,
+    curveToleranceMm: Math.max(toleranceMm, CURVE_TOLERANCE_MM),
+    stepMinutes,
+    everyDays,
+    refraction,
+    litMinutes,
+    sunPositions,
+    gnomon: { kind: part.kind, styleEdges: found.minusX.length + found.plusX.length, triangles: part.mesh.triangles.length },
+    method: [
+      'Sun: sunTrack (astronomy-engine 2.1.19 apparent equator of date and sidereal time, topocentric on its ellipsoid), horizon frame turned into the face frame (right, up along the substyle, outward normal)',
+      refraction === 'none' ? 'refraction: none (geometric Sun)' : "refraction: astronomy-engine Refraction('normal')",
+      'instant: topocentric hour angle = the line\'s hour angle (Newton on the track)',
+      part.kind === 'rod' ? 'shadow: the centre of the rod mesh\'s top, projected along the rays onto the face' : 'shadow: the style edges found in the fin mesh (planarGnomonSolid), projected along the rays onto the face',
+      'error: perpendicular distance of the shadow from the drawn line where they overlap; seconds: that distance over the shadow\'s motion in one second of hour angle',
+      `curves: nodus on the mesh's style edge; date lines at the line's declination on its date; mean-time curves with the real Sun at the clock time; tolerance ${Math.max(toleranceMm, CURVE_TOLERANCE_MM)} mm (polylines of sampled points)`,
+    ],
+    marks,
+    curves,
+    worst,
+    failures,
+    pass: failures.length === 0 && curves.every((cv) => cv.pass),
+  };
+}
+
+/** Where the shadow of a set of straight edges lies against a drawn segment. */
+interface SegmentShadow {
+  /** largest perpendicular distance (signed, +: toward the segment's left) over the overlap, mm */
+  readonly errorMm: number;
+  /** mean signed offset over the overlap, mm (for the shadow's speed) */
+  readonly meanOffsetMm: number;
+}
+
+/**
+ * Project the edges along the Sun's rays onto z = 0 and measure them
+ * against the drawn segment a→b: over the part of the segment that a
+ * projected edge overlaps (along the segment), the perpendicular offset at
+ * the overlap's two ends (both straight, so the extremes lie there).
+ */
+export function shadowOnSegment(edges: readonly Edge3[], sun: Vec3, a: Vec2, b: Vec2): SegmentShadow | null {
+  if (!(sun[2] > 0)) return null;
+  const L = Math.hypot(b[0] - a[0], b[1] - a[1]);
+  const d: Vec2 = [(b[0] - a[0]) / L, (b[1] - a[1]) / L];
+  const along = (p: Vec2) => (p[0] - a[0]) * d[0] + (p[1] - a[1]) * d[1];
+  const across = (p: Vec2) => -(p[0] - a[0]) * d[1] + (p[1] - a[1]) * d[0];
+  let worst = 0;
+  let any = false;
+  let sum = 0;
+  let weight = 0;
+  for (const [p, q] of edges) {
+    const pa = project(p, sun);
+    const pb = project(q, sun);
+    const sa = along(pa);
+    const sb = along(pb);
+    if (Math.abs(sb - sa) < 1e-12) continue;
+    const lo = Math.max(Math.min(sa, sb), 0);
+    const hi = Math.min(Math.max(sa, sb), L);
+    if (!(hi > lo)) continue;
+    const ea = across(pa);
+    const eb = across(pb);
+    const at = (s: number) => ea + ((s - sa) * (eb - ea)) / (sb - sa);
+    for (const e of [at(lo), at(hi)]) if (!any || Math.abs(e) > Math.abs(worst)) (worst = e), (any = true);
+    sum += ((at(lo) + at(hi)) / 2) * (hi - lo);
+    weight += hi - lo;
+  }
+  return any ? { errorMm: worst, meanOffsetMm: sum / weight } : null;
+}
+
+function rodShadowOnSegment(top: Vec3, sun: Vec3, a: Vec2, b: Vec2): SegmentShadow | null {
+  if (!(sun[2] > 0)) return null;
+  const X = project(top, sun);
+  const L = Math.hypot(b[0] - a[0], b[1] - a[1]);
+  const d: Vec2 = [(b[0] - a[0]) / L, (b[1] - a[1]) / L];
+  // The rod's shadow runs from its foot (the face origin) to X; it reaches the line if it is longer than the line's start.
+  const reach = X[0] * d[0] + X[1] * d[1];
+  if (reach < Math.hypot(a[0], a[1])) return null;
+  const e = -(X[0] - a[0]) * d[1] + (X[1] - a[1]) * d[0];
+  // Offset at the line's far end, on the ray from the foot through X.
+  const eFar = (e * Math.hypot(b[0], b[1])) / Math.max(reach, 1e-9);
+  return { errorMm: Math.abs(eFar) > Math.abs(e) ? eFar : e, meanOffsetMm: e };
+}
+
+function project(p: Vec3, sun: Vec3): Vec2 {
+  const k = p[2] / sun[2];
+  return [p[0] - k * sun[0], p[1] - k * sun[1]];
+}
+
+function rodTopCentre(positions: readonly Vec3[]): Vec3 {
+  const zTop = Math.max(...positions.map((p) => p[2]));
+  const top = positions.filter((p) => Math.abs(p[2] - zTop) < 1e-9);
+  return [top.reduce((s, p) => s + p[0], 0) / top.length, top.reduce((s, p) => s + p[1], 0) / top.length, zTop];
+}
+
+/** The nodus on the mesh's style edge: the edge point `nodusAlongStyleMm` along the style from its anchor. */
+function nodusOnEdges(edges: readonly Edge3[], layout: PlanarLayout): Vec3 | null {
+  const L = layout.gnomon.nodusAlongStyleMm;
+  if (L === null || edges.length === 0) return null;
+  const [p, q] = edges[0];
+  const len = Math.hypot(q[0] - p[0], q[1] - p[1], q[2] - p[2]);
+  const u: Vec3 = [(q[0] - p[0]) / len, (q[1] - p[1]) / len, (q[2] - p[2]) / len];
+  // The anchor: the root (z = 0 end of a rising style) or, with ψ = 0, the point above the face origin (y = 0).
+  const rising = Math.abs(u[2]) > 1e-9;
+  const s0 = rising ? -p[2] / u[2] : -p[1] / u[1];
+  const anchor: Vec3 = [p[0] + s0 * u[0], p[1] + s0 * u[1], p[2] + s0 * u[2]];
+  const dir = rising && u[2] < 0 ? -1 : !rising && u[1] * (layout.face.style[0] * layout.face.up[0] + layout.face.style[1] * layout.face.up[1] + layout.face.style[2] * layout.face.up[2]) < 0 ? -1 : 1;
+  return [anchor[0] + dir * L * u[0], anchor[1] + dir * L * u[1], anchor[2] + dir * L * u[2]];
+}
+
+/** The Sun's direction turned by dH of hour angle about the celestial pole (westward: H grows). */
+function turnSun(enu: Vec3, latitudeRad: number, dH: number): Vec3 {
+  const p: Vec3 = [0, Math.cos(latitudeRad), Math.sin(latitudeRad)];
+  // Rodrigues' rotation by −dH about p (the Sun moves clockwise seen from above the north pole).
+  const c = Math.cos(-dH);
+  const s = Math.sin(-dH);
+  const k = dot3(p, enu) * (1 - c);
+  const x: Vec3 = [p[1] * enu[2] - p[2] * enu[1], p[2] * enu[0] - p[0] * enu[2], p[0] * enu[1] - p[1] * enu[0]];
+  return [enu[0] * c + x[0] * s + p[0] * k, enu[1] * c + x[1] * s + p[1] * k, enu[2] * c + x[2] * s + p[2] * k];
+}
+
+function checkCurves(
+  layout: PlanarLayout,
+  days: readonly SunDay[],
+  frame: (v: Vec3) => Vec3,
+  nodusOf: (edge: FinEdge) => Vec3 | null,
+  isLit: (s: SunSample) => boolean,
+  track: ReturnType<typeof sunTrack>,
+): PlanarCurveCheck[] {
+  const spec = layout.spec;
+  if (layout.curves.length === 0) return [];
+  const phi = spec.site.latitude * DEG;
+  const tol = Math.max(spec.check.tolerance, CURVE_TOLERANCE_MM);
+  const entries = dateLineEntries(spec);
+  const hs = layout.marks.map((m) => m.hourAngleDeg);
+  const out: PlanarCurveCheck[] = [];
+  for (const curve of layout.curves) {
+    let worstMm = 0;
+    let worstS = 0;
+    let worstDate: string | null = null;
+    let samples = 0;
+    const test = (sunEnu: Vec3, H: number, date: string) => {
+      const sun = frame(sunEnu);
+      if (!(sun[2] > 0)) return;
+      const edge = edgeForHourAngle(layout, H);
+      const N = nodusOf(edge);
+      if (!N) return;
+      const X = project(N, sun);
+      if (!insideField(layout, X)) return;
+      const dist = distanceToPaths(X, curve.paths);
+      // Beyond a drawn end (where the drawing stops: the field's edge, or where the face loses the Sun) the curve claims nothing.
+      if (dist === null) return;
+      const X2 = project(N, frame(turnSun(sunEnu, phi, HOUR_ANGLE_RAD_PER_S)));
+      const speed = Math.hypot(X2[0] - X[0], X2[1] - X[1]);
+      samples++;
+      if (dist > worstMm) {
+        worstMm = dist;
+        worstS = speed > 0 ? dist / speed : 0;
+        worstDate = date;
+      }
+    };
+    if (curve.kind === 'date') {
+      const e = entries.find((en) => curve.label === en.label) ?? entries.find((en) => curve.label.startsWith(en.label));
+      if (!e) continue;
+      const day = days.find((d) => d.date === e.date) ?? days.reduce((best, d) => (Math.abs(Date.parse(d.date) - Date.parse(e.date)) < Math.abs(Date.parse(best.date) - Date.parse(e.date)) ? d : best), days[0]);
+      // Between the drawn vertices (0.25° apart) as well as on them: 0.125° off, every 0.5°.
+      for (let Hd = Math.min(...hs) + 0.125; Hd <= Math.max(...hs); Hd += 0.5) {
+        const t = instantAtHourAngle(track, day, Hd * DEG);
+        const s = sunOnDay(track, day, t);
+        if (!isLit(s)) continue;
+        // The real hour angle of that instant, the declination held at the line's.
+        test(sunDirectionEnu(phi, s.hourAngleRad, e.declinationRad), s.hourAngleRad, day.date);
+      }
+    } else {
+      const minutes = parseClock('curve', curve.label.slice(0, 5));
+      for (const day of days) {
+        const s = sunOnDay(track, day, day.startMs + minutes * 60_000);
+        if (!isLit(s)) continue;
+        test(s.enu, s.hourAngleRad, day.date);
+      }
+    }
+    out.push({ label: curve.label, kind: curve.kind, samples, worstMm, worstS, worstDate, pass: worstMm <= tol });
+  }
+  return out;
+}
+
+function edgeForHourAngle(layout: PlanarLayout, H: number): FinEdge {
+  const e = sunDirectionEnu(layout.spec.site.latitude * DEG, H, 0);
+  return dot3(layout.face.fin, e) < 0 ? 'plusF' : 'minusF';
+}
+
+/** Inside the drawn field (the box of the marks), where the curves were kept. */
+function insideField(layout: PlanarLayout, X: Vec2): boolean {
+  const pts = layout.marks.flatMap((m) => [m.a, m.b]);
+  const xs = pts.map((p) => p[0]);
+  const ys = pts.map((p) => p[1]);
+  const inset = 0.5;
+  return X[0] > Math.min(...xs) + inset && X[0] < Math.max(...xs) - inset && X[1] > Math.min(...ys) + inset && X[1] < Math.max(...ys) - inset;
+}
+
+/** Distance from X to the nearest drawn polyline, or null when the nearest point is a run's end and X lies beyond it. */
+function distanceToPaths(X: Vec2, paths: readonly (readonly Vec2[])[]): number | null {
+  let best = Infinity;
+  let beyondEnd = false;
+  for (const path of paths) {
+    for (let i = 0; i + 1 < path.length; i++) {
+      const [a, b] = [path[i], path[i + 1]];
+      const dx = b[0] - a[0];
+      const dy = b[1] - a[1];
+      const l2 = dx * dx + dy * dy;
+      const raw = l2 > 0 ? ((X[0] - a[0]) * dx + (X[1] - a[1]) * dy) / l2 : 0;
+      const u = Math.max(0, Math.min(1, raw));
+      const d = Math.hypot(X[0] - a[0] - u * dx, X[1] - a[1] - u * dy);
+      if (d < best) {
+        best = d;
+        beyondEnd = (i === 0 && raw < 0) || (i + 2 === path.length && raw > 1);
+      }
+    }
+  }
+  return beyondEnd ? null : best;
+}

@@ -1,0 +1,80 @@
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { parse } from 'yaml';
+import { checkPlanar, layoutPlanar, parseSpec, planarGnomonSolid, type PlanarLayout } from '@umbrafab/geometry';
+import { buildAnyFiles } from '@umbrafab/cli';
+import { runAdmesh } from './helpers/admesh.ts';
+import { ezdxfDump } from './helpers/ezdxf.ts';
+
+const FIXTURES = ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial'];
+const specOf = (name: string) => parseSpec(parse(readFileSync(new URL(`../fixtures/planar/${name}.yaml`, import.meta.url), 'utf8')));
+
+describe('every planar face type: build, read back, check on the real gnomon', () => {
+  for (const name of FIXTURES) {
+    it(`${name}: plate.dxf passes ezdxf's audit, gnomon.stl is watertight (admesh), the year's check is within 0.001 mm`, async () => {
+      const spec = specOf(name);
+      const built = await buildAnyFiles(spec);
+      const again = await buildAnyFiles(spec);
+      expect(again.files.map((f) => Buffer.from(f.bytes).toString('base64'))).toEqual(built.files.map((f) => Buffer.from(f.bytes).toString('base64')));
+      const dir = mkdtempSync(join(tmpdir(), 'umbrafab-planar-'));
+      for (const f of built.files) writeFileSync(join(dir, f.name), f.bytes);
+      // Outside readers: ezdxf (Debian python3-ezdxf) audit, admesh (Debian) on the gnomon.
+      const dxf = ezdxfDump(join(dir, 'plate.dxf'));
+      expect(dxf.errors).toEqual([]);
+      expect(dxf.insunits).toBe(4);
+      const layout = built.layout as PlanarLayout;
+      expect(dxf.entities.filter((e) => e.layer !== 'REFERENCE_NO_CUT').length).toBeGreaterThan(layout.marks.length / 2);
+      const mesh = runAdmesh(join(dir, 'gnomon.stl'));
+      expect(mesh.facetsWith1DisconnectedEdge + mesh.facetsWith2DisconnectedEdges + mesh.facetsWith3DisconnectedEdges).toBe(0);
+      expect(mesh.backwardsEdges).toBe(0);
+      expect(mesh.parts).toBe(1);
+      const part = planarGnomonSolid(layout);
+      // Closed-form volume of the prism: profile area × thickness (a 32-gon rod: the polygon's area × length).
+      const expected = part.kind === 'fin' ? part.profileAreaMm2 * part.thicknessMm : 16 * (part.thicknessMm / 2) ** 2 * Math.sin((2 * Math.PI) / 32) * (part.belowFaceMm + layout.gnomon.heightMm);
+      expect(Math.abs(mesh.volumeMm3 - expected) / expected).toBeLessThan(1e-3);
+
+      const check = checkPlanar(layout);
+      const reached = check.marks.filter((m) => m.reachedDays > 0);
+      console.log(`${name}: ${layout.faceType}, style ${layout.gnomon.styleHeightDeg.toFixed(2)}°, ${check.marks.length} lines (${reached.length} reached), ${check.sunPositions} sun positions, worst ${check.worst ? `${check.worst.errorMm.toExponential(2)} mm / ${check.worst.errorS.toExponential(2)} s (${check.worst.label} ${check.worst.edge}, ${check.worst.date})` : 'none'}; curves ${check.curves.map((c) => `${c.label} ${c.worstMm.toExponential(2)} mm / ${c.worstS.toFixed(2)} s over ${c.samples}`).join('; ') || 'none'}`);
+      expect(check.pass).toBe(true);
+      expect(reached.length).toBe(check.marks.length);
+      for (const m of check.marks) expect(Math.abs(m.errorMm.worst)).toBeLessThanOrEqual(0.001);
+      expect(check.stepMinutes).toBe(1);
+      expect(check.everyDays).toBe(1);
+    });
+  }
+
+  it('a line moved by 0.01 mm is caught (tolerance 0.001 mm)', () => {
+    const layout = layoutPlanar(specOf('wall-declining'));
+    const marks = layout.marks.filter((m) => !m.underGnomon);
+    const k = marks.findIndex((m) => m.label === '15:00');
+    const m = marks[k];
+    const dx = m.b[0] - m.a[0];
+    const dy = m.b[1] - m.a[1];
+    const l = Math.hypot(dx, dy);
+    const shift = (p: readonly [number, number]): [number, number] => [p[0] - (dy / l) * 0.01, p[1] + (dx / l) * 0.01];
+    const moved = marks.map((x, i) => (i === k ? { ...x, a: shift(x.a), b: shift(x.b) } : x));
+    const check = checkPlanar(layout, { marks: moved, toleranceMm: 0.001, everyDays: 10 });
+    expect(check.pass).toBe(false);
+    expect(check.failures.map((f) => f.label)).toEqual(['15:00']);
+    expect(Math.abs(check.failures[0].errorMm)).toBeGreaterThan(0.0099);
+    expect(Math.abs(check.failures[0].errorMm)).toBeLessThan(0.0101);
+  });
+
+  it('a declining wall leaves out the hours it cannot see and says so', () => {
+    const layout = layoutPlanar(specOf('wall-declining'));
+    expect(layout.leftOut.map((l) => l.label)).toEqual(['06:00', '06:30', '07:00']);
+    expect(layout.notes.join(' ')).toMatch(/left out: 06:00, 06:30, 07:00/);
+  });
+
+  it('the polar default is untouched: a spec without face builds the polar plate; a planar spec is refused by polar-only paths', async () => {
+    const raw = parse(readFileSync(new URL('../fixtures/demo.yaml', import.meta.url), 'utf8'));
+    const polar = await buildAnyFiles(parseSpec(raw));
+    expect(polar.files.map((f) => f.name)).toContain('wedge.stl');
+    expect((polar.report.spec as Record<string, unknown>).face).toBeUndefined();
+    const { layoutDial } = await import('@umbrafab/geometry');
+    expect(() => layoutDial(specOf('garden-horizontal'))).toThrow(/face\.type/);
+  });
+});
