@@ -159,7 +159,7 @@ describe('fits as assembled', () => {
   it.each(([
     ['print (kerf 0, clearance 0.2)', printSpec(45), 0.2, 0],
     ['demo laser (kerf 0.15, clearance 0.1)', readSpecFile(join(ROOT, 'fixtures/demo.yaml')), 0.1, 0.15],
-  ] as const).map(([name, spec, c, kerf]) => ({ name, spec, c, kerf })))('$name: slot = tab + 2 · clearance (per side) in the layout and in plate.dxf (minus the kerf)', async ({ spec, c, kerf }) => {
+  ] as const).map(([name, spec, c, kerf]) => ({ name, spec, c, kerf })))('$name: slot = tab + 2 · clearance (per side) in the layout and in plate.dxf (true size: the machine applies the kerf of $kerf mm)', async ({ spec, c }) => {
     const built = await buildFiles(spec);
     const layout = built.layout;
     const t = layout.gnomon.thicknessMm;
@@ -169,7 +169,7 @@ describe('fits as assembled', () => {
       expectClose(s.heightMm, layout.gnomon.tabs[i].lengthMm + 2 * c, 1e-9, 'slot length', ' mm');
       expectClose(s.cy - layout.plate.faceOriginY, layout.gnomon.tabs[i].centerYMm, 1e-9, 'slot centre', ' mm');
     });
-    // Outside reader: ezdxf (Debian python3-ezdxf). A slot is cut kerf/2 inside its edge.
+    // Outside reader: ezdxf (Debian python3-ezdxf). plate.dxf draws the slot at its nominal size.
     const dir = mkdtempSync(join(tmpdir(), 'umbrafab-slots-'));
     const file = join(dir, 'plate.dxf');
     writeFileSync(file, built.files.find((f) => f.name === 'plate.dxf')!.bytes);
@@ -184,8 +184,8 @@ describe('fits as assembled', () => {
       .filter((r) => r.w < 20);
     expect(slots.length).toBe(layout.gnomon.tabs.length);
     for (const [i, s] of slots.entries()) {
-      expectClose(s.w, t + 2 * c - kerf, 1e-6, 'slot width in plate.dxf', ' mm');
-      expectClose(s.l, layout.gnomon.tabs[i].lengthMm + 2 * c - kerf, 1e-6, 'slot length in plate.dxf', ' mm');
+      expectClose(s.w, t + 2 * c, 1e-6, 'slot width in plate.dxf', ' mm');
+      expectClose(s.l, layout.gnomon.tabs[i].lengthMm + 2 * c, 1e-6, 'slot length in plate.dxf', ' mm');
     }
     const parts = built.report.parts;
     for (const s of parts.slots) expectClose(s.widthMm - s.tabWidthMm, 2 * c, 1e-9, 'report slot − tab', ' mm');

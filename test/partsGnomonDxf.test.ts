@@ -14,6 +14,7 @@ const cases = [
   { name: 'demo (laser, kerf 0.15)', raw: demoRaw },
   { name: 'waterjet, south, 6 mm sheet, 3 tabs', raw: { site: { latitude: -33.9, longitude: 18.4, timezone: 'Africa/Johannesburg' }, process: { method: 'waterjet' }, plate: { thickness: 6 }, gnomon: { height: 40, tabs: 3, tabLength: 12 } } },
   { name: 'router (kerf = 3.175 mm tool), nodus notch', raw: { site: { latitude: 64.1, longitude: -21.9, timezone: 'Atlantic/Reykjavik' }, process: { method: 'router' }, plate: { thickness: 6 }, gnomon: { height: 70 }, holes: { count: 2, diameter: 8 }, parts: { nodus: true, nodusSize: 8 } } },
+  { name: 'waterjet, pre-compensated', raw: { site: { latitude: -33.9, longitude: 18.4, timezone: 'Africa/Johannesburg' }, process: { method: 'waterjet' }, plate: { thickness: 6 }, gnomon: { height: 40 }, cutFiles: { precompensate: true } } },
 ];
 
 const dir = mkdtempSync(join(tmpdir(), 'umbrafab-gnomon-dxf-'));
@@ -21,7 +22,7 @@ const built = await Promise.all(
   cases.map(async (c, i) => {
     const result = await buildFiles(parseSpec(c.raw));
     const file = join(dir, `gnomon-${i}.dxf`);
-    const text = new TextDecoder().decode(result.files.find((f) => f.name === 'gnomon.dxf')!.bytes);
+    const text = new TextDecoder().decode(result.files.find((f) => /^gnomon(-offset-[0-9.]+mm)?\.dxf$/.test(f.name))!.bytes);
     writeFileSync(file, text);
     return { ...c, result, text, dump: ezdxfDump(file) };
   }),
@@ -39,9 +40,11 @@ describe.each(built)('gnomon.dxf read back: $name', ({ result, text, dump }) => 
   const g = result.layout.gnomon;
   const T = result.layout.plate.thicknessMm;
   const kerf = spec.process.kerf;
+  // Nominal by default; offset by kerf/2 (kerf compensation, common practice) only with cutFiles.precompensate.
+  const k = spec.cutFiles.precompensate ? kerf / 2 : 0;
 
   it('is written for the cut process, with the gnomon cut from the sheet: t = plate.thickness', () => {
-    expect(result.files.map((f) => f.name)).toEqual(expect.arrayContaining(['gnomon.dxf', 'wedge.stl']));
+    expect(result.files.map((f) => f.name)).toEqual(expect.arrayContaining([k ? `gnomon-offset-${k}mm.dxf` : 'gnomon.dxf', 'wedge.stl']));
     expect(result.files.some((f) => f.name === 'gnomon.stl')).toBe(false);
     expect(g.thicknessMm).toBe(T);
     expect(spec.parts.gnomonFrom).toBe('sheet');
@@ -59,7 +62,7 @@ describe.each(built)('gnomon.dxf read back: $name', ({ result, text, dump }) => 
     expect(parsed.entities.filter((e) => e.layer === 'CUT_PROFILE').length).toBe(1);
   });
 
-  it('holds one closed CUT_PROFILE polyline grown by kerf/2 on every edge (measured), origin at the lower-left', () => {
+  it('holds one closed CUT_PROFILE polyline, nominal (or grown by exactly kerf/2 when pre-compensated) on every edge (measured), origin at the lower-left', () => {
     const cut = dump.entities.filter((e) => e.layer === 'CUT_PROFILE');
     expect(cut.length).toBe(1);
     expect(cut[0].type).toBe('LWPOLYLINE');
@@ -70,11 +73,11 @@ describe.each(built)('gnomon.dxf read back: $name', ({ result, text, dump }) => 
     const L = g.y1Mm - g.y0Mm;
     const xs = pts.map((p) => p[0]);
     const ys = pts.map((p) => p[1]);
-    expect(Math.min(...xs)).toBeCloseTo(-kerf / 2, 6);
-    expect(Math.min(...ys)).toBeCloseTo(-kerf / 2, 6);
-    expect(Math.max(...xs) - Math.min(...xs)).toBeCloseTo(L + kerf, 6);
-    expect(Math.max(...ys) - Math.min(...ys)).toBeCloseTo(g.heightMm + T + kerf, 6);
-    // Measured offset: each cut edge lies parallel to a nominal edge, kerf/2 outside it.
+    expect(Math.min(...xs)).toBeCloseTo(-k, 6);
+    expect(Math.min(...ys)).toBeCloseTo(-k, 6);
+    expect(Math.max(...xs) - Math.min(...xs)).toBeCloseTo(L + 2 * k, 6);
+    expect(Math.max(...ys) - Math.min(...ys)).toBeCloseTo(g.heightMm + T + 2 * k, 6);
+    // Measured offset: each nominal edge has a parallel cut edge k outside it (k = 0: on it).
     const nominal: [number, number][][] = [
       [[0, T], [0, T + g.heightMm]],
       [[L, T], [L, T + g.heightMm]],
@@ -96,16 +99,16 @@ describe.each(built)('gnomon.dxf read back: $name', ({ result, text, dump }) => 
         const parallel = Math.abs((q[0] - p[0]) * (b[1] - a[1]) - (q[1] - p[1]) * (b[0] - a[0])) < 1e-9;
         if (!parallel) continue;
         const d = lineDistance(p, a, b);
-        if (Math.abs(d - kerf / 2) < Math.abs(best - kerf / 2)) best = d;
+        if (Math.abs(d - k) < Math.abs(best - k)) best = d;
       }
-      worst = Math.max(worst, Math.abs(best - kerf / 2));
+      worst = Math.max(worst, Math.abs(best - k));
       matched++;
     }
-    console.log(`${spec.process.method}: ${matched} nominal edges, cut path offset kerf/2 = ${kerf / 2} mm, worst error ${worst.toExponential(2)} mm`);
+    console.log(`${spec.process.method}: ${matched} nominal edges, cut path offset ${k} mm, worst error ${worst.toExponential(2)} mm`);
     expect(worst).toBeLessThanOrEqual(1e-6);
     // The face line on REFERENCE_NO_CUT: the style edge is exactly h above it.
-    const ref = dump.entities.find((e) => e.layer === 'REFERENCE_NO_CUT')!;
+    const ref = dump.entities.find((e) => e.layer === 'REFERENCE_NO_CUT' && e.type !== 'TEXT')!;
     expect(ref.points!.map((p) => p[1])).toEqual([T, T]);
-    expect(Math.max(...ys) - kerf / 2 - T).toBeCloseTo(g.heightMm, 6);
+    expect(Math.max(...ys) - k - T).toBeCloseTo(g.heightMm, 6);
   });
 });

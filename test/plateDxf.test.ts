@@ -11,6 +11,7 @@ const cases = [
   { name: 'laser, north, standard time', raw: { site: { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' }, dial: { reads: 'standard' }, hours: { from: '08:00', to: '16:00' } } },
   { name: 'waterjet, south, solar time', raw: { site: { latitude: -33.9, longitude: 18.4, timezone: 'Africa/Johannesburg' }, process: { method: 'waterjet' }, marks: { hour: { width: 1.6 }, half: { width: 1.2 }, quarter: { width: 1 } } } },
   { name: 'router, roman, 2 holes', raw: { site: { latitude: 64.1, longitude: -21.9, timezone: 'Atlantic/Reykjavik' }, process: { method: 'router', kerf: 3.175 }, dial: { numerals: 'roman' }, gnomon: { height: 70, thickness: 6 }, holes: { count: 2, diameter: 8 } } },
+  { name: 'laser, pre-compensated', raw: { site: { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' }, cutFiles: { precompensate: true } } },
 ];
 
 type Built = Awaited<ReturnType<typeof buildFiles>>;
@@ -18,8 +19,9 @@ type Built = Awaited<ReturnType<typeof buildFiles>>;
 async function writeDxf(raw: object): Promise<{ dump: DxfDump; text: string; built: Built }> {
   const built = await buildFiles(parseSpec(raw));
   const dir = mkdtempSync(join(tmpdir(), 'umbrafab-dxf-'));
-  const file = join(dir, 'plate.dxf');
-  const text = new TextDecoder().decode(built.files.find((f) => f.name === 'plate.dxf')!.bytes);
+  const name = built.files.find((f) => /^plate(-offset-[0-9.]+mm)?\.dxf$/.test(f.name))!.name;
+  const file = join(dir, name);
+  const text = new TextDecoder().decode(built.files.find((f) => f.name === name)!.bytes);
   writeFileSync(file, text);
   return { dump: ezdxfDump(file), text, built };
 }
@@ -38,12 +40,35 @@ describe.each(cases.map((c, i) => ({ ...c, i })))('plate.dxf read back by ezdxf:
     expect(dump.fixes).toEqual([]);
     expect(dump.insunits).toBe(4);
     for (const e of dump.entities) for (const z of e.z ?? []) expect(z).toBe(0);
-    expect(dump.layers).toEqual(expect.arrayContaining(['CUT_PROFILE', 'TEXT_ENGRAVE', 'REFERENCE_NO_CUT']));
+    expect(dump.layers).toEqual(expect.arrayContaining(['CUT_PROFILE', 'REFERENCE_NO_CUT']));
+    // $MEASUREMENT 1 = metric; $EXTMIN/$EXTMAX enclose every entity (AutoCAD DXF Reference, HEADER section).
+    expect(dump.measurement).toBe(1);
+    for (const e of dump.entities) {
+      for (const [x, y] of e.points ?? (e.center ? [[e.center[0] - e.radius!, e.center[1] - e.radius!], [e.center[0] + e.radius!, e.center[1] + e.radius!]] : [])) {
+        expect(x).toBeGreaterThanOrEqual(dump.extmin[0] - 1e-6);
+        expect(y).toBeGreaterThanOrEqual(dump.extmin[1] - 1e-6);
+        expect(x).toBeLessThanOrEqual(dump.extmax[0] + 1e-6);
+        expect(y).toBeLessThanOrEqual(dump.extmax[1] + 1e-6);
+      }
+    }
+  });
+
+  it('keeps the reference layers off and non-plotting, and only cutting and engraving geometry on plotting layers', () => {
+    // AutoCAD DXF Reference, LAYER table: group 62 negative = layer off; group 290 = 0 = not plotted. Read by ezdxf.
+    for (const l of dump.layerTable.filter((t) => t.name.endsWith('_NO_CUT'))) {
+      expect(l.color).toBeLessThan(0);
+      expect(l.on).toBe(false);
+      expect(l.plot).toBe(0);
+    }
+    const plotting = new Set(dump.layerTable.filter((t) => t.on && t.plot !== 0).map((t) => t.name));
+    for (const e of dump.entities) if (plotting.has(e.layer)) expect(['CUT_PROFILE', 'LINE_SCORE', 'LINE_ETCH_OUTLINE', 'TEXT_ENGRAVE']).toContain(e.layer);
+    expect(dump.entities.filter((e) => e.layer === 'REFERENCE_NO_CUT' && e.type === 'LWPOLYLINE').length).toBe(built.layout.marks.length ? 4 : 4);
   });
 
   it('holds every mark of report.json at plate.substyleX + xMm within 0.001 mm', () => {
-    const etch = spec.process.method === 'waterjet';
-    const layer = etch ? 'LINE_ETCH_OUTLINE' : 'LINE_SCORE';
+    // Waterjet: the marks are etched as outlines; their centre-lines stay on MARK_CENTRE_NO_CUT for checking.
+    const etch = false;
+    const layer = spec.process.method === 'waterjet' ? 'MARK_CENTRE_NO_CUT' : 'LINE_SCORE';
     const polys = dump.entities.filter((e) => e.layer === layer);
     let worst = 0;
     for (const m of built.layout.marks) {
@@ -64,15 +89,19 @@ describe.each(cases.map((c, i) => ({ ...c, i })))('plate.dxf read back by ezdxf:
     }
     // Lines under the gnomon's footprint are the only ones not drawn.
     const drawn = built.layout.marks.filter((m) => !m.underGnomon);
-    // One entity per engraved mark: a centre-line vector, or one closed outline (waterjet).
-    expect(polys.length).toBe(drawn.length);
+    // One centre-line per engraved mark (on LINE_SCORE also the date lines and curves, if any).
+    expect(polys.filter((p) => p.points!.length === 2).length).toBeGreaterThanOrEqual(drawn.length);
     for (const m of built.layout.marks.filter((k) => k.underGnomon)) expect(Math.abs(m.xMm) - m.widthMm / 2).toBeLessThan(spec.gnomon.thickness / 2);
     console.log(`worst mark position error vs report.json (${spec.process.method}): ${worst.toExponential(2)} mm over ${built.layout.marks.length} marks`);
     expect(worst).toBeLessThanOrEqual(0.001);
   });
 
-  it('grows the outer profile and shrinks slots and holes by kerf/2', () => {
-    // Kerf compensation, common practice (docs/design.md §5).
+  it('draws the cut profile at true size by default, and offset by exactly kerf/2 only when asked', () => {
+    // Nominal = the part as it must come out; kerf compensation (common practice, docs/design.md §5) only with cutFiles.precompensate.
+    const pre = spec.cutFiles.precompensate;
+    const k = pre ? kerf / 2 : 0;
+    expect(built.report.plate).toMatchObject({ cut: { drawn: pre ? 'precompensated' : 'nominal', offsetMm: k } });
+    expect(built.files.some((f) => f.name === 'plate.dxf')).toBe(!pre);
     const cut = dump.entities.filter((e) => e.layer === 'CUT_PROFILE');
     const polys = cut.filter((e) => e.type === 'LWPOLYLINE');
     const bbox = (e: (typeof polys)[number]) => {
@@ -83,19 +112,31 @@ describe.each(cases.map((c, i) => ({ ...c, i })))('plate.dxf read back by ezdxf:
     const sorted = [...polys].sort((a, b) => bbox(b).w - bbox(a).w);
     const outer = bbox(sorted[0]);
     expect(sorted[0].closed).toBe(true);
-    expect(outer.w - plate.widthMm).toBeCloseTo(kerf, 6);
-    expect(outer.h - plate.lengthMm).toBeCloseTo(kerf, 6);
-    expect(outer.x0).toBeCloseTo(-kerf / 2, 6);
+    expect(Math.abs(outer.w - plate.widthMm - 2 * k)).toBeLessThan(1e-6);
+    expect(Math.abs(outer.h - plate.lengthMm - 2 * k)).toBeLessThan(1e-6);
+    expect(Math.abs(outer.x0 + k)).toBeLessThan(1e-6);
+    expect(Math.abs(outer.y0 + k)).toBeLessThan(1e-6);
     const slots = sorted.slice(1);
     expect(slots).toHaveLength(plate.slots.length);
     for (const s of slots) {
       expect(s.closed).toBe(true);
-      expect(plate.slots[0].widthMm - bbox(s).w).toBeCloseTo(kerf, 6);
-      expect(plate.slots[0].heightMm - bbox(s).h).toBeCloseTo(kerf, 6);
+      // The slot exactly; a router's slot has its inside-corner relief (checked with shapely in routerRelief.test.ts):
+      // dog-bones reach rho·(1 − 1/√2) past each wall, round ends (W/2) past each end.
+      const relief = (built.report.plate as unknown as { cut: { slotRelief: string[] } }).cut.slotRelief[0];
+      const rho = kerf / 2 + 0.05;
+      const dw = relief === 'dogbone' ? 2 * rho * (1 - Math.SQRT1_2) : 0;
+      const dh = relief === 'dogbone' ? dw : relief === 'round-ends' ? plate.slots[0].widthMm : 0;
+      expect(Math.abs(plate.slots[0].widthMm - 2 * k + dw - bbox(s).w)).toBeLessThan(0.01);
+      expect(Math.abs(plate.slots[0].heightMm - 2 * k + dh - bbox(s).h)).toBeLessThan(0.01);
+      if (relief === 'none') expect(Math.abs(plate.slots[0].widthMm - 2 * k - bbox(s).w)).toBeLessThan(1e-6);
     }
     const circles = cut.filter((e) => e.type === 'CIRCLE');
     expect(circles).toHaveLength(plate.holes.length);
-    for (const c of circles) expect(plate.holes[0].radiusMm - c.radius!).toBeCloseTo(kerf / 2, 6);
+    for (const c of circles) expect(Math.abs(2 * c.radius! - (spec.holes.diameter - 2 * k))).toBeLessThan(1e-6);
+    // The note on the non-plotting layer says which it is.
+    const notes = dump.entities.filter((e) => e.type === 'TEXT').map((e) => e.text ?? '');
+    expect(dump.entities.filter((e) => e.type === 'TEXT').every((e) => e.layer === 'REFERENCE_NO_CUT')).toBe(true);
+    expect(notes.some((t) => (pre ? /PRE-COMPENSATED cut profiles, offset 0\.075 mm/ : /TRUE SIZE \(nominal\)/).test(t))).toBe(true);
   });
 
   it('opens in a second reader (npm dxf-parser) with the same entities', () => {

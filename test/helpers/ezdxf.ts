@@ -7,7 +7,12 @@ export interface DxfDump {
   readonly insunits: number;
   readonly errors: readonly string[];
   readonly fixes: readonly string[];
+  readonly measurement: number | null;
+  readonly extmin: readonly [number, number];
+  readonly extmax: readonly [number, number];
   readonly layers: readonly string[];
+  readonly layerTable: readonly { readonly name: string; readonly color: number; readonly on: boolean; readonly plot: number }[];
+  readonly comments: readonly string[];
   readonly entities: readonly {
     readonly type: string;
     readonly layer: string;
@@ -16,6 +21,7 @@ export interface DxfDump {
     readonly z?: readonly number[];
     readonly center?: readonly [number, number];
     readonly radius?: number;
+    readonly text?: string;
   }[];
 }
 

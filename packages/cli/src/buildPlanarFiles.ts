@@ -6,11 +6,15 @@ import {
   planarInstallSheet,
   planarPlateDrawing,
   validateMesh,
+  plateSheetPart,
+  finSheetPart,
+  reliefToolRadius,
   type DialSpec,
   type PlanarLayout,
   type PlateDrawing,
 } from '@umbrafab/geometry';
-import { engraveFromSpec, stlHeader, toDxf, toGnomonDxf, toPlanarInstallMd, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
+import { assertToolFits, engraveFromSpec, stlHeader, toPlanarInstallMd, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
+import { cutPartFiles } from './outputs/cutParts.ts';
 import { utf8 } from './outputs/outputTypes.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
@@ -30,25 +34,33 @@ export interface PlanarBuildResult {
  * gnomon.stl); install.md; report.json. No wedge: these faces mount flat
  * on their wall, pillar or stand. Byte-identical run to run.
  */
-export function buildPlanarFiles(spec: DialSpec, generator: string): PlanarBuildResult {
+export async function buildPlanarFiles(spec: DialSpec, generator: string): Promise<PlanarBuildResult> {
   const layout = layoutPlanar(spec);
   const drawing = planarPlateDrawing(layout);
   const files: OutputFile[] = [];
-  files.push({ name: 'plate.dxf', bytes: utf8(toDxf(drawing, { method: spec.process.method, kerfMm: spec.process.kerf })) });
+  const part = planarGnomonSolid(layout);
+  // The flat parts as cut (plate.dxf, gnomon.dxf): tool-fit check on the nominal parts, then relief for the tool.
+  const cutFin = part.kind === 'fin' && spec.process.method !== 'print';
+  const flatParts = (relief: number) => {
+    const o = { material: spec.plate.material, thicknessMm: layout.plate.thicknessMm, reliefToolRadiusMm: relief, chordToleranceMm: spec.cutFiles.chordTolerance };
+    return [plateSheetPart(drawing, o), ...(cutFin ? [finSheetPart(part.profile, { ...o, thicknessMm: part.thicknessMm })] : [])];
+  };
+  if (spec.process.method !== 'print') assertToolFits(flatParts(0), spec.process.kerf);
+  const [platePart, finPart] = flatParts(reliefToolRadius(spec));
+  const plateCut = await cutPartFiles({ spec, drawing }, platePart);
+  files.push(...plateCut.files);
   files.push({ name: 'preview.svg', bytes: utf8(toSvg(drawing, { caption: `${spec.name} - ${layout.faceType} face, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` })) });
   const engraving = engraveFromSpec(spec, drawing);
   files.push(...engraving.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })));
 
-  const part = planarGnomonSolid(layout);
   const b = meshBounds(part.mesh);
   // Laid flat for printing: the fin on its side (x → z), the rod on its end; +z up, min corner at the origin.
   const flat = validateMesh(part.kind === 'fin'
     ? mapMesh(part.mesh, ([x, y, z]) => [y - b.min[1], z - b.min[2], x - b.min[0]])
     : mapMesh(part.mesh, ([x, y, z]) => [x - b.min[0], y - b.min[1], z - b.min[2]]));
   files.push({ name: 'gnomon.stl', bytes: toStl(flat, { header: stlHeader([`umbrafab ${part.kind} for a ${layout.faceType} face, t=${part.thicknessMm} mm, style ${layout.gnomon.styleHeightDeg.toFixed(2)} deg`, spec.name]) }) });
-  if (part.kind === 'fin' && spec.process.method !== 'print') {
-    files.push({ name: 'gnomon.dxf', bytes: utf8(toGnomonDxf({ profile: part.profile, styleHeightMm: layout.gnomon.heightMm }, { kerfMm: spec.process.kerf })) });
-  }
+  const finCut = finPart ? await cutPartFiles({ spec, drawing }, finPart) : undefined;
+  if (finCut) files.push(...finCut.files);
   files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout))) });
 
   const names = [...files.map((f) => f.name), 'report.json'];
@@ -74,8 +86,10 @@ export function buildPlanarFiles(spec: DialSpec, generator: string): PlanarBuild
       faceOriginY: layout.plate.faceOriginY,
       holes: layout.plate.holes.map((c) => ({ xMm: c.cx, yMm: c.cy, diameterMm: 2 * c.radiusMm })),
       slots: layout.plate.slots.map((s) => ({ xMm: s.cx, yMm: s.cy, widthMm: s.widthMm, lengthMm: s.heightMm })),
+      cut: { method: spec.process.method, ...plateCut.report, fitClearancePerSideMm: spec.process.clearance },
     },
     gnomon: { ...layout.gnomon, profileAreaMm2: part.profileAreaMm2, belowFaceMm: part.belowFaceMm },
+    ...(finCut ? { parts: { gnomonDxf: finCut.report } } : {}),
     time: layout.time,
     engraving: engraving.report,
     notes: layout.notes,

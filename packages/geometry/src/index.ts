@@ -15,6 +15,7 @@ export { shoelaceArea } from './parts/ring2d.ts';
 export * from './sheet/sheetPart.ts';
 export * from './sheet/sheetParts.ts';
 export * from './sheet/arcPoints.ts';
+export * from './outline/strokeOutlines.ts';
 export * from './sheet/roundedRectPath.ts';
 export * from './sheet/cornerRelief.ts';
 export * from './plate/cutLayerNames.ts';

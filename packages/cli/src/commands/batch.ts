@@ -86,7 +86,7 @@ export const batchCommand: CommandModule = {
         latitudeDeg: b.lat,
         wedgeAngleDeg: round(b.wedgeAngleDeg, 3),
         wedgeFile,
-        plateFile: samePlate ? 'plate.dxf' : `plate-${tag}.dxf`,
+        plateFile: samePlate ? plateDxfName(b.plate) : plateDxfName(b.plate).replace(/\.dxf$/, `-${tag}.dxf`),
         riseMm: round(p.lengthMm * Math.sin((Math.abs(b.lat) * Math.PI) / 180), 1),
       });
     }
@@ -94,14 +94,14 @@ export const batchCommand: CommandModule = {
     const summary = {
       generator: GENERATOR,
       spec: base,
-      plate: samePlate ? { shared: true, file: 'plate.dxf', note: `one plate serves every latitude: its lines do not depend on the latitude; the title block names the spec's first listed latitude (${builds[0].lat}°)` } : { shared: false, note: 'one plate per latitude (the faces differ, e.g. across hemispheres)' },
+      plate: samePlate ? { shared: true, file: plateDxfName(builds[0].plate), note: `one plate serves every latitude: its lines do not depend on the latitude; the title block names the spec's first listed latitude (${builds[0].lat}°)` } : { shared: false, note: 'one plate per latitude (the faces differ, e.g. across hemispheres)' },
       latitudes: rows,
       files: [...files.map((f) => f.name), 'batch.json'],
     };
     files.push({ name: 'batch.json', bytes: utf8(toReportJson(summary)) });
     writeFilesAtomic(outDir, files, args.force);
 
-    io.out(`umbrafab: batch of ${rows.length} latitudes written to ${outDir}: ${samePlate ? 'one shared plate.dxf' : `${rows.length} plates`}, ${rows.length} wedges`);
+    io.out(`umbrafab: batch of ${rows.length} latitudes written to ${outDir}: ${samePlate ? `one shared ${plateDxfName(builds[0].plate)}` : `${rows.length} plates`}, ${rows.length} wedges`);
     io.out(formatTable(['latitude', 'wedge angle', 'rise over plate', 'wedge file', 'plate file'], rows.map((r) => [`${r.latitudeDeg}°`, `${r.wedgeAngleDeg.toFixed(2)}°`, `${r.riseMm.toFixed(1)} mm`, r.wedgeFile, r.plateFile])));
     if (samePlate) io.out(`note: ${summary.plate.note}`);
     return 0;
@@ -154,6 +154,11 @@ export function batchLatitudes(list: unknown, file: unknown, maxDeg: number): nu
 /** "N35", "S33.9": a latitude for file names. */
 export function latitudeTag(lat: number): string {
   return `${lat < 0 ? 'S' : 'N'}${Math.abs(lat)}`;
+}
+
+/** The plate's cutting drawing among its files: plate.dxf, or plate-offset-K mm.dxf when pre-compensated. */
+function plateDxfName(files: readonly OutputFile[]): string {
+  return files.find((f) => /^plate(-offset-[0-9.]+mm)?\.dxf$/.test(f.name))?.name ?? 'plate.dxf';
 }
 
 /** What makes two plates the same, apart from the title text. */

@@ -23,9 +23,30 @@ export const buildCommand: CommandModule = {
       `umbrafab: wrote ${result.files.length} files (${(total / 1024).toFixed(1)} KiB) to ${outDir}: ${result.files.map((f) => f.name).join(', ')} — plate ${p.widthMm} x ${p.lengthMm} mm, ${result.layout.marks.length} marks, ${spec.process.method} kerf ${spec.process.kerf} mm`,
     );
     for (const note of result.layout.notes) io.out(`note: ${note}`);
+    for (const line of cutFileLines(result.report)) io.out(line);
     return 0;
   },
 };
+
+/**
+ * The console lines about the cutting drawings: which are pre-compensated
+ * (offset by kerf/2: the machine must not offset again), which are true size.
+ */
+export function cutFileLines(report: object): string[] {
+  const r = report as { plate?: unknown; parts?: unknown };
+  const plate = (r.plate as { cut?: { file?: string; drawn?: string; offsetMm?: number; kerfMm?: number } } | undefined)?.cut;
+  const gnomon = (r.parts as { gnomonDxf?: { file?: string; drawn?: string; offsetMm?: number } } | undefined)?.gnomonDxf;
+  const out: string[] = [];
+  for (const c of [plate, gnomon]) {
+    if (!c?.file) continue;
+    out.push(
+      c.drawn === 'precompensated'
+        ? `PRE-COMPENSATED: ${c.file} is offset by ${c.offsetMm} mm (kerf/2) for a machine with no offset of its own; do not apply a kerf offset again`
+        : `cut file: ${c.file} is true size (nominal); the machine or CAM applies its own kerf or tool offset`,
+    );
+  }
+  return out;
+}
 
 /** "fixtures/demo.yaml" → "demo". */
 export function specBaseName(path: string): string {

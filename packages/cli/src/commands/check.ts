@@ -15,12 +15,29 @@ export const checkCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick; the DXF reader only with --plate.
-    const { checkDial, checkTableText, layoutDial, marksFromPlate, parseSpec, readSpecFile, toCheckJson, toCheckSvg, writeFilesAtomic } = await import('./checkDeps.ts');
+    const { checkDial, checkPlanar, checkTableText, faceOrientationOf, layoutDial, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, readSpecFile, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
     let spec = readSpecFile(args.spec);
     if (args.year !== undefined) {
       const year = Number(args.year);
       if (!Number.isInteger(year) || year < 1900 || year > 2200) throw new UsageError(`--year: got ${args.year}; allowed: a whole year from 1900 to 2200`);
       spec = parseSpec({ ...spec, calendar: { ...spec.calendar, year } });
+    }
+    if (faceOrientationOf(spec)) {
+      // Horizontal, wall, meridian and equatorial faces: the planar check on their own gnomon.
+      if (args.plate !== undefined) throw new UsageError('--plate: reading marks back from a DXF is for the polar plate only; check a planar face from its spec');
+      const planar = checkPlanar(layoutPlanar(spec));
+      io.out(planarCheckText(planar));
+      if (args.out !== undefined) {
+        const dir = String(args.out);
+        writeFilesAtomic(dir, [{ name: 'check.json', bytes: utf8(toReportJson(planar)) }], Boolean(args.force));
+        io.out(`umbrafab: wrote check.json to ${join(dir)}`);
+      }
+      if (!planar.pass) {
+        const f = planar.failures[0];
+        io.err(f ? `umbrafab check: line ${f.label} ${f.edge} is ${Math.abs(f.errorMm).toFixed(4)} mm off the simulated shadow on ${f.date} (tolerance ${planar.toleranceMm} mm)` : 'umbrafab check: a curve lies beyond its tolerance');
+        return 1;
+      }
+      return 0;
     }
     const layout = layoutDial(spec);
     let result: CheckResult;

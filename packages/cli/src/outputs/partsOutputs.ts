@@ -11,7 +11,8 @@ import {
   type Mesh,
   type WedgePart,
 } from '@umbrafab/geometry';
-import { stlHeader, toGnomonDxf, toStl } from '@umbrafab/fabricate';
+import { stlHeader, toStl } from '@umbrafab/fabricate';
+import { cutPartFiles, cutParts, type CutFileSection } from './cutParts.ts';
 import { utf8, type Producer } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 
@@ -73,7 +74,7 @@ export interface PartsSection {
     readonly nodusFaceYMm?: number;
   };
   /** gnomon.dxf, when written */
-  readonly gnomonDxf?: { readonly kerfMm: number; readonly offsetMm: number; readonly layers: readonly string[] };
+  readonly gnomonDxf?: CutFileSection;
   /** wedge.stl, when written */
   readonly wedge?: MeshFigures;
   /** body.stl, when written */
@@ -98,7 +99,9 @@ function figures(mesh: Mesh): MeshFigures {
  * - gnomon.stl: the fin laid flat for printing (no support): style along +x
  *   from x = 0, height along +y with the tab bottoms on y = 0 and the face
  *   line at y = tab depth, thickness along z from 0.
- * - gnomon.dxf: the same outline in x, y, kerf-compensated (toGnomonDxf).
+ * - gnomon.dxf: the same outline in x, y, at nominal size with T-bone relief
+ *   at the tab roots for a router (sheetParts' gnomon; cutFiles.precompensate
+ *   writes gnomon-offset-K mm.dxf instead).
  * - wedge.stl: base on z = 0, seat rising toward +y = the elevated pole
  *   (true north in the northern hemisphere, true south in the southern),
  *   the meridian arrow pointing +y.
@@ -153,8 +156,11 @@ export const partsOutputs: Producer<PartsSections> = async ({ spec, layout, draw
     parts.gnomon = { ...gnomonReport, ...figures(flat) };
   }
   if (plan.files.includes('gnomon.dxf')) {
-    files.push({ name: 'gnomon.dxf', bytes: utf8(toGnomonDxf({ profile: gnomon.profile, styleHeightMm: gnomon.styleHeightMm }, { kerfMm: spec.process.kerf })) });
-    parts.gnomonDxf = { kerfMm: spec.process.kerf, offsetMm: spec.process.kerf / 2, layers: ['CUT_PROFILE', 'REFERENCE_NO_CUT'] };
+    const part = cutParts({ spec, layout, drawing }).find((p) => p.name === 'gnomon');
+    if (!part) throw new Error('partsOutputs: the sheet parts have no gnomon');
+    const cut = await cutPartFiles({ spec, drawing }, part);
+    files.push(...cut.files);
+    parts.gnomonDxf = cut.report;
   }
 
   const wedgeReport: WedgeSection = {

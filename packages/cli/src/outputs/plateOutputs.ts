@@ -1,6 +1,7 @@
 import type { Hemisphere, Mark } from '@umbrafab/geometry';
-import { kerfCompensate, toDxf, toSvg } from '@umbrafab/fabricate';
+import { toSvg, type SvgOptions } from '@umbrafab/fabricate';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
+import { cutPartFiles, cutParts, type CutFileSection } from './cutParts.ts';
 
 /** The report.json sections of the plate: the face's marks, the plate and the gnomon as laid out. */
 export interface PlateSections {
@@ -26,16 +27,9 @@ export interface PlateSection {
   readonly holes: readonly { readonly xMm: number; readonly yMm: number; readonly diameterMm: number }[];
   /** gnomon slots: centre (plate coordinates), width across the style and length along it, mm */
   readonly slots: readonly { readonly xMm: number; readonly yMm: number; readonly widthMm: number; readonly lengthMm: number }[];
-  /** the cut as plate.dxf draws it */
-  readonly cut: {
+  /** the cut as plate.dxf draws it (nominal by default; offset by kerf/2 when cutFiles.precompensate) */
+  readonly cut: CutFileSection & {
     readonly method: string;
-    /** cut width of the process, mm */
-    readonly kerfMm: number;
-    /** offset of the drawn profile from the nominal one, mm (outer grown, inner shrunk by it) */
-    readonly offsetMm: number;
-    /** outer profile as drawn, mm */
-    readonly outlineWidthMm: number;
-    readonly outlineLengthMm: number;
     /** fit clearance per side of a tab in its slot, mm */
     readonly fitClearancePerSideMm: number;
   };
@@ -54,16 +48,19 @@ export interface GnomonSection {
   readonly tabs: readonly { readonly centerYMm: number; readonly lengthMm: number }[];
 }
 
-/** plate.dxf and preview.svg, and the report's hemisphere, marks, plate and gnomon sections. */
-export const plateOutputs: Producer<PlateSections> = ({ spec, layout, drawing }) => {
-  const cut = kerfCompensate(drawing, spec.process.kerf);
-  const dxf = toDxf(drawing, { method: spec.process.method, kerfMm: spec.process.kerf });
+/**
+ * plate.dxf (nominal; `plate-offset-K mm.dxf` when cutFiles.precompensate,
+ * with its R12 and SVG copies on request) and preview.svg, and the report's
+ * hemisphere, marks, plate and gnomon sections.
+ */
+export const plateOutputs: Producer<PlateSections> = async (ctx) => {
+  const { spec, layout, drawing } = ctx;
+  const plate = cutParts(ctx).find((p) => p.name === 'plate');
+  if (!plate) throw new Error('plateOutputs: the sheet parts have no plate');
+  const cut = await cutPartFiles(ctx, plate);
   const svg = previewSvgText({ spec, layout, drawing });
   return {
-    files: [
-      { name: 'plate.dxf', bytes: utf8(dxf) },
-      { name: 'preview.svg', bytes: utf8(svg) },
-    ],
+    files: [...cut.files, { name: 'preview.svg', bytes: utf8(svg) }],
     report: {
       hemisphere: layout.hemisphere,
       marks: layout.marks,
@@ -78,10 +75,7 @@ export const plateOutputs: Producer<PlateSections> = ({ spec, layout, drawing })
         slots: layout.plate.slots.map((s) => ({ xMm: s.cx, yMm: s.cy, widthMm: s.widthMm, lengthMm: s.heightMm })),
         cut: {
           method: spec.process.method,
-          kerfMm: spec.process.kerf,
-          offsetMm: cut.offsetMm,
-          outlineWidthMm: cut.outline.widthMm,
-          outlineLengthMm: cut.outline.heightMm,
+          ...cut.report,
           fitClearancePerSideMm: spec.process.clearance,
         },
       },
@@ -97,6 +91,11 @@ export const plateOutputs: Producer<PlateSections> = ({ spec, layout, drawing })
 };
 
 /** The text of preview.svg (shared with the pictures, which render it to PNG). */
-export function previewSvgText({ spec, layout, drawing }: BuildContext): string {
-  return toSvg(drawing, { caption: `${spec.name} - preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+export function previewSvgText(ctx: BuildContext): string {
+  return toSvg(ctx.drawing, previewSvgOptions(ctx));
+}
+
+/** How preview.svg is drawn; with `previewFrame` the page finds the plate in it. */
+export function previewSvgOptions({ spec, layout }: BuildContext): SvgOptions {
+  return { caption: `${spec.name} - preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` };
 }

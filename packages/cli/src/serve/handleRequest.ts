@@ -8,7 +8,8 @@ import { isLoopbackHost } from './bindPolicy.ts';
 import type { BuildCache } from './buildCache.ts';
 import { formValuesToSpec, specToFormValues, type FormValue } from './formValues.ts';
 import { HttpError } from './httpError.ts';
-import { previewFrame, plateToPreview } from './previewFrame.ts';
+import { plateToPreview, previewFrame } from '@umbrafab/fabricate';
+import { previewSvgOptions } from '../outputs/plateOutputs.ts';
 import { MAX_BODY_BYTES, readJsonBody } from './readJsonBody.ts';
 import { sceneMeshes } from './sceneMeshes.ts';
 import { specFields } from './specFields.ts';
@@ -151,7 +152,7 @@ async function view(ctx: ServeContext, body: unknown) {
     ok: true,
     id: b.id,
     svg: b.previewSvg,
-    frame: previewFrame(b.previewSvg, layout.plate.widthMm, layout.plate.lengthMm),
+    frame: previewFrame(b.ctx.drawing, previewSvgOptions(b.ctx)),
     summary: summaryRows(layout),
     notes: layout.notes,
     scene: sceneMeshes(layout),
@@ -172,7 +173,7 @@ async function sun(ctx: ServeContext, body: unknown) {
   const b = await ctx.builds.views(specFrom(fields));
   const { layout } = b.ctx;
   const view = sunView(layout, { date: q.date, time: q.time, kind: q.kind });
-  const frame = previewFrame(b.previewSvg, layout.plate.widthMm, layout.plate.lengthMm);
+  const frame = previewFrame(b.ctx.drawing, previewSvgOptions(b.ctx));
   const { plate } = layout;
   const shadowPreview = view.shadowFace.map((poly) => poly.map(([x, y]) => plateToPreview(frame, [x + plate.substyleX, y + plate.faceOriginY])));
   return { ok: true, id: b.id, sun: view, shadowPreview };

@@ -1,110 +1,90 @@
 import Drawing from 'dxf-writer';
 import Handle from 'dxf-writer/src/Handle.js';
-import type { PlateDrawing, ProcessMethod, Vec2 } from '@umbrafab/geometry';
-import { kerfCompensate } from '../process/kerfCompensate.ts';
-import { rectVertices, segmentOutline, type BulgeVertex } from '../process/rectVertices.ts';
+import { drawingBounds, type CutDrawing } from '../cut/cutDrawing.ts';
 import { roundTo } from '../process/roundTo.ts';
-
-/**
- * Layer names of plate.dxf, one per operation (docs/design.md §5). Colours are ACI
- * numbers (AutoCAD Color Index: 1 red, 3 green, 5 blue, 8 grey).
- */
-export const DXF_LAYERS = {
-  cut: { name: 'CUT_PROFILE', color: 1 },
-  score: { name: 'LINE_SCORE', color: 5 },
-  etch: { name: 'LINE_ETCH_OUTLINE', color: 6 },
-  text: { name: 'TEXT_ENGRAVE', color: 3 },
-  reference: { name: 'REFERENCE_NO_CUT', color: 8 },
-} as const;
+import { DXF_LAYERS } from './cutLayers.ts';
 
 export interface DxfOptions {
-  readonly method: ProcessMethod;
-  /** Cut width, mm; the cut profile is compensated by kerf/2. */
-  readonly kerfMm: number;
   /** Decimal places written for coordinates (default 6, i.e. 1 nm). */
   readonly decimals?: number;
 }
 
-/** One entity of the drawing before serialisation. */
-type DxfRecord =
-  | { readonly kind: 'polyline'; readonly layer: string; readonly vertices: readonly BulgeVertex[]; readonly closed: boolean }
-  | { readonly kind: 'circle'; readonly layer: string; readonly cx: number; readonly cy: number; readonly r: number };
-
 /**
- * plate.dxf: an ASCII DXF (AutoCAD 2007 / AC1021 text format, as written by
- * dxf-writer) in millimetres ($INSUNITS = 4), origin at the plate's lower-left
- * corner, every entity at z = 0.
+ * A cutting drawing as ASCII DXF (AutoCAD 2007 / AC1021 text format, as
+ * written by dxf-writer): millimetres ($INSUNITS = 4, $MEASUREMENT = 1
+ * metric), $EXTMIN / $EXTMAX the drawing's extents, every entity at z = 0,
+ * one layer per operation (DXF_LAYERS). Reference layers are off (negative
+ * colour, LAYER group 62) and non-plotting (LAYER group 290 = 0). Closed
+ * profiles are closed LWPOLYLINEs (group 70 = 1), holes CIRCLEs, notes TEXT.
+ * Group codes per the AutoCAD DXF Reference (HEADER section; LAYER table;
+ * LWPOLYLINE 10/20, 70; CIRCLE 10/20/40; TEXT 10/20/40/1).
  *
- * - CUT_PROFILE: the outer profile as a closed LWPOLYLINE (rounded corners as
- *   bulges), the gnomon slots as closed LWPOLYLINEs and the mounting holes as
- *   CIRCLEs, all kerf-compensated (outer grown, inner shrunk by kerf/2).
- * - LINE_SCORE (laser, router, print): each mark as one centre-line vector.
- *   LINE_ETCH_OUTLINE (waterjet, which cannot score): each mark as a closed
- *   outline of its wanted width.
- * - TEXT_ENGRAVE: numerals and title as single-stroke open LWPOLYLINEs.
- * - REFERENCE_NO_CUT: substyle, gnomon footprint, 45° check; not for cutting.
- *
- * Group codes per the AutoCAD DXF Reference (LWPOLYLINE 10/20 vertices,
- * 42 bulge, 70 flag 1 = closed; CIRCLE 10/20/40).
+ * The one serialiser of plate.dxf, gnomon.dxf and sheet.dxf.
+ * @example toDxf(cutDrawing(part, { profiles: nominalProfiles(part), strokes: 'centre-lines', notes: [] }))
  */
-export function toDxf(drawing: PlateDrawing, options: DxfOptions): string {
-  const records = dxfRecords(drawing, options);
-  return serialise(records, options.decimals ?? 6);
-}
-
-/** The record list of plate.dxf (exposed for tests and for the other writers). */
-export function dxfRecords(drawing: PlateDrawing, options: DxfOptions): DxfRecord[] {
-  const cut = kerfCompensate(drawing, options.kerfMm);
-  const L = DXF_LAYERS;
-  const poly = (layer: string, pts: readonly Vec2[], closed: boolean): DxfRecord => ({
-    kind: 'polyline',
-    layer,
-    closed,
-    vertices: pts.map(([x, y]): BulgeVertex => [x, y, 0]),
-  });
-  const out: DxfRecord[] = [];
-  out.push({ kind: 'polyline', layer: L.cut.name, closed: true, vertices: rectVertices(cut.outline) });
-  for (const s of cut.slots) out.push({ kind: 'polyline', layer: L.cut.name, closed: true, vertices: rectVertices(s) });
-  for (const c of cut.holes) out.push({ kind: 'circle', layer: L.cut.name, cx: c.cx, cy: c.cy, r: c.radiusMm });
-  const etch = options.method === 'waterjet';
-  for (const line of drawing.lines) {
-    const pts = line.path.points;
-    if (etch) {
-      for (let i = 0; i + 1 < pts.length; i++) out.push(poly(L.etch.name, segmentOutline(pts[i], pts[i + 1], line.widthMm), true));
-    } else {
-      out.push(poly(L.score.name, pts, line.path.closed));
-    }
-  }
-  for (const block of drawing.text) for (const s of block.strokes) out.push(poly(L.text.name, s.points, s.closed));
-  for (const ref of drawing.reference) out.push(poly(L.reference.name, ref.path.points, ref.path.closed));
-  return out;
-}
-
-function serialise(records: readonly DxfRecord[], decimals: number): string {
-  // dxf-writer numbers entities from a module-wide counter; restart it so the
-  // same drawing always gets the same handles (byte-identical files).
+export function toDxf(drawing: CutDrawing, options: DxfOptions = {}): string {
+  const decimals = options.decimals ?? 6;
+  const r = (v: number) => roundTo(v, decimals);
+  // dxf-writer numbers its objects from a module-wide counter; restart it (here, and
+  // only here) so the same drawing always gets the same handles: byte-identical files.
   Handle.seed = 0;
   const d = new Drawing();
   d.setUnits('Millimeters');
-  for (const layer of Object.values(DXF_LAYERS)) d.addLayer(layer.name, layer.color, 'CONTINUOUS');
-  const r = (v: number) => roundTo(v, decimals);
-  for (const rec of records) {
-    d.setActiveLayer(rec.layer);
-    switch (rec.kind) {
+  d.header('MEASUREMENT', [[70, 1]]);
+  const [x0, y0, x1, y1] = drawingBounds(drawing.entities);
+  d.header('EXTMIN', [[10, r(x0)], [20, r(y0)], [30, 0]]);
+  d.header('EXTMAX', [[10, r(x1)], [20, r(y1)], [30, 0]]);
+  for (const key of drawing.layers) {
+    const layer = DXF_LAYERS[key];
+    d.addLayer(layer.name, layer.plots ? layer.color : -layer.color, 'CONTINUOUS');
+    if (!layer.plots) nonPlotting(d, layer.name);
+  }
+  for (const e of drawing.entities) {
+    d.setActiveLayer(DXF_LAYERS[e.layer].name);
+    switch (e.kind) {
       case 'polyline':
-        d.drawPolyline(
-          rec.vertices.map(([x, y, b]) => (b === 0 ? [r(x), r(y)] : [r(x), r(y), r(b)])) as unknown as [number, number][],
-          rec.closed,
-        );
+        d.drawPolyline(e.points.map(([x, y]) => [r(x), r(y)]) as [number, number][], e.closed);
         break;
       case 'circle':
-        d.drawCircle(r(rec.cx), r(rec.cy), r(rec.r));
+        d.drawCircle(r(e.cx), r(e.cy), r(e.r));
+        break;
+      case 'note':
+        d.drawText(r(e.x), r(e.y), e.heightMm, 0, asciiText(e.text));
         break;
       default: {
-        const never: never = rec;
-        throw new Error(`unknown DXF record ${JSON.stringify(never)}`);
+        const never: never = e;
+        throw new Error(`unknown DXF entity ${JSON.stringify(never)}`);
       }
     }
   }
   return d.toDxfString();
+}
+
+/** Text for a DXF group value: printable ASCII only, one line (DXF strings end at the line break). */
+export function asciiText(s: string): string {
+  return s.replace(/[^\x20-\x7e]/g, '?').slice(0, 250);
+}
+
+/**
+ * Mark a layer of a dxf-writer drawing non-plotting: its LAYER record gets
+ * group 290 = 0 (plotting flag, AutoCAD DXF Reference, LAYER), written
+ * before the plot-style handle (390) as the reference orders them.
+ */
+function nonPlotting(d: Drawing, name: string): void {
+  const layer = (d as unknown as { layers: Record<string, { tags(m: TagSink): void }> }).layers[name];
+  const own = layer.tags.bind(layer);
+  layer.tags = (m: TagSink) =>
+    own({
+      ...m,
+      push: (code: number, value: unknown) => {
+        if (code === 390) m.push(290, 0);
+        m.push(code, value);
+      },
+      point: m.point?.bind(m),
+    } as TagSink);
+}
+
+interface TagSink {
+  push(code: number, value: unknown): void;
+  point?(x: number, y: number, z?: number): void;
 }

@@ -25,18 +25,3 @@ export function rectVertices(r: RoundedRect): BulgeVertex[] {
     [x0, y1 - c, 0], [x0, y0 + c, b],
   ];
 }
-
-/** A centre-line segment widened to a closed outline of `widthMm` (square ends), counter-clockwise. */
-export function segmentOutline(a: readonly [number, number], b: readonly [number, number], widthMm: number): [number, number][] {
-  const dx = b[0] - a[0];
-  const dy = b[1] - a[1];
-  const len = Math.hypot(dx, dy) || 1;
-  const nx = (-dy / len) * (widthMm / 2);
-  const ny = (dx / len) * (widthMm / 2);
-  return [
-    [a[0] - nx, a[1] - ny],
-    [b[0] - nx, b[1] - ny],
-    [b[0] + nx, b[1] + ny],
-    [a[0] + nx, a[1] + ny],
-  ];
-}

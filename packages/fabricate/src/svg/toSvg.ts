@@ -1,11 +1,12 @@
 import type { Path, PlateDrawing, RoundedRect } from '@umbrafab/geometry';
 import { rectVertices } from '../process/rectVertices.ts';
 import { roundTo } from '../process/roundTo.ts';
+import { previewFrame } from './previewFrame.ts';
 
 export interface SvgOptions {
   /** Decimal places for coordinates (default 3, i.e. 1 µm). */
   readonly decimals?: number;
-  /** Extra paint around the plate, mm (default 5). */
+  /** Extra paint around the plate, mm (default PREVIEW_PADDING_MM = 5). */
   readonly paddingMm?: number;
   /** A caption drawn under the plate (plain text, escaped). */
   readonly caption?: string;
@@ -20,12 +21,12 @@ export interface SvgOptions {
  */
 export function toSvg(drawing: PlateDrawing, options: SvgOptions = {}): string {
   const dec = options.decimals ?? 3;
-  const pad = options.paddingMm ?? 5;
+  const frame = previewFrame(drawing, options);
+  const pad = frame.padMm;
   const n = (v: number) => String(roundTo(v, dec));
-  const W = drawing.widthMm + 2 * pad;
-  const captionH = options.caption ? 8 : 0;
-  const H = drawing.lengthMm + 2 * pad + captionH;
-  // Plate y up → SVG y down.
+  const W = frame.viewWidthMm;
+  const H = frame.viewHeightMm;
+  // Plate y up → SVG y down (plateToPreview).
   const X = (x: number) => n(x + pad);
   const Y = (y: number) => n(drawing.lengthMm - y + pad);
   const d = (p: Path) => p.points.map(([x, y], i) => `${i === 0 ? 'M' : 'L'}${X(x)} ${Y(y)}`).join(' ') + (p.closed ? ' Z' : '');

@@ -17,3 +17,4 @@ export * from './layoutPlanar.ts';
 export * from './planarPlateDrawing.ts';
 export * from './planarGnomonSolid.ts';
 export * from './planarInstallSheet.ts';
+export * from './wallDeclinationFromShadow.ts';

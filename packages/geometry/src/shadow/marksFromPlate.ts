@@ -46,8 +46,8 @@ export interface PlateMarks {
 export function marksFromPlate(layout: DialLayout, lines: readonly PlateLine[]): PlateMarks {
   const ox = layout.plate.substyleX;
   const oy = layout.plate.faceOriginY;
-  // A drawing that keeps the centre-lines beside its etch outlines is read by its centre-lines alone.
-  const hasCentres = lines.some((l) => l.layer === MARK_LAYERS.centres);
+  // A drawing with centre-lines (scored, or kept beside its etch outlines) is read by its centre-lines alone.
+  const hasCentres = lines.some((l) => l.layer === MARK_LAYERS.centres || l.layer === MARK_LAYERS.score);
   const segs = lines
     .filter((l) => l.layer === MARK_LAYERS.score || l.layer === MARK_LAYERS.centres || (!hasCentres && l.layer === MARK_LAYERS.etch && l.closed))
     .map((l) => centreLine(l))

@@ -34,45 +34,73 @@ export function reliefToolRadius(spec: DialLayout['spec']): number {
   return spec.process.kerf / 2;
 }
 
-/** The dial plate: rounded outline, mounting holes, gnomon slots (relieved for the tool), lines, text and reference. */
-export const platePart: SheetPartSource = ({ layout, drawing, reliefToolRadiusMm, chordToleranceMm }) => [
-  {
+/** How a flat part is drawn: its stock, the tool its inside corners are relieved for, the chord tolerance. */
+export interface FlatPartOptions {
+  readonly material: string;
+  readonly thicknessMm: number;
+  /** radius of the round tool the inside corners are relieved for, mm; 0 = no relief */
+  readonly reliefToolRadiusMm: number;
+  readonly chordToleranceMm: number;
+}
+
+/**
+ * A plate drawing as a flat part (any face type): rounded outline, mounting
+ * holes, gnomon slots relieved for the tool, engraved lines and text, and the
+ * reference lines.
+ * @example plateSheetPart(drawing, { material: 'aluminium', thicknessMm: 3, reliefToolRadiusMm: 0, chordToleranceMm: 0.005 })
+ */
+export function plateSheetPart(drawing: PlateDrawing, o: FlatPartOptions): SheetPart {
+  return {
     name: 'plate',
-    material: layout.spec.plate.material,
-    thicknessMm: layout.plate.thicknessMm,
-    outer: roundedRectPath(drawing.outline, chordToleranceMm),
-    inner: [...drawing.holes, ...drawing.slots.map((s) => reverse(relievedSlot(s, reliefToolRadiusMm, chordToleranceMm).path))],
+    material: o.material,
+    thicknessMm: o.thicknessMm,
+    outer: roundedRectPath(drawing.outline, o.chordToleranceMm),
+    inner: [...drawing.holes, ...drawing.slots.map((s) => reverse(relievedSlot(s, o.reliefToolRadiusMm, o.chordToleranceMm).path))],
     lines: drawing.lines,
     text: drawing.text,
     reference: drawing.reference,
-  },
+  };
+}
+
+/**
+ * A gnomon fin's (y, z) profile (counter-clockwise, the face on z = 0, tabs
+ * below it) laid flat as a part: style along +x, height along +y, origin at
+ * the lower-left corner of the nominal part (x = profile y − min y,
+ * y = profile z − min z), T-bone relief at the tab roots for the tool, and
+ * the face line on the reference list.
+ * @example finSheetPart(gnomon.profile, { material: 'aluminium', thicknessMm: 3, reliefToolRadiusMm: 1.5875, chordToleranceMm: 0.005 })
+ */
+export function finSheetPart(profile: readonly Vec2[], o: FlatPartOptions, name = 'gnomon'): SheetPart {
+  const y0 = Math.min(...profile.map((p) => p[0]));
+  const z0 = Math.min(...profile.map((p) => p[1]));
+  const flat = profile.map(([y, z]): Vec2 => [y - y0, z - z0]);
+  const faceY = -z0;
+  const length = Math.max(...flat.map((p) => p[0]));
+  return {
+    name,
+    material: o.material,
+    thicknessMm: o.thicknessMm,
+    outer: { kind: 'path', closed: true, points: relieveTabRoots(flat, o.reliefToolRadiusMm, faceY, o.chordToleranceMm) },
+    inner: [],
+    reference: [{ label: 'face line', path: { kind: 'path', closed: false, points: [[0, faceY], [length, faceY]] } }],
+  };
+}
+
+/** The dial plate: rounded outline, mounting holes, gnomon slots (relieved for the tool), lines, text and reference. */
+export const platePart: SheetPartSource = ({ layout, drawing, reliefToolRadiusMm, chordToleranceMm }) => [
+  plateSheetPart(drawing, { material: layout.spec.plate.material, thicknessMm: layout.plate.thicknessMm, reliefToolRadiusMm, chordToleranceMm }),
 ];
 
 /**
- * The gnomon fin laid flat, when it is cut (gnomon.dxf): style along +x,
- * height along +y, origin at the lower-left corner of the nominal part (tab
- * bottoms on y = 0, the −y end of the style on x = 0), with T-bone relief at
- * the tab roots for the tool; the face line on the reference list.
+ * The gnomon fin laid flat (finSheetPart), when it is cut (gnomon.dxf),
+ * from the plate's stock or from separate stock.
  */
 export const gnomonPart: SheetPartSource = ({ layout, reliefToolRadiusMm, chordToleranceMm }) => {
   const plan = partsPlan(layout);
   if (!plan.files.includes('gnomon.dxf')) return [];
   const g = dialGnomon(plan, layout);
-  const y0 = Math.min(...g.profile.map((p) => p[0]));
-  const z0 = Math.min(...g.profile.map((p) => p[1]));
-  const flat = g.profile.map(([y, z]): Vec2 => [y - y0, z - z0]);
-  const faceY = -z0;
-  const length = Math.max(...flat.map((p) => p[0]));
-  return [
-    {
-      name: 'gnomon',
-      material: plan.gnomonFrom === 'sheet' ? layout.spec.plate.material : 'separate stock',
-      thicknessMm: g.thicknessMm,
-      outer: { kind: 'path', closed: true, points: relieveTabRoots(flat, reliefToolRadiusMm, faceY, chordToleranceMm) },
-      inner: [],
-      reference: [{ label: 'face line', path: { kind: 'path', closed: false, points: [[0, faceY], [length, faceY]] } }],
-    },
-  ];
+  const material = plan.gnomonFrom === 'sheet' ? layout.spec.plate.material : 'separate stock';
+  return [finSheetPart(g.profile, { material, thicknessMm: g.thicknessMm, reliefToolRadiusMm, chordToleranceMm })];
 };
 
 /**
