@@ -2,11 +2,9 @@ import { execFileSync } from 'node:child_process';
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { layoutDial, plateDrawing, sheetParts, SpecError, timeFaceExtras, type SheetPart } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { cutFromSpec } from '../packages/fabricate/src/index.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
-import { parseSpec } from '../packages/geometry/src/spec/parseSpec.ts';
+import { layoutDial, parseSpec, plateDrawing, sheetParts, SpecError, timeFaceExtras, type SheetPart } from '@umbrafab/geometry';
+import { buildFiles, readSpecFile } from '@umbrafab/cli';
+import { cutFromSpec } from '@umbrafab/fabricate';
 import { expectClose } from './helpers/closeTo.ts';
 import { canonTimes, checkMillStartEnd, feedRuns, motions, runRs274, xyLength, type CanonMotion } from './helpers/rs274.ts';
 

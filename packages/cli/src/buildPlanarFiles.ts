@@ -50,7 +50,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   const plateCut = await cutPartFiles({ spec, drawing }, platePart);
   files.push(...plateCut.files);
   files.push({ name: 'preview.svg', bytes: utf8(toSvg(drawing, { caption: `${spec.name} - ${layout.faceType} face, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` })) });
-  const engraving = engraveFromSpec(spec, drawing);
+  const engraving = await engraveFromSpec(spec, drawing);
   files.push(...engraving.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })));
 
   const b = meshBounds(part.mesh);

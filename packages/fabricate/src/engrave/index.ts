@@ -28,3 +28,4 @@ export * from './cutSettings.ts';
 export * from './toolCentrePaths.ts';
 export * from './planCut.ts';
 export * from './cutFromSpec.ts';
+export * from './laserFill.ts';

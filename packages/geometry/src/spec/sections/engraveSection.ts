@@ -24,6 +24,8 @@ import { boundedNumber } from '../boundedNumber.ts';
 export const ENGRAVE_PROGRAM_CHOICES = ['auto', 'ngc', 'laser', 'both', 'none'] as const;
 export type EngraveProgramChoice = (typeof ENGRAVE_PROGRAM_CHOICES)[number];
 
+export const LASER_FILL_CHOICES = ['fill', 'score'] as const;
+
 export const COOLANT_CHOICES = ['off', 'mist', 'flood'] as const;
 
 /** A number field with bounds and unit (see boundedNumber). */
@@ -124,11 +126,24 @@ export const engraveSection = z
     rapidMmPerMin: num({ min: 0, max: 200000, unit: 'mm/min', exclusiveMin: true }).default(3000).describe('rapid (G0) rate of the machine, mm/min, for the time estimate only'),
     laserPowerPct: num({ min: 0, max: 100, unit: '%', exclusiveMin: true }).optional().describe(`laser power while scoring, percent of the machine maximum (${PRESET}, e.g. acrylic 30)`),
     laserSpeedMmPerMin: num({ min: 0, max: 200000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`laser scoring speed, mm/min (${PRESET}, e.g. acrylic 3000)`),
+    laserFill: z
+      .enum(LASER_FILL_CHOICES, { error: `allowed: ${LASER_FILL_CHOICES.map((v) => JSON.stringify(v)).join(', ')}` })
+      .default('fill')
+      .describe('fill: lines wider than the beam are burned as wide as drawn (concentric passes inside the union of the lines, overlaps burned once); score: every line traced once along its centre'),
+    laserBeamMm: num({ min: 0, max: 5, unit: 'mm', exclusiveMin: true })
+      .default(0.15)
+      .describe('width of the line one laser pass burns, mm (about 0.1-0.2 for a focused CO2 or diode laser; measure a scored line on scrap); lines no wider are scored along their centre'),
+    laserFillIntervalMm: num({ min: 0, max: 5, unit: 'mm', exclusiveMin: true })
+      .optional()
+      .describe('distance between concentric fill passes, mm (default: the beam width, so the passes just meet; at most laserBeamMm)'),
     laserMaxS: num({ min: 0, max: 100000, unit: '', exclusiveMin: true }).default(1000).describe('the S word for 100 % laser power (GRBL $30; default 1000)'),
   })
   .superRefine((e, ctx) => {
     if (e.clearanceZMm > e.safeZMm) {
       ctx.addIssue({ code: 'custom', path: ['clearanceZMm'], input: e.clearanceZMm, message: `allowed: at most engrave.safeZMm (${e.safeZMm} mm)` });
+    }
+    if (e.laserFillIntervalMm !== undefined && e.laserFillIntervalMm > e.laserBeamMm) {
+      ctx.addIssue({ code: 'custom', path: ['laserFillIntervalMm'], input: e.laserFillIntervalMm, message: `allowed: at most engrave.laserBeamMm (${e.laserBeamMm} mm), so the passes meet` });
     }
     if (e.entryZMm > e.clearanceZMm) {
       ctx.addIssue({ code: 'custom', path: ['entryZMm'], input: e.entryZMm, message: `allowed: at most engrave.clearanceZMm (${e.clearanceZMm} mm)` });
