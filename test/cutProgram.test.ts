@@ -88,7 +88,7 @@ describe.each(CASES)('cut.ngc: $name', ({ file, patch }) => {
 
     // Deepest Z = -(thickness + breakthrough), and nothing below it.
     const planned = -(t + c.breakthroughMm);
-    const deepest = Math.min(...ms.map((m) => m.to.z));
+    const deepest = ms.reduce((lo, m) => Math.min(lo, m.to.z), Infinity);
     expectClose(deepest, planned, 0.001, 'deepest Z', ' mm');
     expect(deepest).toBeGreaterThanOrEqual(planned - EPS_MM);
 
@@ -97,7 +97,8 @@ describe.each(CASES)('cut.ngc: $name', ({ file, patch }) => {
     const ops = report.operations as { part: string; feature: string; operation: string }[];
     const drills = ops.filter((o) => o.operation === 'drill').length;
     expect(runs.length).toBe(ops.length + drills * (report.passes - 1));
-    const placed = sheetParts(layout, drawing).map((part, i) => ({ part, originMm: report.parts[i].originMm as [number, number] }));
+    const copies = sheetParts(layout, drawing).flatMap((p) => Array.from({ length: p.quantity ?? 1 }, (_, k) => ((p.quantity ?? 1) === 1 ? p : { ...p, name: `${p.name}-${k + 1}` })));
+    const placed = copies.map((part, i) => ({ part, originMm: report.parts[i].originMm as [number, number] }));
     expect(report.parts.map((p: Json) => p.name)).toEqual(placed.map((p) => p.part.name));
 
     // Geometry with shapely: every run at its final depth keeps the tool centre

@@ -1,4 +1,4 @@
-import { faceOrientationOf, layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec } from '@umbrafab/geometry';
+import { faceOrientationOf, layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec, type LayoutOptions } from '@umbrafab/geometry';
 import { buildPlanarFiles, type PlanarBuildResult } from './buildPlanarFiles.ts';
 import { toReportJson } from '@umbrafab/fabricate';
 import { PRODUCERS, START_ORDER } from './outputs/index.ts';
@@ -11,6 +11,8 @@ export interface BuildResult {
   readonly layout: DialLayout;
   readonly files: readonly OutputFile[];
   readonly report: Report;
+  /** the layout's notes, then the producers' (also in report.json) */
+  readonly notes: readonly string[];
 }
 
 export const GENERATOR = 'umbrafab 0.1.0';
@@ -24,6 +26,7 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   const { layout } = ctx;
   const files: OutputFile[] = [];
   const sections: Partial<Report> = {};
+  const notes: string[] = [...layout.notes];
   // Producers whose work runs mostly on worker threads (PNG rendering) start
   // first, so that their threads overlap the others' work on this one; the
   // results are still taken in PRODUCERS order, and the first failure in that
@@ -41,6 +44,7 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   for (const s of settled) {
     const r = (s as PromiseFulfilledResult<ProducerResult>).value;
     files.push(...r.files);
+    notes.push(...(r.notes ?? []));
     const twice = Object.keys(r.report).find((key) => key in sections);
     if (twice) throw new Error(`two producers both write the report section ${twice}`);
     Object.assign(sections, r.report);
@@ -50,9 +54,9 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   if (dup) throw new Error(`two producers both write ${dup}`);
   // Each producer's sections are typed beside it; together they make the
   // Report (test/reportSchema.test.ts holds every build to its schema).
-  const report = { generator: GENERATOR, spec, ...sections, notes: layout.notes, files: names } as Report;
+  const report = { generator: GENERATOR, spec, ...sections, notes, files: names } as Report;
   files.push({ name: 'report.json', bytes: utf8(toReportJson(report)) });
-  return { layout, files, report };
+  return { layout, files, report, notes };
 }
 
 /**
@@ -65,8 +69,8 @@ export async function buildAnyFiles(spec: DialSpec): Promise<BuildResult | Plana
 }
 
 /** The geometry every producer reads, computed once per spec (the local page draws its views from it before the full build). */
-export function buildContext(spec: DialSpec): BuildContext {
-  const layout = layoutDial(spec);
+export function buildContext(spec: DialSpec, options: LayoutOptions = {}): BuildContext {
+  const layout = layoutDial(spec, options);
   const extras = timeFaceExtras(layout); // date lines, mean-time curves, engraved equation of time
   const drawing = plateDrawing(layout, extras.lines, extras.text);
   return { spec, layout, drawing };

@@ -15,6 +15,8 @@ export interface BuildContext {
 export interface ProducerResult<R extends object = object> {
   readonly files: readonly OutputFile[];
   readonly report: R;
+  /** notes for the user: report.json's notes (after the layout's) and the console */
+  readonly notes?: readonly string[];
 }
 
 /**

@@ -1,5 +1,5 @@
 import { defaultPictureDate, sunForPicture, viewAssembly } from '@umbrafab/geometry';
-import { svgWidthMm, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM } from '@umbrafab/fabricate';
+import { fitPixelBudget, svgHeightMm, svgWidthMm, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM, MAX_PICTURE_PIXELS } from '@umbrafab/fabricate';
 import { previewSvgText } from './plateOutputs.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
@@ -12,14 +12,20 @@ export interface PicturesSections {
 
 /** The pictures as rendered. */
 export interface PicturesSection {
-  /** PNG resolution, pixels per mm of the drawing */
+  /** PNG resolution asked for (pictures.pxPerMm), pixels per mm of the drawing */
   readonly pxPerMm: number;
-  /** preview.svg / preview.png: the face at 1:1 */
-  readonly preview: { readonly widthMm: number; readonly widthPx: number; readonly heightPx: number };
+  /** present only when a picture was rendered at less than pxPerMm: the pixel budget of one picture */
+  readonly maxPixels?: number;
+  /** present only then: which picture went to which resolution, as in report.json's notes */
+  readonly note?: string;
+  /** preview.svg / preview.png: the face at 1:1; `pxPerMm` only when lowered to fit maxPixels */
+  readonly preview: { readonly widthMm: number; readonly pxPerMm?: number; readonly widthPx: number; readonly heightPx: number };
   /** assembly.svg / assembly.png: the dial on its stand with the shadow at pictures.date / pictures.time */
   readonly assembly: {
     readonly widthMm: number;
     readonly heightMm: number;
+    /** only when lowered to fit maxPixels */
+    readonly pxPerMm?: number;
     readonly widthPx: number;
     readonly heightPx: number;
     /** local date 'YYYY-MM-DD' */
@@ -70,22 +76,38 @@ export const picturesOutputs: Producer<PicturesSections> = async (ctx) => {
   return {
     files: [...(p?.files ?? []), ...(t?.files ?? [])],
     report: { ...(p ? { pictures: p.report } : {}), ...(t ? { template: t.report } : {}) },
+    notes: p?.notes ?? [],
   };
 };
 
-/** preview.png, assembly.svg and assembly.png, and the report's `pictures` section. */
-async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: PicturesSection }> {
+/**
+ * preview.png, assembly.svg and assembly.png, and the report's `pictures`
+ * section. Each PNG is held to MAX_PICTURE_PIXELS: a plate too large for
+ * pictures.pxPerMm is rendered at the highest resolution that fits, and the
+ * report and a note say so (memory stays bounded whatever the plate size).
+ */
+async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: PicturesSection; notes: string[] }> {
   const { spec, layout, drawing } = ctx;
   const pics = spec.pictures;
   const ppm = pics.pxPerMm;
   const preview = previewSvgText(ctx);
+  const previewFit = fitPixelBudget(svgWidthMm(preview), svgHeightMm(preview), ppm);
   // Start rendering before anything else, on a worker thread.
-  const previewPngJob = toPngAsync(preview, { pxPerMm: ppm });
+  const previewPngJob = toPngAsync(preview, { pxPerMm: previewFit.pxPerMm });
   const date = pics.date ?? defaultPictureDate(layout);
   const sun = sunForPicture(layout, date, pics.time);
   const picture = viewAssembly(layout, drawing, sun, { viewAzimuthDeg: pics.viewAzimuth, viewElevationDeg: pics.viewElevation });
   const assemblySvg = toAssemblySvg(picture, { title: `${spec.name} on its ${Math.abs(spec.site.latitude)}° wedge, ${date}, shadow on ${pics.time}` });
-  const [previewPng, assemblyPng] = await Promise.all([previewPngJob, toPngAsync(assemblySvg, { pxPerMm: ppm })]);
+  const assemblyFit = fitPixelBudget(picture.widthMm, picture.heightMm, ppm);
+  const [previewPng, assemblyPng] = await Promise.all([previewPngJob, toPngAsync(assemblySvg, { pxPerMm: assemblyFit.pxPerMm })]);
+  const lowered = [
+    ...(previewFit.lowered ? [`preview.png at ${previewFit.pxPerMm} px/mm`] : []),
+    ...(assemblyFit.lowered ? [`assembly.png at ${assemblyFit.pxPerMm} px/mm`] : []),
+  ];
+  const note = lowered.length
+    ? `pictures: ${lowered.join(' and ')} instead of pictures.pxPerMm ${ppm}, to stay within ${MAX_PICTURE_PIXELS / 1e6} million pixels a picture (the plate is large; the DXF, SVG and PDF are at full scale)`
+    : null;
+  const fitted = (f: { pxPerMm: number; lowered: boolean }) => (f.lowered ? { pxPerMm: f.pxPerMm } : {});
   const size = (png: Uint8Array) => ({ widthPx: readU32(png, 16), heightPx: readU32(png, 20) });
   const r3 = (v: number) => Math.round(v * 1000) / 1000;
   return {
@@ -94,12 +116,15 @@ async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[];
       { name: 'assembly.svg', bytes: utf8(assemblySvg) },
       { name: 'assembly.png', bytes: assemblyPng },
     ],
+    notes: note ? [note] : [],
     report: {
       pxPerMm: ppm,
-      preview: { widthMm: svgWidthMm(preview), ...size(previewPng) },
+      ...(note ? { maxPixels: MAX_PICTURE_PIXELS, note } : {}),
+      preview: { widthMm: svgWidthMm(preview), ...fitted(previewFit), ...size(previewPng) },
       assembly: {
         widthMm: picture.widthMm,
         heightMm: picture.heightMm,
+        ...fitted(assemblyFit),
         ...size(assemblyPng),
         date,
         dialTime: sun.dialTime,

@@ -19,16 +19,35 @@ export interface CachedBuild {
   readonly full: () => Promise<readonly OutputFile[]>;
 }
 
+/** Most bytes of finished full builds the page server keeps for downloads (the newest build's are always kept). */
+export const MAX_CACHED_FILE_BYTES = 64 * 1024 * 1024;
+
 /**
  * A small in-memory store of recent specs, newest last, at most `size`.
  * The views (layout, face SVG) are computed at once; the full build, which
  * takes about a second with every picture and program, only when the page
- * asks for the file list or a file. Downloads are looked up here by id and
+ * asks for the file list or a file; finished builds' files are kept up to
+ * `maxFileBytes` in all (older ones are dropped and built again if asked
+ * for), so memory does not grow with every spec shown. Downloads are looked up here by id and
  * exact file name: nothing is read from or written to disk, so a name from
  * the page can never reach a path.
  */
-export function buildCache(builder: FullBuilder, size = 12) {
+export function buildCache(builder: FullBuilder, size = 12, maxFileBytes = MAX_CACHED_FILE_BYTES) {
   const builds = new Map<string, CachedBuild>();
+  /** the finished full builds held, oldest first, with their size in bytes */
+  const held = new Map<string, { bytes: number; drop: () => void }>();
+  const hold = (id: string, files: readonly OutputFile[], drop: () => void) => {
+    held.delete(id);
+    held.set(id, { bytes: files.reduce((n, f) => n + f.bytes.length, 0), drop });
+    let total = [...held.values()].reduce((n, h) => n + h.bytes, 0);
+    // Keep the newest build's files whatever their size; drop older ones (built again if asked for) past the budget.
+    for (const [old, h] of held) {
+      if (total <= maxFileBytes || old === id) break;
+      h.drop();
+      held.delete(old);
+      total -= h.bytes;
+    }
+  };
   return {
     async views(spec: DialSpec): Promise<CachedBuild> {
       const id = specId(spec);
@@ -48,10 +67,18 @@ export function buildCache(builder: FullBuilder, size = 12) {
         spec,
         ctx,
         previewSvg: svg ? new TextDecoder().decode(svg.bytes) : '',
-        full: () => (full ??= builder.build(spec)),
+        full: () =>
+          (full ??= builder.build(spec).then((files) => {
+            hold(id, files, () => (full = undefined));
+            return files;
+          })),
       };
       builds.set(id, entry);
-      while (builds.size > size) builds.delete(builds.keys().next().value as string);
+      while (builds.size > size) {
+        const oldest = builds.keys().next().value as string;
+        builds.delete(oldest);
+        held.delete(oldest);
+      }
       return entry;
     },
     get(id: string): CachedBuild | undefined {

@@ -3,8 +3,13 @@ import type { DialSpec } from '@umbrafab/geometry';
 import { buildFiles } from '../buildFiles.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 
+/** How long the build worker stays up with nothing to do, ms: then it stops and its memory goes back to the system. */
+export const WORKER_IDLE_MS = 15_000;
+
 /** Runs full builds; `close()` stops its worker. */
 export interface FullBuilder {
+  /** is the worker thread up now? (it stops after WORKER_IDLE_MS without a job) */
+  readonly running: () => boolean;
   /** start the worker now (it takes a few seconds to load the sources), so the first build answers sooner */
   readonly warm: () => void;
   readonly build: (spec: DialSpec) => Promise<readonly OutputFile[]>;
@@ -18,11 +23,25 @@ export interface FullBuilder {
  * cannot start, builds run on the main thread instead (same code, same bytes,
  * only slower to answer while building).
  */
-export function fullBuilder(): FullBuilder {
+export function fullBuilder(options: { readonly idleMs?: number } = {}): FullBuilder {
+  const idleMs = options.idleMs ?? WORKER_IDLE_MS;
   let worker: Worker | undefined;
   let broken = false;
   let next = 0;
+  let idle: NodeJS.Timeout | undefined;
   const waiting = new Map<number, { spec: DialSpec; ok: (f: readonly OutputFile[]) => void; fail: (e: unknown) => void }>();
+  // With no job left, stop the worker after a while: a large build's heap and pixel buffers leave with it.
+  const idleLater = () => {
+    clearTimeout(idle);
+    if (waiting.size > 0 || !worker) return;
+    idle = setTimeout(() => {
+      if (waiting.size > 0 || !worker) return;
+      const w = worker;
+      worker = undefined;
+      void w.terminate();
+    }, idleMs);
+    idle.unref();
+  };
 
   const start = (): Worker | undefined => {
     if (worker || broken) return worker;
@@ -33,6 +52,7 @@ export function fullBuilder(): FullBuilder {
         const p = waiting.get(m.job);
         if (!p) return;
         waiting.delete(m.job);
+        idleLater();
         if (m.files) p.ok(m.files.map((f) => ({ name: f.name, bytes: new Uint8Array(f.bytes) })));
         else p.fail(Object.assign(new Error(m.error?.message), { name: m.error?.name ?? 'Error', ...(m.error?.field !== undefined ? { field: m.error.field } : {}), stack: m.error?.stack }));
       });
@@ -51,8 +71,13 @@ export function fullBuilder(): FullBuilder {
   };
 
   return {
-    warm: () => void start(),
+    running: () => worker !== undefined,
+    warm: () => {
+      start();
+      idleLater();
+    },
     build: (spec) => {
+      clearTimeout(idle);
       const w = start();
       if (!w) return buildFiles(spec).then((r) => r.files);
       const job = ++next;
@@ -62,6 +87,7 @@ export function fullBuilder(): FullBuilder {
       });
     },
     close: async () => {
+      clearTimeout(idle);
       await worker?.terminate();
       worker = undefined;
     },

@@ -1,19 +1,23 @@
 import { createHash } from 'node:crypto';
-import { readFileSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import type { IncomingMessage, ServerResponse } from 'node:http';
+import { isIP } from 'node:net';
 import { basename, dirname } from 'node:path';
 import { isSpecError, parseSpec, type DialSpec } from '@umbrafab/geometry';
 import { writeFilesAtomic } from '../writeFilesAtomic.ts';
-import { isLoopbackHost } from './bindPolicy.ts';
+import { isLoopbackHost, type HostCheck } from './bindPolicy.ts';
 import type { BuildCache } from './buildCache.ts';
 import { formValuesToSpec, specToFormValues, type FormValue } from './formValues.ts';
 import { HttpError } from './httpError.ts';
 import { plateToPreview, previewFrame } from '@umbrafab/fabricate';
 import { previewSvgOptions } from '../outputs/plateOutputs.ts';
-import { MAX_BODY_BYTES, readJsonBody } from './readJsonBody.ts';
+import { BodyAbortedError, MAX_BODY_BYTES, readJsonBody } from './readJsonBody.ts';
 import { sceneMeshes } from './sceneMeshes.ts';
 import { specFields } from './specFields.ts';
-import { specToCommentedYaml } from './specYaml.ts';
+import { parseSpecText } from '../readSpec.ts';
+import { starterSpecYaml } from '../starterSpec.ts';
+import { derivedValues, type DerivedValue } from './derivedValues.ts';
+import { describeChange, editSpecText } from './editSpecText.ts';
 import { STATIC_ASSETS } from './staticAssets.ts';
 import { summaryRows } from './summaryRows.ts';
 import { sunView, type SunQuery } from './sunView.ts';
@@ -27,12 +31,14 @@ export interface ServeContext {
   readonly specLabel: string | null;
   /** the spec the page opens with (raw, before validation) */
   readonly initialSpec: unknown;
+  /** the calendar year of the starter spec (used when the spec file does not exist yet) */
+  readonly starterYear: number;
   /** the problem with the initial spec file, if it could not be read */
   readonly initialError: string | null;
   /** the port actually bound (for the Host header check) */
   readonly port: () => number;
-  /** false: only requests naming a loopback host are served (DNS-rebinding guard) */
-  readonly allowRemote: boolean;
+  /** which Host headers are answered (DNS-rebinding guard), from bindPolicy */
+  readonly hostCheck: HostCheck;
   readonly maxBodyBytes?: number;
   readonly log: (line: string) => void;
 }
@@ -62,7 +68,7 @@ let pageCsp: string | undefined;
  * - GET  /api/files/<id>: the full build's file list (buildFiles, run once per spec on first request);
  * - GET  /api/files/<id>/<name>: one file of that build, its bytes exactly;
  * - POST /api/sun {fields, date, time, kind}: the sun and the gnomon's shadow;
- * - POST /api/save {fields}: write the spec as commented YAML to the spec file given on the command line.
+ * - POST /api/save {fields, preview?}: edit the spec file given on the command line, only the changed fields (preview: list them, write nothing).
  */
 export async function handleRequest(ctx: ServeContext, req: IncomingMessage, res: ServerResponse): Promise<void> {
   try {
@@ -91,18 +97,33 @@ export async function handleRequest(ctx: ServeContext, req: IncomingMessage, res
       if (e.status === 413) res.setHeader('Connection', 'close');
       return sendJson(res, e.status, { ok: false, error: { field: null, message: e.message } });
     }
+    if (e instanceof BodyAbortedError) {
+      // A slow or vanished upload: one line in the log, and the connection is already closed or closing.
+      ctx.log(`umbrafab serve: ${e.message}`);
+      if (!res.headersSent && !res.destroyed) return sendJson(res, 408, { ok: false, error: { field: null, message: 'request body: did not arrive in time' } });
+      return;
+    }
     ctx.log(`umbrafab serve: internal error: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
     return sendJson(res, 500, { ok: false, error: { field: null, message: `internal error: ${e instanceof Error ? e.message : String(e)}` } });
   }
 }
 
-/** Only loopback Host names unless --allow-remote: a page on another site cannot reach us through a rebound DNS name. */
+/**
+ * Answer only a Host naming this server: a loopback name or address, and with
+ * --allow-remote an IP address literal or a name given with --allowed-host,
+ * with this server's port. A page on another site that reaches us through a
+ * rebound DNS name sends its own name, and is refused.
+ */
 function checkHost(ctx: ServeContext, req: IncomingMessage): void {
-  if (ctx.allowRemote) return;
+  const { names, ipLiterals } = ctx.hostCheck;
+  if (names === null) return;
   const host = String(req.headers.host ?? '');
   const m = /^(\[[^\]]+\]|[^:]+)(?::(\d+))?$/.exec(host);
-  if (!m || !isLoopbackHost(m[1]) || (m[2] !== undefined && Number(m[2]) !== ctx.port())) {
-    throw new HttpError(403, `Host ${JSON.stringify(host)}: allowed: 127.0.0.1, localhost or [::1] with this server's port`);
+  const name = m ? m[1].replace(/^\[|\]$/g, '').toLowerCase().replace(/\.$/, '') : '';
+  const known = m !== null && (isLoopbackHost(name) || (ipLiterals && isIP(name) !== 0) || names.some((n) => n.replace(/\.$/, '') === name));
+  if (!known || (m[2] !== undefined && Number(m[2]) !== ctx.port())) {
+    const allowed = ['127.0.0.1', 'localhost', '[::1]', ...(ipLiterals ? ['an IP address of this machine'] : []), ...names].join(', ');
+    throw new HttpError(403, `Host ${JSON.stringify(host)}: allowed: ${allowed}, with this server's port`);
   }
 }
 
@@ -120,10 +141,17 @@ function checkOrigin(req: IncomingMessage): void {
 }
 
 function setup(ctx: ServeContext) {
+  let derived: Record<string, DerivedValue> | null = null;
+  try {
+    derived = derivedValues(parseSpec(ctx.initialSpec));
+  } catch (e) {
+    if (!isSpecError(e)) throw e;
+  }
   return {
     ok: true,
     fields: specFields(),
     values: specToFormValues(ctx.initialSpec),
+    derived,
     specFile: ctx.specLabel,
     canSave: ctx.specPath !== null,
     initialError: ctx.initialError,
@@ -154,6 +182,7 @@ async function view(ctx: ServeContext, body: unknown) {
     svg: b.previewSvg,
     frame: previewFrame(b.ctx.drawing, previewSvgOptions(b.ctx)),
     summary: summaryRows(layout),
+    derived: derivedValues(spec, layout),
     notes: layout.notes,
     scene: sceneMeshes(layout),
     filesUrl: `/api/files/${b.id}`,
@@ -179,15 +208,26 @@ async function sun(ctx: ServeContext, body: unknown) {
   return { ok: true, id: b.id, sun: view, shadowPreview };
 }
 
+/**
+ * "save spec": edit the user's file in place, writing only the fields the form
+ * changed (comments, order and untouched fields stay); atomic. With
+ * `preview: true` it only lists the changes, which the page shows before
+ * saving. Nothing changed: nothing is written.
+ */
 function save(ctx: ServeContext, body: unknown) {
-  const fields = fieldsOf(body, ['fields']);
+  const fields = fieldsOf(body, ['fields', 'preview']);
   if (ctx.specPath === null) throw new HttpError(409, 'save spec: no spec file was named when the server started; allowed: start it as `umbrafab serve my-dial.yaml` to save to that file');
-  const raw = formValuesToSpec(fields);
-  parseSpec(raw); // refuse to save a spec the CLI would refuse
-  const text = specToCommentedYaml(raw);
-  writeFilesAtomic(dirname(ctx.specPath), [{ name: basename(ctx.specPath), bytes: new TextEncoder().encode(text) }], true);
-  ctx.log(`umbrafab serve: saved the spec to ${ctx.specLabel}`);
-  return { ok: true, file: ctx.specLabel, bytes: Buffer.byteLength(text) };
+  parseSpec(formValuesToSpec(fields)); // refuse to save a spec the CLI would refuse
+  const current = existsSync(ctx.specPath) ? readFileSync(ctx.specPath, 'utf8') : starterSpecYaml(ctx.starterYear);
+  const raw = parseSpecText(current, ctx.specLabel ?? 'spec') ?? {};
+  const edit = editSpecText(current, raw, fields);
+  const changes = edit.changes.map((c) => ({ ...c, text: describeChange(c) }));
+  if ((body as { preview?: unknown }).preview === true) return { ok: true, file: ctx.specLabel, preview: true, changes };
+  if (edit.changes.length === 0 && existsSync(ctx.specPath)) return { ok: true, file: ctx.specLabel, changes, bytes: Buffer.byteLength(current), written: false };
+  parseSpec(parseSpecText(edit.text, ctx.specLabel ?? 'spec')); // the edited file itself must build
+  writeFilesAtomic(dirname(ctx.specPath), [{ name: basename(ctx.specPath), bytes: new TextEncoder().encode(edit.text) }], true);
+  ctx.log(`umbrafab serve: saved ${changes.length} changed field(s) to ${ctx.specLabel}${changes.length ? `: ${changes.map((c) => c.text).join('; ')}` : ''}`);
+  return { ok: true, file: ctx.specLabel, changes, bytes: Buffer.byteLength(edit.text), written: true };
 }
 
 async function sendBuildFile(ctx: ServeContext, res: ServerResponse, path: string): Promise<void> {

@@ -21,6 +21,10 @@ export interface ServeOptions {
   /** port, default 7370; 0 picks a free one */
   readonly port?: number;
   readonly allowRemote?: boolean;
+  /** with allowRemote: host names the page may be reached by besides IP addresses and localhost; ['*'] turns the Host check off */
+  readonly allowedHosts?: readonly string[];
+  /** how long a request may take to arrive, ms, default 30000 */
+  readonly requestTimeoutMs?: number;
   /** largest request body, bytes, default MAX_BODY_BYTES (256 KiB) */
   readonly maxBodyBytes?: number;
   /** where warnings and save notices go */
@@ -49,12 +53,13 @@ export { DEFAULT_PORT } from './bindPolicy.ts';
  * @example const s = await startServer({ specPath: 'dial.yaml', port: 0 }); console.log(s.url); await s.close();
  */
 export async function startServer(options: ServeOptions = {}): Promise<RunningServer> {
-  const { host, warning } = bindPolicy(options);
+  const { host, warning, hostCheck } = bindPolicy(options);
   const log = options.log ?? ((l: string) => process.stderr.write(l + '\n'));
   const specPath = options.specPath ? resolve(options.specPath) : null;
   let initialSpec: unknown;
   let initialError: string | null = null;
-  const starter = () => parseSpecText(starterSpecYaml(Number(specFields().find((f) => f.key === 'calendar.year')?.default ?? 2027)));
+  const starterYear = Number(specFields().find((f) => f.key === 'calendar.year')?.default ?? 2027);
+  const starter = () => parseSpecText(starterSpecYaml(starterYear));
   if (specPath && existsSync(specPath)) {
     try {
       initialSpec = parseSpecText(readSpecText(specPath), options.specPath);
@@ -73,15 +78,16 @@ export async function startServer(options: ServeOptions = {}): Promise<RunningSe
     specLabel: options.specPath ?? null,
     initialSpec,
     initialError,
+    starterYear,
     port: () => (server?.address() as AddressInfo | null)?.port ?? 0,
-    allowRemote: options.allowRemote === true,
+    hostCheck,
     maxBodyBytes: options.maxBodyBytes ?? MAX_BODY_BYTES,
     log,
   };
-  const srv = createServer((req, res) => void handleRequest(ctx, req, res));
+  const requestTimeout = options.requestTimeoutMs ?? 30_000;
+  // Node checks for timed-out requests every connectionsCheckingInterval (30 s by default): check often enough to keep the limit.
+  const srv = createServer({ requestTimeout, headersTimeout: Math.min(10_000, requestTimeout), connectionsCheckingInterval: Math.max(100, Math.min(1_000, requestTimeout / 2)) }, (req, res) => void handleRequest(ctx, req, res));
   server = srv;
-  srv.headersTimeout = 10_000;
-  srv.requestTimeout = 30_000;
   await new Promise<void>((ok, fail) => {
     srv.once('error', fail);
     srv.listen(options.port ?? DEFAULT_PORT, host, () => {

@@ -80,7 +80,8 @@ function bounds(part: SheetPart): { min: [number, number]; max: [number, number]
  * cut.ngc for a router job: the job's flat parts (sheetParts: the plate and
  * the sheet gnomon, nominal, with the inside-corner reliefs for the tool)
  * placed on one stock, the plate at the work origin of plate.dxf and
- * engrave.ngc (its lower-left corner), each further part to the right of the
+ * engrave.ngc (its lower-left corner), each further part (the stand parts
+ * too, and each copy of a part needed more than once) to the right of the
  * previous one with the tool diameter, both lead-ins and PART_GAP_MM between
  * their tool paths. The tool (process.kerf) is checked against every hole,
  * slot and gap first (assertToolFits; a hole the tool's size is drilled).
@@ -99,7 +100,11 @@ export async function cutFromSpec(spec: DialSpec, layout: DialLayout, drawing: P
     inner: p.inner.filter((f) => !(f.kind === 'circle' && Math.abs(2 * f.radiusMm - s.toolDiameterMm) <= DRILL_MATCH_MM)),
   }));
   assertToolFits(bare, s.toolDiameterMm, 'process.kerf');
-  const parts = sheetParts(layout, drawing);
+  // A part the job needs several of (quantity) is cut that many times, copies named part-1, part-2, …
+  const parts = sheetParts(layout, drawing).flatMap((p) => {
+    const n = p.quantity ?? 1;
+    return n === 1 ? [p] : Array.from({ length: n }, (_, k) => ({ ...p, name: `${p.name}-${k + 1}` }));
+  });
   const r = s.toolDiameterMm / 2;
   const placed: PartLoops[] = [];
   let nextX = 0;

@@ -1,2 +1,3 @@
 export * from './toPng.ts';
 export * from './toAssemblySvg.ts';
+export * from './fitPixelBudget.ts';

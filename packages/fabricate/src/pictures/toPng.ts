@@ -65,9 +65,18 @@ function resvgOptions(svg: string, o: PngOptions) {
 
 /** The root element's width in mm (mm, cm, in, px or unitless px). */
 export function svgWidthMm(svg: string): number {
+  return svgLengthMm(svg, 'width');
+}
+
+/** The root element's height in mm (mm, cm, in, px or unitless px). */
+export function svgHeightMm(svg: string): number {
+  return svgLengthMm(svg, 'height');
+}
+
+function svgLengthMm(svg: string, attr: 'width' | 'height'): number {
   const root = /<svg\b[^>]*>/.exec(svg);
-  const m = root ? /\swidth="([\d.]+)(mm|cm|in|px)?"/.exec(root[0]) : null;
-  if (!m) throw new Error('svg: the root <svg> element has no numeric width attribute; allowed: width="123mm" (or cm, in, px)');
+  const m = root ? new RegExp(`\\s${attr}="([\\d.]+)(mm|cm|in|px)?"`).exec(root[0]) : null;
+  if (!m) throw new Error(`svg: the root <svg> element has no numeric ${attr} attribute; allowed: ${attr}="123mm" (or cm, in, px)`);
   const v = Number(m[1]);
   switch (m[2]) {
     case 'mm':
