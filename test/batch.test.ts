@@ -2,6 +2,9 @@ import { mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { parse as parseYaml } from 'yaml';
+import { parseSpec } from '../packages/geometry/src/index.ts';
+import { buildContext, buildFiles } from '../packages/cli/src/buildFiles.ts';
 import { runCli } from './helpers/runCli.ts';
 import { expectClose } from './helpers/closeTo.ts';
 
@@ -43,17 +46,31 @@ describe('umbrafab batch', () => {
     expect(r.code).toBe(0);
     const names = readdirSync(out).sort();
     expect(names.filter((n) => n.endsWith('.dxf') && n.startsWith('plate'))).toEqual(['plate.dxf']);
-    expect(names.filter((n) => n.startsWith('wedge-'))).toEqual(lats.map((l) => `wedge-N${l}.stl`));
-    const summary = JSON.parse(readFileSync(join(out, 'batch.json'), 'utf8'));
+    expect(names.filter((n) => n.startsWith('stand-') && n.endsWith('.stl'))).toEqual(lats.map((l) => `stand-N${l}.stl`));
+    const summary = JSON.parse(readFileSync(join(out, 'report.json'), 'utf8'));
     expect(summary.plate.shared).toBe(true);
+    expect(summary.latitudeRangeDeg).toEqual([30, 50]);
+    // Per latitude: its wedge, install sheet and report; the plate, its preview and the template once; pictures are left to build.
+    expect(names.filter((n) => n.endsWith('.png'))).toEqual([]);
+    for (const lat of lats) for (const f of [`stand-N${lat}.stl`, `stand-N${lat}.dxf`, `install-N${lat}.md`, `report-N${lat}.json`]) expect(names, f).toContain(f);
+    for (const f of ['plate.dxf', 'preview.svg', 'gnomon.dxf', 'template.pdf']) expect(names, f).toContain(f);
+    expect(readFileSync(join(out, 'install-N45.md'), 'utf8')).toMatch(/45/);
+    // The shared plate states the range it serves, not one latitude: it is build's plate for that range title.
+    const spec30 = parseSpec({ ...parseYaml(readFileSync(DEMO, 'utf8')), site: { ...parseYaml(readFileSync(DEMO, 'utf8')).site, latitude: 30 } });
+    const ranged = buildContext(spec30, { latitudeRangeDeg: [30, 50] });
+    expect(ranged.layout.title.map((t) => t.text).join(' | ')).toMatch(/30\.000N TO 50\.000N/);
+    expect(buildContext(spec30).layout.title.map((t) => t.text).join(' | ')).not.toMatch(/ TO /);
+    const plate = (await buildFiles(spec30, ranged)).files.find((f) => f.name === 'plate.dxf')!;
+    expect(Buffer.from(plate.bytes).equals(readFileSync(join(out, 'plate.dxf')))).toBe(true);
     for (const lat of lats) {
       // The tilt equals |latitude| (docs/design.md §4), read back from the STL's seat facets.
-      expectClose(seatTiltDeg(readFileSync(join(out, `wedge-N${lat}.stl`))), lat, 0.01, `wedge-N${lat}.stl seat tilt`, '°');
+      expectClose(seatTiltDeg(readFileSync(join(out, `stand-N${lat}.stl`))), lat, 0.01, `stand-N${lat}.stl seat tilt`, '°');
       expect(summary.latitudes.find((x: { latitudeDeg: number }) => x.latitudeDeg === lat).wedgeAngleDeg).toBe(lat);
     }
     // Summary table: a header and one row per latitude.
     expect(r.out).toMatch(/latitude\s+wedge angle/);
-    for (const lat of lats) expect(r.out).toMatch(new RegExp(`^${lat}°\\s+${lat}\\.00°.*wedge-N${lat}\\.stl\\s+plate\\.dxf$`, 'm'));
+    for (const lat of lats) expect(r.out).toMatch(new RegExp(`^${lat}°\\s+${lat}\\.00°.*stand-N${lat}\\.stl\\s+install-N${lat}\\.md\\s+plate\\.dxf$`, 'm'));
+    expect(r.out).toMatch(/one plate serves every latitude from 30°N to 50°N/);
   });
 
   it('makes one plate per latitude when the hemispheres differ', async () => {
@@ -61,7 +78,27 @@ describe('umbrafab batch', () => {
     const r = await runCli(['batch', DEMO, '--latitudes', '35,-35', '--out', out, '--no-progress']);
     expect(r.code).toBe(0);
     expect(readdirSync(out).filter((n) => n.endsWith('.dxf') && n.startsWith('plate')).sort()).toEqual(['plate-N35.dxf', 'plate-S35.dxf']);
-    expectClose(seatTiltDeg(readFileSync(join(out, 'wedge-S35.stl'))), 35, 0.01, 'southern wedge tilt', '°');
+    expectClose(seatTiltDeg(readFileSync(join(out, 'stand-S35.stl'))), 35, 0.01, 'southern wedge tilt', '°');
+  });
+
+  it.each([{ args: ['--latitudes', '-35,-40'] }, { args: ['--latitudes=-35,-40'] }, { args: ['--latitudes', '-35', '--latitudes', '-40'] }])('takes negative latitudes in every form: $args', async ({ args }) => {
+    const out = mkdtempSync(join(tmpdir(), 'umbrafab-batch-'));
+    const r = await runCli(['batch', DEMO, ...args, '--out', out, '--no-progress']);
+    expect(r.err).toBe('');
+    expect(r.code).toBe(0);
+    const names = readdirSync(out);
+    for (const f of ['stand-S35.stl', 'stand-S40.stl', 'install-S35.md', 'install-S40.md', 'plate.dxf']) expect(names, f).toContain(f);
+    expectClose(seatTiltDeg(readFileSync(join(out, 'stand-S40.stl'))), 40, 0.01, 'stand-S40.stl seat tilt', '°');
+    expect(r.out).toMatch(/from 40°S to 35°S/);
+  });
+
+  it('writes body.stl per latitude when the spec asks for it', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'umbrafab-batch-'));
+    const r = await runCli(['batch', join(ROOT, 'fixtures/specs/page-print.yaml'), '--latitudes', '-30,-34', '--out', dir, '--no-progress']);
+    expect(r.err).toBe('');
+    const names = readdirSync(dir);
+    expect(names.some((n) => /^body(-S30)?\.stl$/.test(n))).toBe(true);
+    expect(names.some((n) => /^body(-S34)?\.stl$/.test(n))).toBe(true);
   });
 
   it('reads latitudes from a file with comments', async () => {
@@ -70,7 +107,7 @@ describe('umbrafab batch', () => {
     writeFileSync(list, '# shop list\n30, 32.5\n34 # south coast\n');
     const r = await runCli(['batch', DEMO, '--latitudes-file', list, '--out', join(dir, 'out'), '--no-progress']);
     expect(r.code).toBe(0);
-    expect(readdirSync(join(dir, 'out')).filter((n) => n.startsWith('wedge-'))).toEqual(['wedge-N30.stl', 'wedge-N32.5.stl', 'wedge-N34.stl']);
+    expect(readdirSync(join(dir, 'out')).filter((n) => n.startsWith('stand-') && n.endsWith('.stl'))).toEqual(['stand-N30.stl', 'stand-N32.5.stl', 'stand-N34.stl']);
   });
 
   for (const [bad, why] of [

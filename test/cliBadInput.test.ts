@@ -1,7 +1,7 @@
 import { mkdirSync, mkdtempSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { stringify } from 'yaml';
+import { parse as parseYaml, stringify } from 'yaml';
 import { describe, expect, it } from 'vitest';
 import { runCli } from './helpers/runCli.ts';
 
@@ -13,7 +13,7 @@ const good = {
   process: { method: 'laser' },
 };
 
-type Case = { name: string; text?: string; spec?: unknown; file?: 'missing' | 'folder'; field: string | RegExp; message: RegExp };
+type Case = { name: string; text?: string; spec?: unknown; file?: 'missing' | 'folder'; field: string | RegExp; message: RegExp; not?: RegExp };
 
 function withPatch(path: string, value: unknown): unknown {
   const copy = structuredClone(good) as Record<string, unknown>;
@@ -47,8 +47,22 @@ const cases: Case[] = [
   { name: 'a spec that is a list', text: '- 1\n- 2\n', field: '(spec)', message: /must be a mapping/ },
   { name: 'broken YAML', text: 'site:\n  latitude: [12\n', field: 'spec file', message: /not valid YAML at line/ },
   { name: 'a duplicated key', text: 'site:\n  latitude: 1\n  latitude: 2\n', field: 'spec file', message: /not valid YAML/ },
-  { name: 'a missing file', file: 'missing', field: 'spec file', message: /no such file/ },
-  { name: 'a folder instead of a file', file: 'folder', field: 'spec file', message: /folder, not a file/ },
+  { name: 'a missing file', file: 'missing', field: 'spec file', message: /no such file: \/.*nope\.yaml/ },
+  { name: 'a folder instead of a file', file: 'folder', field: 'spec file', message: /\/umbrafab-bad-\w+ is a folder, not a file/ },
+  // Every problem listed, each with field, value and what is allowed.
+  { name: 'several problems at once', spec: { ...withPatch('site.latitude', 95) as object, gnomon: { height: 0, hieght: 3 } }, field: 'site.latitude', message: /3 problems in the spec:\n  site\.latitude: got 95; allowed: a number from -90° to 90°\n  gnomon\.height: got 0; allowed: a number greater than 0 mm up to 1000 mm\n  gnomon\.hieght: unknown field \(did you mean gnomon\.height\?\); known fields here: height/ },
+  { name: 'an empty file', text: '', field: 'spec file', message: /spec\.yaml is empty; allowed: a dial spec with at least a site: section/, not: /null/ },
+  { name: 'a file of comments only', text: '# nothing yet\n', field: 'spec file', message: /holds only comments, no fields/, not: /null/ },
+  { name: 'NaN', text: 'site: { latitude: .nan, longitude: 7.1, timezone: Europe/Rome }\n', field: 'site.latitude', message: /got NaN \(not a number\); allowed: a number from -90° to 90°/, not: /null/ },
+  { name: 'Infinity and -Infinity', text: 'site: { latitude: 44, longitude: .inf, timezone: Europe/Rome }\ngnomon: { height: -.inf }\n', field: 'site.longitude', message: /site\.longitude: got Infinity \(not a finite number\).*\n  gnomon\.height: got -Infinity \(not a finite number\)/, not: /null/ },
+  { name: 'an empty value', text: 'site: { latitude: , longitude: 7.1, timezone: Europe/Rome }\n', field: 'site.latitude', message: /got an empty value; allowed: a number/, not: /null/ },
+  { name: 'a zone on the far side of the world', spec: { site: { latitude: 51.5, longitude: 180, timezone: 'Europe/London' } }, field: 'site.timezone', message: /"Europe\/London" keeps clocks on the 0° meridian, 180° \(12 h\) from site\.longitude 180°/, not: /hourAngleRad/ },
+  { name: 'a date in another form', spec: withPatch('install.date', '01/04/2027'), field: 'install.date', message: /got "01\/04\/2027"; allowed: a date "YYYY-MM-DD" in quotes.*write "2027-04-01" \(day first\) or "2027-01-04" \(month first\)/ },
+  { name: 'a date with one-digit month', spec: withPatch('pictures.date', '2027-6-21'), field: 'pictures.date', message: /for "2027-6-21" write "2027-06-21"/ },
+  { name: 'a misspelt time zone', spec: withPatch('site.timezone', 'Europe/Athen'), field: 'site.timezone', message: /unknown time zone "Europe\/Athen" \(did you mean "Europe\/Athens"\?\)/ },
+  { name: 'a time with a one-digit hour out of range', spec: withPatch('hours.to', '25:00'), field: 'hours.to', message: /allowed: a time "HH:MM" \(or "H:MM"\)/ },
+  { name: 'the starter\'s site placeholder', spec: { site: { latitude: 'EDIT ME', longitude: 'EDIT ME', timezone: 'EDIT ME' } }, field: 'site.latitude', message: /3 problems.*\n  site\.latitude: still the starter spec's placeholder "EDIT ME": fill in your site; allowed: your site's latitude/ },
+  { name: 'a kerf wider than the narrowest drawn mark', spec: { ...withPatch('process.method', 'waterjet') as object, marks: { hour: { width: 0.8 }, half: { width: 0.6 }, quarter: { width: 0.4 } } }, field: 'process.kerf', message: /0\.9 mm waterjet kerf is wider than the 0\.4 mm quarter marks/ },
 ];
 
 describe('umbrafab build: bad input', () => {
@@ -69,6 +83,7 @@ describe('umbrafab build: bad input', () => {
     expect(r.err).toContain(typeof c.field === 'string' ? c.field : '');
     expect(r.err).toMatch(c.message);
     expect(r.err).not.toMatch(/\n\s+at /); // no stack trace
+    if (c.not) expect(r.err).not.toMatch(c.not);
     expect(snapshot(out)).toEqual(before);
   });
 
@@ -86,6 +101,65 @@ describe('umbrafab build: bad input', () => {
     expect(snapshot(out)).toEqual(before);
     expect((await runCli(['build', spec, '--out', out, '--force'])).code).toBe(0);
     expect(readFileSync(join(out, 'plate.dxf'), 'utf8')).toMatch(/^0\nSECTION/);
+  });
+
+  it.each([
+    { argv: ['biuld', 'x.yaml'], message: /^umbrafab: unknown command "biuld" \(did you mean build\?\); allowed: build, batch, check, init, serve/ },
+    { argv: ['build', 'x.yaml', '--otu', 'o'], message: /^umbrafab: unknown option --otu \(did you mean --out\?\); allowed: umbrafab build <spec> with the options --help, --out, --force/ },
+    { argv: ['batch', 'x.yaml', '--lattitudes', '3'], message: /unknown option --lattitudes \(did you mean --latitudes\?\)/ },
+    { argv: ['build', 'x.yaml', 'y.yaml'], message: /extra argument "y\.yaml"/ },
+  ])('command line: $argv → exit 1, $message', async ({ argv, message }) => {
+    const r = await runCli(argv);
+    expect(r.code).toBe(1);
+    expect(r.err).toMatch(message);
+  });
+
+  it.each(['laser', 'waterjet', 'router', 'print'])('init, then process.method %s: refuses the untouched site, builds once it is filled in', async (method) => {
+    const root = mkdtempSync(join(tmpdir(), `umbrafab-init-${method}-`));
+    const file = join(root, 'dial.yaml');
+    expect((await runCli(['init', file, '--year', '2027'])).code).toBe(0);
+    const starter = readFileSync(file, 'utf8');
+    // No field whose default follows another is written (only named in the header with its rule).
+    const written = parseYaml(starter);
+    for (const key of ['process.kerf', 'process.clearance', 'parts.gnomonFrom', 'gnomon.thickness', 'marks.hour.width', 'marks.half.width', 'marks.quarter.width']) {
+      expect(key.split('.').reduce((o: any, k) => o?.[k], written), key).toBeUndefined();
+      expect(starter).toContain(`#   ${key}: `);
+    }
+    const switched = starter.replace(/method: laser/, `method: ${method}`);
+    writeFileSync(file, switched);
+    const refused = await runCli(['build', file, '--out', join(root, 'never')]);
+    expect(refused.code).toBe(1);
+    expect(refused.err).toMatch(/site\.latitude: still the starter spec's placeholder "EDIT ME": fill in your site/);
+    expect(refused.err).toMatch(/site\.timezone: still the starter spec's placeholder/);
+    writeFileSync(file, switched.replace('latitude: EDIT ME', 'latitude: 43.55').replace('longitude: EDIT ME', 'longitude: -5.92').replace('timezone: EDIT ME', 'timezone: Europe/Madrid'));
+    const built = await runCli(['build', file, '--out', join(root, 'out')]);
+    expect(built.err).toBe('');
+    expect(built.code).toBe(0);
+    expect(built.out).toMatch(new RegExp(`${method} kerf`));
+  });
+
+  it('refuses --out naming a file, by name, before building', async () => {
+    const root = mkdtempSync(join(tmpdir(), 'umbrafab-outfile-'));
+    const spec = join(root, 'spec.yaml');
+    writeFileSync(spec, stringify(good));
+    const file = join(root, 'taken.txt');
+    writeFileSync(file, 'mine');
+    for (const cmd of [['build', spec, '--out', file], ['batch', spec, '--latitudes', '30', '--out', file], ['check', spec, '--out', join(file, 'sub')]]) {
+      const r = await runCli(cmd);
+      expect(r.code, cmd.join(' ')).toBe(1);
+      expect(r.err).toMatch(/^umbrafab: --out: .*taken\.txt(\/sub)? (is a file, not a folder|lies under .*taken\.txt, which is a file)/);
+      expect(r.err).not.toMatch(/EEXIST|ENOTDIR/);
+    }
+    expect(readFileSync(file, 'utf8')).toBe('mine');
+  });
+
+  it('accepts "H:MM" clock times and builds the same files as "HH:MM"', async () => {
+    const root = mkdtempSync(join(tmpdir(), 'umbrafab-clock-'));
+    writeFileSync(join(root, 'a.yaml'), stringify(withPatch('hours.from', '7:00')));
+    writeFileSync(join(root, 'b.yaml'), stringify(withPatch('hours.from', '07:00')));
+    expect((await runCli(['build', join(root, 'a.yaml'), '--out', join(root, 'a')])).code).toBe(0);
+    expect((await runCli(['build', join(root, 'b.yaml'), '--out', join(root, 'b')])).code).toBe(0);
+    for (const f of readdirSync(join(root, 'b'))) expect(readFileSync(join(root, 'a', f)).equals(readFileSync(join(root, 'b', f))), f).toBe(true);
   });
 
   it('exits 1 on an unknown option and prints help on --help', async () => {

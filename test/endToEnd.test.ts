@@ -1,5 +1,5 @@
 import { execFileSync, spawnSync } from 'node:child_process';
-import { mkdtempSync, readdirSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -49,6 +49,11 @@ describe('end to end: the umbrafab bin on the demo spec', () => {
     const file = join(dir, 'mine.yaml');
     execFileSync(process.execPath, [BIN, 'init', file, '--year', '2028'], { encoding: 'utf8' });
     expect(readFileSync(file, 'utf8')).toMatch(/year: 2028/);
+    // The site is a placeholder build refuses; filled in, the starter builds.
+    const refused = spawnSync(process.execPath, [BIN, 'build', file, '--out', join(dir, 'out')], { encoding: 'utf8' });
+    expect(refused.status).toBe(1);
+    expect(refused.stderr).toMatch(/site\.latitude: still the starter spec's placeholder/);
+    writeFileSync(file, readFileSync(file, 'utf8').replace('latitude: EDIT ME', 'latitude: 43.55').replace('longitude: EDIT ME', 'longitude: -5.92').replace('timezone: EDIT ME', 'timezone: Europe/Madrid'));
     const out = execFileSync(process.execPath, [BIN, 'build', file, '--out', join(dir, 'out')], { encoding: 'utf8' });
     expect(out).toMatch(/wrote/);
     const again = spawnSync(process.execPath, [BIN, 'init', file], { encoding: 'utf8' });

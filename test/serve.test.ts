@@ -13,6 +13,8 @@ const ROOT = resolve(import.meta.dirname, '..');
 const BIN = join(ROOT, 'packages/cli/bin/umbrafab.js');
 const DEMO = join(ROOT, 'fixtures/demo.yaml');
 const SOLAR = join(ROOT, 'fixtures/specs/serve-solar.yaml');
+/** One spec per process and a nodus spec, each leaving the defaults that follow other fields to them. */
+const PAGE_SPECS = ['serve-solar', 'page-waterjet-north', 'page-router-thick', 'page-print', 'page-nodus'] as const;
 
 /** A raw HTTP request (no URL clean-up, unlike fetch), so "../" reaches the server as sent. */
 function raw(
@@ -263,21 +265,63 @@ describe('serve: requests', () => {
     expect(existsSync(join(ROOT, 'out', 'dial'))).toBe(false);
   });
 
-  it('"save spec" writes commented YAML to the spec file only, and it builds to the same spec', async () => {
+  it('"save spec" edits the spec file only: the changed fields, listed first; comments and other lines kept', async () => {
+    const original = readFileSync(specFile, 'utf8');
     const changed = { ...values, 'gnomon.height': 42, 'site.latitude': 48.5 };
+    const preview = await postJson(server, '/api/save', { fields: changed, preview: true });
+    expect(preview.status).toBe(200);
+    expect(preview.json.changes.map((c: any) => c.key)).toEqual(['site.latitude', 'gnomon.height']);
+    expect(preview.json.changes[1].text).toMatch(/^gnomon\.height: \d+(\.\d+)? → 42$/);
+    expect(readFileSync(specFile, 'utf8')).toBe(original); // a preview writes nothing
     const r = await postJson(server, '/api/save', { fields: changed });
     expect(r.status).toBe(200);
+    expect(r.json.written).toBe(true);
     const text = readFileSync(specFile, 'utf8');
-    expect(text).toMatch(/^# umbrafab dial spec, saved from the page/);
-    expect(text).toMatch(/height: 42 # style height above the dial face, mm/);
-    expect(text).toMatch(/latitude: 48\.5 # site latitude, degrees, north positive/);
+    const a = original.split('\n');
+    const b = text.split('\n');
+    expect(b.length).toBe(a.length);
+    const differ = a.map((line, i) => [line, b[i]]).filter(([x, y]) => x !== y);
+    expect(differ.length).toBe(2);
+    for (const [before, after] of differ) {
+      expect(after.replace(/\d+(\.\d+)?/, 'N')).toBe(before.replace(/\d+(\.\d+)?/, 'N')); // same key, same comment, new number
+    }
     expect(readSpecFile(specFile)).toEqual(parseSpec(formValuesToSpec(changed)));
     expect(readdirSync(dir).filter((n) => n.startsWith('.'))).toEqual([]); // no temporary file left
-    expect(logs.some((l) => l.includes('saved the spec'))).toBe(true);
+    expect(logs.some((l) => l.includes('saved 2 changed field(s)') && l.includes('gnomon.height'))).toBe(true);
     // An invalid spec is not saved.
     const bad = await postJson(server, '/api/save', { fields: { ...values, 'site.latitude': 123 } });
     expect(bad.status).toBe(422);
     expect(readFileSync(specFile, 'utf8')).toBe(text);
+    // Unchanged again: nothing to write, the bytes stay.
+    const same = await postJson(server, '/api/save', { fields: changed });
+    expect(same.json).toMatchObject({ written: false, changes: [] });
+    expect(readFileSync(specFile, 'utf8')).toBe(text);
+    writeFileSync(specFile, original);
+  });
+
+  it('"save spec" with the form unchanged leaves the file byte for byte; emptying a field takes it out', async () => {
+    for (const name of PAGE_SPECS) {
+      const file = join(dir, `${name}.yaml`);
+      copyFileSync(join(ROOT, 'fixtures/specs', `${name}.yaml`), file);
+      const before = readFileSync(file);
+      const s = await startServer({ specPath: file, port: 0, log: () => {} });
+      try {
+        const setup = (await (await fetch(s.url + 'api/setup')).json()) as any;
+        const r = await postJson(s, '/api/save', { fields: setup.values });
+        expect(r.json, name).toMatchObject({ ok: true, written: false, changes: [] });
+        expect(readFileSync(file).equals(before), name).toBe(true);
+        if (name === 'page-router-thick') {
+          const gone = await postJson(s, '/api/save', { fields: { ...setup.values, 'gnomon.height': '' } });
+          expect(gone.json.changes.map((c: any) => c.key)).toEqual(['gnomon.height']);
+          const text = readFileSync(file, 'utf8');
+          expect(text).not.toMatch(/^gnomon:/m); // the section held only that field
+          expect(text).toContain('a 12 mm hardwood plate cut on a\n# router;'); // comments stay
+          expect(readSpecFile(file).gnomon.height).toBe(50);
+        }
+      } finally {
+        await s.close();
+      }
+    }
   });
 
   it('has nowhere to save when no spec file was named (409)', async () => {
@@ -290,6 +334,39 @@ describe('serve: requests', () => {
       expect(r.json.error.message).toMatch(/no spec file was named/);
     } finally {
       await bare.close();
+    }
+  });
+});
+
+describe('serve: the page builds what `umbrafab build` builds, for every process', () => {
+  it.each(PAGE_SPECS)('%s: the setup values unchanged give every file byte for byte', async (name) => {
+    const spec = join(ROOT, 'fixtures/specs', `${name}.yaml`);
+    const out = mkdtempSync(join(tmpdir(), `umbrafab-page-${name}-`));
+    const server = await startServer({ specPath: spec, port: 0, log: () => {} });
+    try {
+      const cli = await runCli(['build', spec, '--out', out, '--force']);
+      expect(cli.code, cli.err).toBe(0);
+      const setup = (await (await fetch(server.url + 'api/setup')).json()) as any;
+      // Defaults that follow another field are shown as derived, not filled in.
+      for (const f of setup.fields.filter((x: any) => x.derived)) {
+        expect(setup.fields.find((x: any) => x.key === f.key).default, f.key).toBeUndefined();
+        expect(setup.derived[f.key].follows, f.key).toEqual(f.derived.follows);
+      }
+      const built = readSpecFile(spec);
+      expect(setup.derived['process.kerf'].value).toBe(built.process.kerf);
+      expect(setup.derived['gnomon.thickness'].value).toBe(built.gnomon.thickness);
+      expect(setup.derived['marks.hour.width'].value).toBe(built.marks.hour.width);
+      const r = await postJson(server, '/api/view', { fields: setup.values });
+      expect(r.status, JSON.stringify(r.json.error)).toBe(200);
+      expect(r.json.derived['process.kerf'].value).toBe(built.process.kerf);
+      const list = (await (await fetch(server.url + r.json.filesUrl.slice(1))).json()) as any;
+      expect(list.files.map((f: any) => f.name).sort()).toEqual(readdirSync(out).sort());
+      for (const f of list.files) {
+        const got = Buffer.from(await (await fetch(server.url + f.url.slice(1))).arrayBuffer());
+        expect(got.equals(readFileSync(join(out, f.name))), `${name}: ${f.name} vs umbrafab build`).toBe(true);
+      }
+    } finally {
+      await server.close();
     }
   });
 });

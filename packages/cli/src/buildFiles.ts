@@ -1,4 +1,4 @@
-import { faceOrientationOf, layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec } from '@umbrafab/geometry';
+import { faceOrientationOf, layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec, type LayoutOptions } from '@umbrafab/geometry';
 import { buildPlanarFiles, type PlanarBuildResult } from './buildPlanarFiles.ts';
 import { toReportJson } from '@umbrafab/fabricate';
 import { PRODUCERS, START_ORDER } from './outputs/index.ts';
@@ -69,8 +69,8 @@ export async function buildAnyFiles(spec: DialSpec): Promise<BuildResult | Plana
 }
 
 /** The geometry every producer reads, computed once per spec (the local page draws its views from it before the full build). */
-export function buildContext(spec: DialSpec): BuildContext {
-  const layout = layoutDial(spec);
+export function buildContext(spec: DialSpec, options: LayoutOptions = {}): BuildContext {
+  const layout = layoutDial(spec, options);
   const extras = timeFaceExtras(layout); // date lines, mean-time curves, engraved equation of time
   const drawing = plateDrawing(layout, extras.lines, extras.text);
   return { spec, layout, drawing };

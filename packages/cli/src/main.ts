@@ -1,5 +1,5 @@
 import yargs from 'yargs';
-import { isSpecError } from '@umbrafab/geometry';
+import { didYouMean, isSpecError } from '@umbrafab/geometry';
 import { COMMANDS } from './commands/index.ts';
 import { UsageError, type Io } from './commands/commandTypes.ts';
 import { OutputError } from './writeFilesAtomic.ts';
@@ -20,7 +20,14 @@ const defaultIo: Io = {
  */
 export async function main(argv: readonly string[], io: Io = defaultIo): Promise<number> {
   let code: number = EXIT.ok;
-  let cli = yargs([...argv])
+  const names = COMMANDS.map((c) => c.command.split(' ')[0]);
+  const first = argv[0];
+  if (first !== undefined && !first.startsWith('-') && !names.includes(first)) {
+    const guess = didYouMean(first, names);
+    io.err(`umbrafab: unknown command ${JSON.stringify(first)}${guess ? ` (did you mean ${guess}?)` : ''}; allowed: ${names.join(', ')} (see umbrafab --help)`);
+    return EXIT.badInput;
+  }
+  let cli = yargs(negativeValuesJoined(argv))
     .scriptName('umbrafab')
     .usage('$0 <command> [options]\n\nTurns a dial spec into the fabrication files of a polar sundial.');
   for (const c of COMMANDS) {
@@ -36,7 +43,7 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
     .version('0.1.0')
     .exitProcess(false)
     .fail((msg, err) => {
-      throw err ?? new UsageError(msg);
+      throw err ?? new UsageError(withSuggestions(msg, argv));
     });
   try {
     await cli.parseAsync();
@@ -44,6 +51,42 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
     code = reportError(e, io);
   }
   return code;
+}
+
+/**
+ * "--latitudes -35,-40" → "--latitudes=-35,-40": a value that starts with a
+ * minus sign and a digit is the option's value, not a run of short flags.
+ */
+export function negativeValuesJoined(argv: readonly string[]): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i];
+    const next = argv[i + 1];
+    if (/^--[\w-]+$/.test(a) && next !== undefined && /^-\.?\d/.test(next)) {
+      out.push(`${a}=${next}`);
+      i++;
+    } else out.push(a);
+  }
+  return out;
+}
+
+/** yargs' "Unknown argument: otu" as "unknown option --otu (did you mean --out?)"; extra words as extra arguments. */
+function withSuggestions(msg: string, argv: readonly string[]): string {
+  const m = /^Unknown arguments?: (.+)$/.exec(msg);
+  if (!m) return msg;
+  const command = COMMANDS.find((c) => c.command.split(' ')[0] === argv[0]);
+  const probe = command ? command.builder(yargs([])) : yargs([]);
+  const opts = (probe as unknown as { getOptions: () => { key: Record<string, unknown> } }).getOptions();
+  const positional = new Set((command?.command ?? '').match(/[\w-]+(?=[\]>])/g) ?? []);
+  const known = Object.keys(opts.key).filter((k) => k.length > 1 && !positional.has(k) && k !== 'version');
+  const given = new Set(argv.filter((a) => a.startsWith('-')).map((a) => a.replace(/^-+(no-)?/, '').replace(/=.*$/, '')));
+  const problems = m[1].split(', ').map((name) => {
+    if (!given.has(name)) return `extra argument ${JSON.stringify(name)}`;
+    const guess = didYouMean(name, known);
+    return `unknown option ${name.length > 1 ? '--' : '-'}${name}${guess ? ` (did you mean --${guess}?)` : ''}`;
+  });
+  const usage = command ? `umbrafab ${command.command} with the options ` : 'the options ';
+  return `${problems.join('; ')}; allowed: ${usage}${known.map((k) => `--${k}`).join(', ')} (see umbrafab ${command ? `${argv[0]} ` : ''}--help)`;
 }
 
 function reportError(e: unknown, io: Io): number {

@@ -17,12 +17,27 @@ const NODE_TOKENS = new Set<string>(['scalar', 'single-quoted-scalar', 'double-q
 const KIB = (n: number) => `${Math.round(n / 1024)} KiB`;
 
 /**
- * Read a spec file (YAML, or JSON, which YAML 1.2 reads too) and validate it.
- * Reading stops at MAX_SPEC_BYTES, so a huge file, a device or a pipe ends at
- * once with bounded memory. Every failure is a SpecError naming the file or the field.
+ * Read a spec file (YAML, or JSON, which YAML 1.2 reads too) and normalise it
+ * with `parseSpec`, the one normaliser. Reading stops at MAX_SPEC_BYTES, so a
+ * huge file, a device or a pipe ends at once with bounded memory. Every
+ * failure is a SpecError naming the file or the field.
  */
 export function readSpecFile(path: string): DialSpec {
-  return parseSpec(parseSpecText(readSpecText(path), path));
+  return parseSpec(readRawSpec(path));
+}
+
+/**
+ * A spec file's contents as written (before validation), for commands that
+ * change a field and normalise again (batch, check --year). An empty file
+ * (or one of comments only) says so.
+ */
+export function readRawSpec(path: string): unknown {
+  const text = readSpecText(path);
+  const raw = parseSpecText(text, path);
+  if (raw === null || raw === undefined) {
+    throw new SpecError('spec file', path, 'allowed: a dial spec with at least a site: section (umbrafab init writes a starter)', text.trim() === '' ? `${path} is empty` : `${path} holds only comments, no fields`);
+  }
+  return raw;
 }
 
 /** The text of a spec file, at most MAX_SPEC_BYTES; a SpecError naming the file otherwise. */
@@ -34,7 +49,7 @@ export function readSpecText(path: string): string {
     const allowed = 'allowed: the path of a readable .yaml or .json dial spec (umbrafab init writes one)';
     if (e.reason === 'too-large') throw new SpecError('spec file', path, `allowed: a spec of at most ${KIB(MAX_SPEC_BYTES)} (a full spec is about 3 KiB)`, `too large (${e.message}); reading stopped there`);
     if (e.reason === 'idle') throw new SpecError('spec file', path, allowed, `${e.message} from this pipe or device; reading stopped`);
-    const why = e.code === 'ENOENT' ? 'no such file' : e.code === 'EISDIR' ? 'this is a folder, not a file' : e.code === 'EACCES' ? 'permission denied' : e.message;
+    const why = e.code === 'ENOENT' ? `no such file: ${path}` : e.code === 'EISDIR' ? `${path} is a folder, not a file` : e.code === 'EACCES' ? `permission denied: ${path}` : e.message;
     throw new SpecError('spec file', path, allowed, why);
   }
 }

@@ -11,6 +11,7 @@ export * from './dxf/cutLayers.ts';
 export * from './svg/toCutSvg.ts';
 export * from './cut/cutDrawing.ts';
 export * from './cut/offsetProfiles.ts';
+export * from './cut/piecesDrawing.ts';
 export * from './install/toInstallMd.ts';
 export * from './install/markdownText.ts';
 export * from './template/index.ts';

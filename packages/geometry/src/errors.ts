@@ -9,6 +9,8 @@ export class SpecError extends Error {
   readonly field: string;
   readonly value: unknown;
   readonly allowed: string;
+  /** every problem found, when more than one (the message lists them, up to a cap); this error is the first */
+  problems?: readonly { readonly field: string; readonly message: string }[];
 
   constructor(field: string, value: unknown, allowed: string, detail?: string) {
     const shown = formatValue(value);
@@ -25,11 +27,34 @@ export function isSpecError(e: unknown): e is SpecError {
   return e instanceof Error && e.name === 'SpecError' && 'field' in e;
 }
 
-/** Render a value for an error message: strings quoted, objects as JSON, long values cut. */
+/** Most problems one message lists; the rest are counted. */
+export const MAX_PROBLEMS_LISTED = 12;
+
+/**
+ * One SpecError for several problems: the first one's field, value and
+ * allowed text, and a message listing each problem on its own line (up to
+ * MAX_PROBLEMS_LISTED, then a count of the rest).
+ */
+export function combineSpecErrors(errors: readonly SpecError[]): SpecError {
+  if (errors.length === 1) return errors[0];
+  const first = errors[0];
+  const e = new SpecError(first.field, first.value, first.allowed);
+  const shown = errors.slice(0, MAX_PROBLEMS_LISTED);
+  const rest = errors.length - shown.length;
+  e.message = [`${errors.length} problems in the spec:`, ...shown.map((p) => `  ${p.message}`), ...(rest > 0 ? [`  … and ${rest} more`] : [])].join('\n');
+  e.problems = errors.map((p) => ({ field: p.field, message: p.message }));
+  return e;
+}
+
+/** Render a value for an error message: strings quoted, objects as JSON, NaN and infinities by name, long values cut. */
 export function formatValue(value: unknown): string {
   let s: string;
   if (typeof value === 'string') s = JSON.stringify(value);
   else if (value === undefined) s = 'nothing';
+  else if (value === null) s = 'an empty value';
+  else if (typeof value === 'number' && Number.isNaN(value)) s = 'NaN (not a number)';
+  else if (value === Infinity) s = 'Infinity (not a finite number)';
+  else if (value === -Infinity) s = '-Infinity (not a finite number)';
   else {
     try {
       s = JSON.stringify(value) ?? String(value);

@@ -1,40 +1,58 @@
 import { readFileSync } from 'node:fs';
-import type { DialLayout, DialSpec } from '@umbrafab/geometry';
+import { join } from 'node:path';
+import type { DialLayout } from '@umbrafab/geometry';
 import { utf8 } from '../outputs/outputTypes.ts';
+import type { Report } from '../outputs/report.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
-import { specBaseName } from './build.ts';
+import { assertOutFolder, specBaseName } from './build.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
+/** The plate's cut drawing, true size or pre-compensated for the kerf. */
+const PLATE_DXF = /^plate(-offset-[0-9.]+mm)?\.dxf$/;
 /** Show a progress bar from this many latitudes on ("long runs"). */
 const PROGRESS_FROM = 4;
 
-/** One latitude of a batch, as the summary and batch.json give it. */
+/** One latitude of a batch, as the summary and the batch's report.json give it. */
 export interface BatchRow {
   readonly latitudeDeg: number;
   readonly wedgeAngleDeg: number;
-  readonly wedgeFile: string;
+  /** this latitude's wedge (or stand), if the spec writes one */
+  readonly wedgeFile: string | null;
   readonly plateFile: string;
+  /** every file this latitude uses, shared or its own, in build order */
+  readonly files: readonly string[];
   /** rise of the plate's pole-ward edge over its lower edge, mm: length × sin(tilt) (docs/design.md §4) */
   readonly riseMm: number;
 }
 
 export const batchCommand: CommandModule = {
   command: 'batch <spec>',
-  describe: 'write one plate and a latitude wedge for each of several latitudes (the plate once when it is the same for all)',
+  describe: 'build a spec for each of several latitudes: every file build writes, each written once when it is the same for all (one plate, a wedge and an install sheet per latitude)',
   builder: (y) =>
     y
       .positional('spec', { type: 'string', demandOption: true, describe: 'dial spec file (.yaml or .json); its site.latitude is replaced by each listed latitude' })
-      .option('latitudes', { type: 'string', describe: 'latitudes in degrees, north positive, comma separated, e.g. 30,35,40' })
+      .option('latitudes', { type: 'string', describe: 'latitudes in degrees, north positive, comma separated, e.g. 30,35,40 or -35,-40' })
       .option('latitudes-file', { type: 'string', describe: 'a text file of latitudes, one or more per line (commas or spaces; # starts a comment)' })
       .option('out', { type: 'string', alias: 'o', describe: 'output folder (default: out/<spec name>-batch)' })
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' })
       .option('progress', { type: 'boolean', default: true, describe: `show a progress bar on stderr (from ${PROGRESS_FROM} latitudes on)` }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
-    const { WEDGE_MAX_TILT_DEG, buildContext, cliProgress, GENERATOR, partsOutputs, plateOutputs, readSpecFile, toReportJson, writeFilesAtomic } = await import('./batchDeps.ts');
+    const { WEDGE_MAX_TILT_DEG, buildContext, buildFiles, cliProgress, GENERATOR, parseSpec, readRawSpec, toReportJson, writeFilesAtomic } = await import('./batchDeps.ts');
     const latitudes = batchLatitudes(args.latitudes, args['latitudes-file'], WEDGE_MAX_TILT_DEG);
-    const base = readSpecFile(args.spec);
+    const raw = readRawSpec(args.spec) as Record<string, unknown>;
     const outDir: string = args.out ?? `out/${specBaseName(args.spec)}-batch`;
+    assertOutFolder(outDir);
+    // Each latitude through the one normaliser, as `build` would read a spec file with that latitude.
+    const site = raw.site !== null && typeof raw.site === 'object' ? (raw.site as Record<string, unknown>) : {};
+    // Pictures (preview.png, the assembly view) are left to `build` of one latitude: rendering them for every latitude would
+    // multiply the run time for files a shop does not cut from.
+    const pictures = raw.pictures !== null && typeof raw.pictures === 'object' ? raw.pictures : {};
+    const specs = latitudes.map((lat) => parseSpec({ ...raw, site: { ...site, latitude: lat }, pictures: { ...pictures, write: false } }));
+
+    // Latitudes whose faces are the same (hour lines, numerals, plate, gnomon) share one plate, titled with their range.
+    const keys = specs.map((spec) => faceKey(buildContext(spec).layout));
+    const groupOf = (i: number) => latitudes.filter((_, j) => keys[j] === keys[i]);
 
     const bar =
       args.progress && latitudes.length >= PROGRESS_FROM
@@ -44,69 +62,102 @@ export const batchCommand: CommandModule = {
           )
         : null;
     bar?.start(latitudes.length, 0, { lat: '' });
-    const builds: { lat: number; spec: DialSpec; layout: DialLayout; plate: readonly OutputFile[]; parts: readonly OutputFile[]; wedgeAngleDeg: number }[] = [];
+    const builds: { lat: number; files: readonly OutputFile[]; report: Report; plateLengthMm: number }[] = [];
     try {
-      for (const lat of latitudes) {
-        const spec: DialSpec = { ...base, site: { ...base.site, latitude: lat } };
-        const ctx = buildContext(spec);
-        const { layout } = ctx;
-        const plate = (await plateOutputs(ctx)).files;
-        const parts = await partsOutputs(ctx);
-        builds.push({ lat, spec, layout, plate, parts: parts.files, wedgeAngleDeg: parts.report.wedge.angleDeg });
-        bar?.increment(1, { lat: latitudeTag(lat) });
+      for (const [i, spec] of specs.entries()) {
+        const group = groupOf(i);
+        const range = group.length > 1 ? ([Math.min(...group), Math.max(...group)] as const) : undefined;
+        const result = await buildFiles(spec, buildContext(spec, range ? { latitudeRangeDeg: range } : {}));
+        builds.push({ lat: latitudes[i], files: result.files, report: result.report, plateLengthMm: result.layout.plate.lengthMm });
+        bar?.increment(1, { lat: latitudeTag(latitudes[i]) });
       }
     } finally {
       bar?.stop();
     }
 
-    // One plate when every latitude gives the same face (hour lines, numerals, plate, gnomon).
-    const samePlate = builds.every((b) => faceKey(b.layout) === faceKey(builds[0].layout));
+    // Every file once where it is the same for all, once per face group where it is the same within it, else per latitude.
     const files: OutputFile[] = [];
-    const rows: BatchRow[] = [];
-    const pick = (list: readonly OutputFile[], name: string) => list.find((f) => f.name === name);
-    if (samePlate) {
-      for (const f of builds[0].plate) files.push(f);
-    }
-    const sharedParts = new Map<string, Uint8Array>();
-    for (const b of builds) {
-      const tag = latitudeTag(b.lat);
-      if (!samePlate) for (const f of b.plate) files.push({ name: f.name.replace(/\.(\w+)$/, `-${tag}.$1`), bytes: f.bytes });
-      const wedge = pick(b.parts, 'wedge.stl');
-      if (!wedge) throw new UsageError(`parts.write: the spec writes no wedge.stl; allowed: "auto" or a list that includes "wedge.stl" for umbrafab batch`);
-      const wedgeFile = `wedge-${tag}.stl`;
-      files.push({ name: wedgeFile, bytes: wedge.bytes });
-      for (const f of b.parts) {
-        if (f.name === 'wedge.stl' || f.name === 'body.stl') continue;
-        const prev = sharedParts.get(f.name);
-        if (!prev) sharedParts.set(f.name, f.bytes);
-        else if (!sameBytes(prev, f.bytes)) throw new Error(`batch: ${f.name} differs between latitudes; it should not depend on the latitude`);
+    const written = new Set<string>();
+    const perLat = latitudes.map(() => new Map<string, string>());
+    const names = [...new Set(builds.flatMap((b) => b.files.map((f) => f.name)))];
+    for (const name of names) {
+      const bytesAt = (i: number) => builds[i].files.find((f) => f.name === name)?.bytes;
+      const all = builds.map((_, i) => bytesAt(i));
+      const same = (a?: Uint8Array, b?: Uint8Array) => a !== undefined && b !== undefined && sameBytes(a, b);
+      for (const [i, bytes] of all.entries()) {
+        if (!bytes) continue;
+        const members = builds.map((_, j) => j).filter((j) => keys[j] === keys[i]);
+        let fileName: string;
+        if (all.every((b) => same(b, bytes))) fileName = name;
+        else if (members.length > 1 && members.every((j) => same(all[j], bytes)) && members.length < builds.length) fileName = tagged(name, rangeTag(members.map((j) => latitudes[j])));
+        else fileName = tagged(name, latitudeTag(latitudes[i]));
+        perLat[i].set(name, fileName);
+        if (!written.has(fileName)) {
+          written.add(fileName);
+          files.push({ name: fileName, bytes });
+        }
       }
-      const p = b.layout.plate;
-      rows.push({
-        latitudeDeg: b.lat,
-        wedgeAngleDeg: round(b.wedgeAngleDeg, 3),
-        wedgeFile,
-        plateFile: samePlate ? plateDxfName(b.plate) : plateDxfName(b.plate).replace(/\.dxf$/, `-${tag}.dxf`),
-        riseMm: round(p.lengthMm * Math.sin((Math.abs(b.lat) * Math.PI) / 180), 1),
-      });
     }
-    for (const [name, bytes] of sharedParts) files.push({ name, bytes });
+    const rows: BatchRow[] = builds.map((b, i) => {
+      const wedge = b.report.wedge as { angleDeg?: number } | undefined; // absent when the spec writes no wedge
+      const mine = perLat[i];
+      return {
+        latitudeDeg: b.lat,
+        wedgeAngleDeg: round(wedge?.angleDeg ?? Math.abs(b.lat), 3),
+        wedgeFile: mine.get('wedge.stl') ?? mine.get('stand.stl') ?? mine.get('stand.dxf') ?? null,
+        plateFile: [...mine.entries()].find(([name]) => PLATE_DXF.test(name))?.[1] ?? '',
+        files: [...mine.values()],
+        riseMm: round(b.plateLengthMm * Math.sin((Math.abs(b.lat) * Math.PI) / 180), 1),
+      };
+    });
+    const plates = new Set(rows.map((r) => r.plateFile));
+    const lo = Math.min(...latitudes);
+    const hi = Math.max(...latitudes);
+    const plateNote =
+      plates.size === 1
+        ? `one plate serves every latitude from ${latLabel(lo)} to ${latLabel(hi)}: its lines do not depend on the latitude, only the wedge does; its title states that range`
+        : `${plates.size} plates: the faces differ between some latitudes (e.g. across hemispheres); latitudes with the same face share one, titled with their range`;
     const summary = {
       generator: GENERATOR,
-      spec: base,
-      plate: samePlate ? { shared: true, file: plateDxfName(builds[0].plate), note: `one plate serves every latitude: its lines do not depend on the latitude; the title block names the spec's first listed latitude (${builds[0].lat}°)` } : { shared: false, note: 'one plate per latitude (the faces differ, e.g. across hemispheres)' },
+      specFile: args.spec,
+      latitudeRangeDeg: [lo, hi],
+      plate: { shared: plates.size === 1, files: [...plates], note: plateNote },
+      pictures: 'not written by batch (pictures.write: false for every latitude); umbrafab build the spec with one latitude for its preview.png and assembly picture',
       latitudes: rows,
-      files: [...files.map((f) => f.name), 'batch.json'],
+      files: [...files.map((f) => f.name), 'report.json'],
     };
-    files.push({ name: 'batch.json', bytes: utf8(toReportJson(summary)) });
+    if (written.has('report.json')) throw new Error('batch: every latitude wrote the same report.json');
+    const shared = files.filter((f) => names.includes(f.name)).map((f) => f.name);
+    files.push({ name: 'report.json', bytes: utf8(toReportJson(summary)) });
     writeFilesAtomic(outDir, files, args.force);
 
-    io.out(`umbrafab: batch of ${rows.length} latitudes written to ${outDir}: ${samePlate ? `one shared ${plateDxfName(builds[0].plate)}` : `${rows.length} plates`}, ${rows.length} wedges`);
-    io.out(formatTable(['latitude', 'wedge angle', 'rise over plate', 'wedge file', 'plate file'], rows.map((r) => [`${r.latitudeDeg}°`, `${r.wedgeAngleDeg.toFixed(2)}°`, `${r.riseMm.toFixed(1)} mm`, r.wedgeFile, r.plateFile])));
-    if (samePlate) io.out(`note: ${summary.plate.note}`);
+    io.out(`umbrafab: batch of ${rows.length} latitudes (${latLabel(lo)} to ${latLabel(hi)}) written to ${outDir}: ${files.length} files, ${plates.size === 1 ? 'one shared plate.dxf' : `${plates.size} plates`}; shared by all: ${shared.join(', ') || 'none'}`);
+    io.out(
+      formatTable(
+        ['latitude', 'wedge angle', 'rise over plate', 'wedge file', 'install sheet', 'plate file'],
+        rows.map((r, i) => [`${r.latitudeDeg}°`, `${r.wedgeAngleDeg.toFixed(2)}°`, `${r.riseMm.toFixed(1)} mm`, r.wedgeFile ?? '-', perLat[i].get('install.md') ?? '-', r.plateFile]),
+      ),
+    );
+    io.out(`note: ${plateNote}`);
+    io.out(`umbrafab: the summary is in ${join(outDir, 'report.json')}`);
     return 0;
   },
 };
+
+/** "plate.dxf" + "N35" → "plate-N35.dxf". */
+function tagged(name: string, tag: string): string {
+  return /\.\w+$/.test(name) ? name.replace(/\.(\w+)$/, `-${tag}.$1`) : `${name}-${tag}`;
+}
+
+/** "N30-N40": the latitudes a shared file serves. */
+function rangeTag(lats: readonly number[]): string {
+  return `${latitudeTag(Math.min(...lats))}-${latitudeTag(Math.max(...lats))}`;
+}
+
+/** "35°N", "33.9°S". */
+function latLabel(lat: number): string {
+  return `${Math.abs(lat)}°${lat < 0 ? 'S' : 'N'}`;
+}
 
 /**
  * The latitudes of a batch from --latitudes and/or --latitudes-file: numbers
@@ -154,11 +205,6 @@ export function batchLatitudes(list: unknown, file: unknown, maxDeg: number): nu
 /** "N35", "S33.9": a latitude for file names. */
 export function latitudeTag(lat: number): string {
   return `${lat < 0 ? 'S' : 'N'}${Math.abs(lat)}`;
-}
-
-/** The plate's cutting drawing among its files: plate.dxf, or plate-offset-K mm.dxf when pre-compensated. */
-function plateDxfName(files: readonly OutputFile[]): string {
-  return files.find((f) => /^plate(-offset-[0-9.]+mm)?\.dxf$/.test(f.name))?.name ?? 'plate.dxf';
 }
 
 /** What makes two plates the same, apart from the title text. */

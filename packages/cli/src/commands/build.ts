@@ -1,5 +1,6 @@
-import { join } from 'node:path';
-import type { CommandModule } from './commandTypes.ts';
+import { existsSync, statSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
+import { UsageError, type CommandModule } from './commandTypes.ts';
 
 export const buildCommand: CommandModule = {
   command: 'build <spec>',
@@ -12,9 +13,10 @@ export const buildCommand: CommandModule = {
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
     const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }] = await Promise.all([import('../buildFiles.ts'), import('../readSpec.ts'), import('../writeFilesAtomic.ts')]);
+    const outDir: string = args.out ?? join('out', specBaseName(args.spec));
+    assertOutFolder(outDir);
     const spec = readSpecFile(args.spec);
     const result = await buildAnyFiles(spec);
-    const outDir: string = args.out ?? join('out', specBaseName(args.spec));
     const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
     if (recovered) io.out(`note: ${outDir}: ${recovered}`);
     const p = result.layout.plate;
@@ -46,6 +48,26 @@ export function cutFileLines(report: object): string[] {
     );
   }
   return out;
+}
+
+/**
+ * Refuse an output folder that names an existing file (or a path through
+ * one) before any work, naming it.
+ * @throws UsageError
+ */
+export function assertOutFolder(dir: string): void {
+  let p = resolve(dir);
+  for (;;) {
+    if (existsSync(p)) {
+      if (!statSync(p).isDirectory()) {
+        throw new UsageError(p === resolve(dir) ? `--out: ${dir} is a file, not a folder; allowed: a folder (new or existing) for the output files` : `--out: ${dir} lies under ${p}, which is a file; allowed: a folder path`);
+      }
+      return;
+    }
+    const up = dirname(p);
+    if (up === p) return;
+    p = up;
+  }
 }
 
 /** "fixtures/demo.yaml" → "demo". */

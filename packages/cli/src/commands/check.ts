@@ -1,6 +1,7 @@
 import { join } from 'node:path';
 import type { CheckResult } from '@umbrafab/geometry';
 import { utf8 } from '../outputs/outputTypes.ts';
+import { assertOutFolder } from './build.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
 
 export const checkCommand: CommandModule = {
@@ -15,13 +16,17 @@ export const checkCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick; the DXF reader only with --plate.
-    const { checkDial, checkPlanar, checkTableText, faceOrientationOf, layoutDial, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, readSpecFile, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
-    let spec = readSpecFile(args.spec);
+    const { checkDial, checkPlanar, checkTableText, faceOrientationOf, layoutDial, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, readRawSpec, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
+    if (args.out !== undefined) assertOutFolder(String(args.out));
+    // The spec as written, normalised once (with --year in place of calendar.year): the same path as build.
+    const raw = readRawSpec(args.spec) as Record<string, unknown>;
+    let spec;
     if (args.year !== undefined) {
       const year = Number(args.year);
       if (!Number.isInteger(year) || year < 1900 || year > 2200) throw new UsageError(`--year: got ${args.year}; allowed: a whole year from 1900 to 2200`);
-      spec = parseSpec({ ...spec, calendar: { ...spec.calendar, year } });
-    }
+      const calendar = raw.calendar !== null && typeof raw.calendar === 'object' ? raw.calendar : {};
+      spec = parseSpec({ ...raw, calendar: { ...calendar, year } });
+    } else spec = parseSpec(raw);
     if (faceOrientationOf(spec)) {
       // Horizontal, wall, meridian and equatorial faces: the planar check on their own gnomon.
       if (args.plate !== undefined) throw new UsageError('--plate: reading marks back from a DXF is for the polar plate only; check a planar face from its spec');

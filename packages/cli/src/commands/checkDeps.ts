@@ -4,5 +4,5 @@
 // (scripts/build.mjs) then keeps this chunk to what check uses.
 export { checkDial, checkPlanar, faceOrientationOf, layoutDial, layoutPlanar, marksFromPlate, parseSpec } from '@umbrafab/geometry';
 export { checkTableText, planarCheckText, toCheckJson, toCheckSvg, toReportJson } from '@umbrafab/fabricate';
-export { readSpecFile } from '../readSpec.ts';
+export { readRawSpec } from '../readSpec.ts';
 export { writeFilesAtomic } from '../writeFilesAtomic.ts';

@@ -3,6 +3,7 @@ import type { EngraveSections } from './engraveOutputs.ts';
 import type { PartsSections } from './partsOutputs.ts';
 import type { PicturesSections } from './picturesOutputs.ts';
 import type { PlateSections } from './plateOutputs.ts';
+import type { StandSections } from './standOutputs.ts';
 import type { TimeSections } from './timeOutputs.ts';
 
 /**
@@ -14,7 +15,7 @@ import type { TimeSections } from './timeOutputs.ts';
  * from this type (`pnpm report-schema`) and checked against every build in
  * test/reportSchema.test.ts.
  */
-export type Report = ReportHead & PlateSections & PartsSections & EngraveSections & TimeSections & PicturesSections & ReportTail;
+export type Report = ReportHead & PlateSections & PartsSections & StandSections & EngraveSections & TimeSections & PicturesSections & ReportTail;
 
 /** What every report starts with. */
 export interface ReportHead {

@@ -53,6 +53,15 @@ export function formValuesToSpec(values: Readonly<Record<string, unknown>>): Rec
   return spec;
 }
 
+/**
+ * One form value as it goes into the raw spec: undefined for an empty box
+ * (the field is left out), numbers from number boxes, YAML for "value" fields.
+ * @throws SpecError for a "value" field that is not YAML
+ */
+export function formValueToRaw(f: SpecField, value: unknown): unknown {
+  return fromFormValue(f, value);
+}
+
 function fromFormValue(f: SpecField, value: unknown): unknown {
   if (typeof value !== 'string') return value;
   const text = value.trim();

@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { readFileSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import { isIP } from 'node:net';
 import { basename, dirname } from 'node:path';
@@ -14,7 +14,10 @@ import { previewSvgOptions } from '../outputs/plateOutputs.ts';
 import { BodyAbortedError, MAX_BODY_BYTES, readJsonBody } from './readJsonBody.ts';
 import { sceneMeshes } from './sceneMeshes.ts';
 import { specFields } from './specFields.ts';
-import { specToCommentedYaml } from './specYaml.ts';
+import { parseSpecText } from '../readSpec.ts';
+import { starterSpecYaml } from '../starterSpec.ts';
+import { derivedValues, type DerivedValue } from './derivedValues.ts';
+import { describeChange, editSpecText } from './editSpecText.ts';
 import { STATIC_ASSETS } from './staticAssets.ts';
 import { summaryRows } from './summaryRows.ts';
 import { sunView, type SunQuery } from './sunView.ts';
@@ -28,6 +31,8 @@ export interface ServeContext {
   readonly specLabel: string | null;
   /** the spec the page opens with (raw, before validation) */
   readonly initialSpec: unknown;
+  /** the calendar year of the starter spec (used when the spec file does not exist yet) */
+  readonly starterYear: number;
   /** the problem with the initial spec file, if it could not be read */
   readonly initialError: string | null;
   /** the port actually bound (for the Host header check) */
@@ -63,7 +68,7 @@ let pageCsp: string | undefined;
  * - GET  /api/files/<id>: the full build's file list (buildFiles, run once per spec on first request);
  * - GET  /api/files/<id>/<name>: one file of that build, its bytes exactly;
  * - POST /api/sun {fields, date, time, kind}: the sun and the gnomon's shadow;
- * - POST /api/save {fields}: write the spec as commented YAML to the spec file given on the command line.
+ * - POST /api/save {fields, preview?}: edit the spec file given on the command line, only the changed fields (preview: list them, write nothing).
  */
 export async function handleRequest(ctx: ServeContext, req: IncomingMessage, res: ServerResponse): Promise<void> {
   try {
@@ -136,10 +141,17 @@ function checkOrigin(req: IncomingMessage): void {
 }
 
 function setup(ctx: ServeContext) {
+  let derived: Record<string, DerivedValue> | null = null;
+  try {
+    derived = derivedValues(parseSpec(ctx.initialSpec));
+  } catch (e) {
+    if (!isSpecError(e)) throw e;
+  }
   return {
     ok: true,
     fields: specFields(),
     values: specToFormValues(ctx.initialSpec),
+    derived,
     specFile: ctx.specLabel,
     canSave: ctx.specPath !== null,
     initialError: ctx.initialError,
@@ -170,6 +182,7 @@ async function view(ctx: ServeContext, body: unknown) {
     svg: b.previewSvg,
     frame: previewFrame(b.ctx.drawing, previewSvgOptions(b.ctx)),
     summary: summaryRows(layout),
+    derived: derivedValues(spec, layout),
     notes: layout.notes,
     scene: sceneMeshes(layout),
     filesUrl: `/api/files/${b.id}`,
@@ -195,15 +208,26 @@ async function sun(ctx: ServeContext, body: unknown) {
   return { ok: true, id: b.id, sun: view, shadowPreview };
 }
 
+/**
+ * "save spec": edit the user's file in place, writing only the fields the form
+ * changed (comments, order and untouched fields stay); atomic. With
+ * `preview: true` it only lists the changes, which the page shows before
+ * saving. Nothing changed: nothing is written.
+ */
 function save(ctx: ServeContext, body: unknown) {
-  const fields = fieldsOf(body, ['fields']);
+  const fields = fieldsOf(body, ['fields', 'preview']);
   if (ctx.specPath === null) throw new HttpError(409, 'save spec: no spec file was named when the server started; allowed: start it as `umbrafab serve my-dial.yaml` to save to that file');
-  const raw = formValuesToSpec(fields);
-  parseSpec(raw); // refuse to save a spec the CLI would refuse
-  const text = specToCommentedYaml(raw);
-  writeFilesAtomic(dirname(ctx.specPath), [{ name: basename(ctx.specPath), bytes: new TextEncoder().encode(text) }], true);
-  ctx.log(`umbrafab serve: saved the spec to ${ctx.specLabel}`);
-  return { ok: true, file: ctx.specLabel, bytes: Buffer.byteLength(text) };
+  parseSpec(formValuesToSpec(fields)); // refuse to save a spec the CLI would refuse
+  const current = existsSync(ctx.specPath) ? readFileSync(ctx.specPath, 'utf8') : starterSpecYaml(ctx.starterYear);
+  const raw = parseSpecText(current, ctx.specLabel ?? 'spec') ?? {};
+  const edit = editSpecText(current, raw, fields);
+  const changes = edit.changes.map((c) => ({ ...c, text: describeChange(c) }));
+  if ((body as { preview?: unknown }).preview === true) return { ok: true, file: ctx.specLabel, preview: true, changes };
+  if (edit.changes.length === 0 && existsSync(ctx.specPath)) return { ok: true, file: ctx.specLabel, changes, bytes: Buffer.byteLength(current), written: false };
+  parseSpec(parseSpecText(edit.text, ctx.specLabel ?? 'spec')); // the edited file itself must build
+  writeFilesAtomic(dirname(ctx.specPath), [{ name: basename(ctx.specPath), bytes: new TextEncoder().encode(edit.text) }], true);
+  ctx.log(`umbrafab serve: saved ${changes.length} changed field(s) to ${ctx.specLabel}${changes.length ? `: ${changes.map((c) => c.text).join('; ')}` : ''}`);
+  return { ok: true, file: ctx.specLabel, changes, bytes: Buffer.byteLength(edit.text), written: true };
 }
 
 async function sendBuildFile(ctx: ServeContext, res: ServerResponse, path: string): Promise<void> {

@@ -1,4 +1,4 @@
-import { specSchema } from '@umbrafab/geometry';
+import { derivedDefault, specSchema } from '@umbrafab/geometry';
 
 /**
  * One field of the dial spec as the page's form shows it, read from the ONE
@@ -22,8 +22,14 @@ export interface SpecField {
   readonly description: string;
   /** short unit label taken from the description: "mm", "°", "min", "mm/min", "rpm", "%" or "" */
   readonly unit: string;
-  /** the schema default, if any (absent for required site fields and per-method allowances) */
+  /** the schema's plain default, if any (absent for required site fields and for defaults that follow other fields) */
   readonly default?: unknown;
+  /**
+   * set when the default follows other fields (DERIVED_DEFAULTS): the form
+   * shows the current value and what it follows, and leaves the field out of
+   * the spec unless the user types a value
+   */
+  readonly derived?: { readonly follows: readonly string[]; readonly rule: string };
   /** true when the spec must give it (no default, not optional) */
   readonly required: boolean;
   readonly min?: number;
@@ -81,13 +87,15 @@ function walk(node: Node, path: readonly string[], parentRequired: boolean): Spe
 
 function leaf(n: Node, path: readonly string[], required: boolean): SpecField | undefined {
   const description = n.description ?? '';
+  const key = path.join('.');
+  const derived = derivedDefault(key);
   const base = {
-    key: path.join('.'),
+    key,
     section: path.length > 1 ? path.slice(0, -1).join('.') : '',
     description,
     unit: unitOf(description),
     required,
-    ...(n.default !== undefined ? { default: n.default } : {}),
+    ...(derived ? { derived: { follows: derived.follows, rule: derived.rule } } : n.default !== undefined ? { default: n.default } : {}),
   };
   if (n.anyOf) {
     const consts = n.anyOf.map((a) => a.const ?? (a.enum?.length === 1 ? a.enum[0] : undefined));

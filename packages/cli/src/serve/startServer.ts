@@ -58,7 +58,8 @@ export async function startServer(options: ServeOptions = {}): Promise<RunningSe
   const specPath = options.specPath ? resolve(options.specPath) : null;
   let initialSpec: unknown;
   let initialError: string | null = null;
-  const starter = () => parseSpecText(starterSpecYaml(Number(specFields().find((f) => f.key === 'calendar.year')?.default ?? 2027)));
+  const starterYear = Number(specFields().find((f) => f.key === 'calendar.year')?.default ?? 2027);
+  const starter = () => parseSpecText(starterSpecYaml(starterYear));
   if (specPath && existsSync(specPath)) {
     try {
       initialSpec = parseSpecText(readSpecText(specPath), options.specPath);
@@ -77,6 +78,7 @@ export async function startServer(options: ServeOptions = {}): Promise<RunningSe
     specLabel: options.specPath ?? null,
     initialSpec,
     initialError,
+    starterYear,
     port: () => (server?.address() as AddressInfo | null)?.port ?? 0,
     hostCheck,
     maxBodyBytes: options.maxBodyBytes ?? MAX_BODY_BYTES,

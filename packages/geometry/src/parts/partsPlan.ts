@@ -135,12 +135,14 @@ export function partsPlan(layout: DialLayout): PartsPlan {
 }
 
 /** Fixed file order for "auto" and for explicit lists alike. */
-const ORDER: readonly PartFile[] = ['gnomon.stl', 'gnomon.dxf', 'wedge.stl', 'body.stl'];
+const ORDER: readonly PartFile[] = ['gnomon.stl', 'gnomon.dxf', 'wedge.stl', 'stand.dxf', 'stand.stl', 'body.stl'];
 
 function partFiles(write: 'auto' | readonly PartFile[], method: string, body: boolean): PartFile[] {
   if (write !== 'auto') return ORDER.filter((f) => write.includes(f));
-  // Cut processes cut the gnomon too (from the plate's sheet, or from other stock of its thickness).
-  const out: PartFile[] = [method === 'print' ? 'gnomon.stl' : 'gnomon.dxf', 'wedge.stl'];
+  // Cut processes cut the gnomon too (from the plate's sheet, or from other
+  // stock of its thickness), and a flat-pack stand from sheet instead of the
+  // solid wedge no wood or metal shop could make (wedge.stl only on request).
+  const out: PartFile[] = method === 'print' ? ['gnomon.stl', 'wedge.stl'] : ['gnomon.dxf', 'stand.dxf', 'stand.stl'];
   if (body) out.push('body.stl');
   return ORDER.filter((f) => out.includes(f));
 }

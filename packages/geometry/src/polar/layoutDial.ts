@@ -78,6 +78,12 @@ interface MarkTime {
   readonly hourAngleDeg: number;
 }
 
+/** Options of `layoutDial`. */
+export interface LayoutOptions {
+  /** lowest and highest latitude a shared plate serves, degrees (same hemisphere) */
+  readonly latitudeRangeDeg?: readonly [number, number];
+}
+
 /**
  * Lay out a polar dial face from a validated spec (docs/design.md §2–3).
  *
@@ -90,9 +96,11 @@ interface MarkTime {
  * |H| ≥ 90° or beyond `hours.maxHourAngle`, or that fall off a fixed plate,
  * are refused with the widest range that fits.
  *
+ * @param options.latitudeRangeDeg a plate that serves several latitudes (umbrafab batch): the title states this
+ *   range instead of site.latitude (default: none, the title states site.latitude)
  * @example layoutDial(parseSpec({ site: { latitude: 41.2, longitude: -8.6, timezone: 'Europe/Lisbon' } }))
  */
-export function layoutDial(spec: DialSpec): DialLayout {
+export function layoutDial(spec: DialSpec, options: LayoutOptions = {}): DialLayout {
   if (spec.face && spec.face.type !== 'polar') {
     throw new SpecError('face.type', spec.face.type, 'allowed here: "polar" (this command draws the polar plate; `umbrafab build` and `umbrafab check` take every face type)');
   }
@@ -155,7 +163,7 @@ export function layoutDial(spec: DialSpec): DialLayout {
   const holeNeed = holes.count > 0 ? engravingHalf + HOLE_CLEAR_MM + holes.diameter / 2 + holes.inset : 0;
   // The title block sits left of the gnomon: an auto plate is wide enough for it at full size.
   const textH = spec.dial.textHeight;
-  const titleLines = titleText(spec, time);
+  const titleLines = titleText(spec, time, options.latitudeRangeDeg);
   const titleLeftInset = holes.count === 4 ? holes.inset + holes.diameter / 2 + HOLE_CLEAR_MM : spec.plate.margin;
   const titleNeed = titleLeftInset + Math.max(...titleLines.map((l) => strokeTextWidthMm(l, textH))) + t / 2 + spec.process.clearance + BAND_GAP_MM;
   const autoHalfWidth = Math.max(engravingHalf + spec.plate.margin, holeNeed, titleNeed);
@@ -288,11 +296,12 @@ function plateTooNarrow(spec: DialSpec, times: readonly MarkTime[], widthMm: num
 function checkKerfAgainstMarks(spec: DialSpec): void {
   const { method, kerf } = spec.process;
   if (method !== 'laser' && method !== 'waterjet') return;
-  for (const kind of ['hour', 'half', 'quarter'] as const) {
-    const w = spec.marks[kind].width;
-    if (kerf > w) {
-      throw new SpecError('process.kerf', kerf, `allowed: at most the narrowest mark width (marks.${kind}.width = ${w} mm) for ${method}; widen the marks or use another process`, `a ${kerf} mm ${method} kerf is wider than the ${w} mm ${kind} marks`);
-    }
+  // Only the kinds the step draws; the message names the narrowest of them.
+  const kinds = spec.hours.step === 60 ? (['hour'] as const) : spec.hours.step === 30 ? (['hour', 'half'] as const) : (['hour', 'half', 'quarter'] as const);
+  const kind = kinds.reduce((a, b) => (spec.marks[b].width < spec.marks[a].width ? b : a));
+  const w = spec.marks[kind].width;
+  if (kerf > w) {
+    throw new SpecError('process.kerf', kerf, `allowed: at most the narrowest mark width (marks.${kind}.width = ${w} mm) for ${method}; widen the marks or use another process`, `a ${kerf} mm ${method} kerf is wider than the ${w} mm ${kind} marks`);
   }
 }
 
@@ -358,10 +367,11 @@ function halfExtentX(block: TextBlock): number {
   return m + block.strokeWidthMm / 2;
 }
 
-function titleText(spec: DialSpec, time: TimeLayout): string[] {
+function titleText(spec: DialSpec, time: TimeLayout, latitudeRange?: readonly [number, number]): string[] {
   const lat = spec.site.latitude;
   const lon = spec.site.longitude;
-  const latText = `${Math.abs(lat).toFixed(3)}${lat >= 0 ? 'N' : 'S'}`;
+  const one = (v: number) => `${Math.abs(v).toFixed(3)}${v >= 0 ? 'N' : 'S'}`;
+  const latText = latitudeRange ? `${one(Math.min(...latitudeRange))} TO ${one(Math.max(...latitudeRange))}` : one(lat);
   const lonText = `${Math.abs(lon).toFixed(3)}${lon >= 0 ? 'E' : 'W'}`;
   const lines = [spec.name];
   lines.push(spec.site.place ? `${spec.site.place}  ${latText} ${lonText}` : `LAT ${latText}  LON ${lonText}`);

@@ -115,7 +115,7 @@ export function relieveTabRoots(profile: readonly Vec2[], toolRadiusMm: number, 
       throw new SpecError(
         'process.kerf',
         2 * toolRadiusMm,
-        `allowed: a router tool narrower than ${(2 * (room / (footIsRelievedToo ? 4 : 2) - RELIEF_OVERSIZE_MM)).toFixed(3)} mm, so the tab-root reliefs fit the ${room.toFixed(3)} mm of gnomon foot beside the tab corner at ${p[0].toFixed(3)} mm along the fin (or cutFiles.relief: none)`,
+        `allowed: a router tool narrower than ${(2 * (room / (footIsRelievedToo ? 4 : 2) - RELIEF_OVERSIZE_MM)).toFixed(3)} mm, so the tab-root reliefs fit the ${room.toFixed(3)} mm of gnomon foot beside the tab corner at ${p[0].toFixed(3)} mm along the fin (or cutFiles.relief: off)`,
       );
     }
     const c: Vec2 = [p[0] + dir * rho, faceZ];

@@ -7,6 +7,7 @@ import { CHORD_TOLERANCE_MM } from './arcPoints.ts';
 import { relievedSlot, relieveTabRoots, type SlotRelief } from './cornerRelief.ts';
 import { roundedRectPath } from './roundedRectPath.ts';
 import type { SheetPart } from './sheetPart.ts';
+import { standParts } from '../stand/standSheetParts.ts';
 
 /** What every part source reads: the layout, its plate drawing and the resolved options. */
 export interface SheetPartContext {
@@ -107,7 +108,7 @@ export const gnomonPart: SheetPartSource = ({ layout, reliefToolRadiusMm, chordT
  * Every kind of flat part, in the order they are listed. Add a part: one
  * source function and one entry here.
  */
-export const SHEET_PART_SOURCES: readonly SheetPartSource[] = [platePart, gnomonPart];
+export const SHEET_PART_SOURCES: readonly SheetPartSource[] = [platePart, gnomonPart, standParts];
 
 /**
  * The job's flat parts cut from sheet stock, each at nominal size in its own

@@ -1,9 +1,10 @@
 import { SpecError } from '../errors.ts';
+import { CLOCK_PATTERN } from './textFields.ts';
 
-/** "HH:MM" → minutes after midnight. Throws a SpecError naming `field` on a bad value. */
+/** "HH:MM" (or "H:MM") → minutes after midnight. Throws a SpecError naming `field` on a bad value. */
 export function parseClock(field: string, value: string): number {
-  const m = /^([01]\d|2[0-3]):([0-5]\d)$/.exec(value);
-  if (!m) throw new SpecError(field, value, 'allowed: a time "HH:MM", e.g. "07:00"');
+  const m = CLOCK_PATTERN.exec(value);
+  if (!m) throw new SpecError(field, value, 'allowed: a time "HH:MM" (or "H:MM"), e.g. "07:00"');
   return Number(m[1]) * 60 + Number(m[2]);
 }
 

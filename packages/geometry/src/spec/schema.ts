@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { boundedNumber } from './boundedNumber.ts';
+import { clockField } from './textFields.ts';
 import { freeText } from './freeText.ts';
 import { checkSection } from './sections/checkSection.ts';
 import { cutFilesSection } from './sections/cutFilesSection.ts';
@@ -8,6 +9,8 @@ import { installSection } from './sections/installSection.ts';
 import { partsSection } from './sections/partsSection.ts';
 import { templateSection } from './sections/templateSection.ts';
 import { picturesSection } from './sections/picturesSection.ts';
+import { standSection } from './sections/standSection.ts';
+import { MATERIALS } from './materials.ts';
 import { faceSection } from './sections/faceSection.ts';
 
 /**
@@ -28,10 +31,7 @@ function oneOf<const T extends readonly [string, ...string[]]>(values: T) {
   return z.enum(values, { error: `allowed: ${values.map((v) => JSON.stringify(v)).join(', ')}` });
 }
 
-const HHMM = /^([01]\d|2[0-3]):([0-5]\d)$/;
-const clock = z.string({ error: 'allowed: a time "HH:MM" in quotes, e.g. "07:00"' }).regex(HHMM, {
-  error: 'allowed: a time "HH:MM" with hours 00-23 and minutes 00-59, e.g. "07:00"',
-});
+const clock = clockField('07:00');
 
 /** A length or the word auto (sized from the layout). */
 const autoLength = z.union([z.literal('auto'), num({ min: 20, max: 3000, unit: 'mm' })], {
@@ -41,7 +41,7 @@ const autoLength = z.union([z.literal('auto'), num({ min: 20, max: 3000, unit: '
 export const METHODS = ['laser', 'waterjet', 'router', 'print'] as const;
 export type ProcessMethod = (typeof METHODS)[number];
 
-export const MATERIALS = ['aluminium', 'brass', 'stainless', 'steel', 'acrylic', 'hardwood', 'plywood', 'slate', 'pla', 'petg'] as const;
+export { MATERIALS } from './materials.ts';
 
 export const NUMERAL_STYLES = ['arabic', 'arabic24', 'roman'] as const;
 
@@ -94,8 +94,8 @@ export const specSchema = z.strictObject({
     .prefault({}),
   hours: z
     .strictObject({
-      from: clock.default('07:00').describe('first mark, "HH:MM"'),
-      to: clock.default('17:00').describe('last mark, "HH:MM"'),
+      from: clock.default('07:00').describe('first mark, "HH:MM" (or "H:MM")'),
+      to: clock.default('17:00').describe('last mark, "HH:MM" (or "H:MM")'),
       step: z.union([z.literal(60), z.literal(30), z.literal(15)], { error: 'allowed: 60, 30 or 15 (minutes)' }).default(15).describe('finest mark spacing in minutes: 60, 30 or 15'),
       maxHourAngle: num({ min: 30, max: 85, unit: '°' }).default(75).describe('widest hour angle a mark may have, degrees (75° puts 07:00 at 3.73 gnomon heights)'),
     })
@@ -134,6 +134,7 @@ export const specSchema = z.strictObject({
     })
     .prefault({}),
   parts: partsSection,
+  stand: standSection,
   engrave: engraveSection,
   install: installSection,
   check: checkSection,

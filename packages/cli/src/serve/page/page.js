@@ -26,6 +26,8 @@ const state = {
   values: {},
   initial: {},
   build: null,
+  /** fields whose default follows another field: {value, follows, rule}, from the server */
+  derived: {},
   sun: null,
   seq: 0,
   sunSeq: 0,
@@ -102,7 +104,7 @@ function renderField(f) {
   let input;
   if (f.kind === 'choice') {
     input = document.createElement('select');
-    if (f.default === undefined) input.append(new Option(f.required ? '— choose —' : '— default —', ''));
+    if (f.default === undefined) input.append(new Option(f.required ? '— choose —' : f.derived ? '— derived —' : '— default —', ''));
     for (const c of f.choices) input.append(new Option(String(c), String(c)));
     input.value = String(v);
   } else if (f.kind === 'boolean') {
@@ -118,7 +120,8 @@ function renderField(f) {
       if (f.min !== undefined) input.min = String(f.min);
       if (f.max !== undefined) input.max = String(f.max);
     }
-    if (f.kind === 'numberOrAuto') input.placeholder = `${f.default ?? 'auto'} or a number`;
+    if (f.derived) input.placeholder = 'derived';
+    else if (f.kind === 'numberOrAuto') input.placeholder = `${f.default ?? 'auto'} or a number`;
     else if (f.default === undefined && !f.required) input.placeholder = 'default';
     input.value = v === undefined ? '' : String(v);
   }
@@ -146,14 +149,39 @@ function renderField(f) {
   }
 
   const help = document.createElement('small');
-  const dflt = f.default === undefined ? (f.required ? 'required' : 'optional') : `default ${typeof f.default === 'object' ? JSON.stringify(f.default) : f.default}${f.unit && typeof f.default === 'number' ? ` ${f.unit}` : ''}`;
-  help.textContent = `${f.description}${f.description ? ' · ' : ''}${dflt}`;
+  const dflt = f.derived ? '' : f.default === undefined ? (f.required ? 'required' : 'optional') : `default ${typeof f.default === 'object' ? JSON.stringify(f.default) : f.default}${f.unit && typeof f.default === 'number' ? ` ${f.unit}` : ''}`;
+  help.textContent = `${f.description}${f.description && dflt ? ' · ' : ''}${dflt}`;
   wrap.append(help);
+  if (f.derived) {
+    // A default that follows other fields: shown, never written back (left empty, the build derives it as `umbrafab build` does).
+    const d = document.createElement('small');
+    d.className = 'derived';
+    wrap.append(d);
+  }
   const err = document.createElement('p');
   err.className = 'err';
   err.hidden = true;
   wrap.append(err);
   return wrap;
+}
+
+/** Show each derived field's current value and what it follows (empty inputs only; a typed value is the user's). */
+function drawDerived(derived) {
+  state.derived = derived || {};
+  for (const f of state.fields) {
+    if (!f.derived) continue;
+    const wrap = document.querySelector(`.field[data-key="${CSS.escape(f.key)}"]`);
+    if (!wrap) continue;
+    const d = state.derived[f.key];
+    const now = d && d.value !== undefined ? `${d.value}${f.unit && typeof d.value === 'number' ? ` ${f.unit}` : ''}` : null;
+    const input = wrap.querySelector('input:not([type=range]), select');
+    if (input && input.tagName === 'INPUT') input.placeholder = now === null ? 'derived' : `${now} (derived)`;
+    const note = wrap.querySelector('.derived');
+    const set = state.values[f.key] !== '' && state.values[f.key] !== undefined;
+    const range = wrap.querySelector('input[type=range]');
+    if (range && !set && d && typeof d.value === 'number') range.value = String(d.value);
+    note.textContent = `${set ? 'set here; when empty: ' : 'derived: '}${now === null ? '' : `${now} now, `}follows ${f.derived.follows.join(', ')} (${f.derived.rule})`;
+  }
 }
 
 function readInput(f, input) {
@@ -225,6 +253,7 @@ async function rebuild() {
   $('model').classList.remove('stale');
   drawFace(r);
   drawNumbers(r);
+  drawDerived(r.derived);
   t.face = performance.now();
   drawModel(r);
   t.model = performance.now();
@@ -627,11 +656,55 @@ function drawSun3d(s) {
 // ---------------------------------------------------------------- save
 
 async function save() {
+  // First the list of changed fields, then the write once the user agrees.
+  const preview = await post('/api/save', { fields: state.values, preview: true });
+  if (!preview.ok) {
+    showFieldError(preview.error.field ? preview.error : null);
+    setStatus(`not saved: ${preview.error.message}`, 'bad');
+    return;
+  }
+  showChanges(preview.changes);
+  if (preview.changes.length === 0) {
+    setStatus(`nothing changed: ${preview.file} left as it is`, 'good');
+    return;
+  }
+}
+
+/** The changed fields, listed before saving, with the buttons to save or go back. */
+function showChanges(changes) {
+  const box = $('changes');
+  box.textContent = '';
+  box.hidden = changes.length === 0;
+  if (changes.length === 0) return;
+  const head = document.createElement('p');
+  head.textContent = `save writes ${changes.length} changed field${changes.length === 1 ? '' : 's'}; the rest of the file (comments, order, other fields) stays:`;
+  const list = document.createElement('ul');
+  for (const c of changes) {
+    const li = document.createElement('li');
+    li.textContent = c.text;
+    li.dataset.key = c.key;
+    list.append(li);
+  }
+  const ok = document.createElement('button');
+  ok.type = 'button';
+  ok.id = 'save-confirm';
+  ok.textContent = 'save these changes';
+  ok.addEventListener('click', confirmSave);
+  const back = document.createElement('button');
+  back.type = 'button';
+  back.textContent = 'cancel';
+  back.addEventListener('click', () => showChanges([]));
+  box.append(head, list, ok, back);
+}
+
+async function confirmSave() {
   const r = await post('/api/save', { fields: state.values });
+  showChanges([]);
   if (r.ok) {
-    setStatus(`saved ${r.file} (${r.bytes} bytes)`, 'good');
+    setStatus(r.written ? `saved ${r.changes.length} field${r.changes.length === 1 ? '' : 's'} to ${r.file}` : `nothing changed: ${r.file} left as it is`, 'good');
     state.initial = { ...state.values };
     for (const el of document.querySelectorAll('.field.changed')) el.classList.remove('changed');
+    probe.saved = (probe.saved || 0) + 1;
   } else {
     showFieldError(r.error.field ? r.error : null);
     setStatus(`not saved: ${r.error.message}`, 'bad');
@@ -650,6 +723,7 @@ async function start() {
   $('save').disabled = !setup.canSave;
   if (!setup.canSave) $('save').title = 'start the server with a spec file (umbrafab serve my-dial.yaml) to save';
   renderForm();
+  drawDerived(setup.derived);
   if (setup.initialError) showFieldError({ field: null, message: setup.initialError });
   const year = state.values['calendar.year'] || new Date().getFullYear();
   $('sun-date').value = `${year}-04-16`;

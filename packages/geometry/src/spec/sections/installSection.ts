@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { dateField } from '../textFields.ts';
 
 /**
  * The `install:` section of the dial spec: what the installation sheet
@@ -7,9 +8,7 @@ import { z } from 'zod';
  */
 export const installSection = z
   .strictObject({
-    date: z
-      .string({ error: 'allowed: a date "YYYY-MM-DD" in quotes, e.g. "2027-04-01"' })
-      .regex(/^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/, { error: 'allowed: a date "YYYY-MM-DD", e.g. "2027-04-01"' })
+    date: dateField('2027-04-01')
       .optional()
       .describe('installation date "YYYY-MM-DD" for the magnetic declination and the noon table (default April 1 of calendar.year)'),
     weeks: z

@@ -11,7 +11,7 @@ import { SpecError, formatValue } from '../../errors.ts';
  */
 
 /** File names a spec may list in `parts.write`. */
-export const PART_FILES = ['gnomon.stl', 'gnomon.dxf', 'wedge.stl', 'body.stl'] as const;
+export const PART_FILES = ['gnomon.stl', 'gnomon.dxf', 'wedge.stl', 'stand.dxf', 'stand.stl', 'body.stl'] as const;
 export type PartFile = (typeof PART_FILES)[number];
 
 /** Where the gnomon comes from: cut from the plate's own sheet, or made separately (printed or other stock). */
@@ -32,7 +32,7 @@ export const partsSection = z
       .refine((v) => v === 'auto' || new Set(v).size === v.length, { error: 'allowed: each file name at most once' })
       .default('auto')
       .describe(
-        'part files to write: "auto" (print: gnomon.stl + wedge.stl; laser, waterjet, router: gnomon.dxf + wedge.stl; body.stl too with parts.body: true) or a list of gnomon.stl, gnomon.dxf, wedge.stl, body.stl',
+        'part files to write: "auto" (print: gnomon.stl + wedge.stl; laser, waterjet, router: gnomon.dxf + the flat-pack stand, stand.dxf to cut and stand.stl as assembled; body.stl too with parts.body: true) or a list of gnomon.stl, gnomon.dxf, wedge.stl, stand.dxf, stand.stl, body.stl',
       ),
     body: flag.default(false).describe('with write "auto", also write body.stl: the whole dial printed in one piece'),
     gnomonFrom: z

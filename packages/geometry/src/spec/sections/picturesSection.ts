@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { boundedNumber } from '../boundedNumber.ts';
+import { clockField, dateField } from '../textFields.ts';
 
 /**
  * The `pictures:` section of the dial spec: preview.png and the assembly
@@ -11,21 +12,15 @@ import { boundedNumber } from '../boundedNumber.ts';
 /** A bounded number with its unit (see boundedNumber). */
 const bounded = (min: number, max: number, unit: string) => boundedNumber({ min, max, unit });
 
-const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
-const HHMM = /^([01]\d|2[0-3]):([0-5]\d)$/;
 
 export const picturesSection = z
   .strictObject({
     write: z.boolean({ error: 'allowed: true or false' }).default(true).describe('write preview.png, assembly.svg and assembly.png'),
     pxPerMm: bounded(1, 20, 'px/mm').default(4).describe('pixels per millimetre of preview.png and assembly.png (4 px/mm is about 100 dpi)'),
-    date: z
-      .string({ error: 'allowed: a date "YYYY-MM-DD" in quotes, e.g. "2027-06-21"' })
-      .regex(DATE, { error: 'allowed: a date "YYYY-MM-DD" in quotes, e.g. "2027-06-21"' })
+    date: dateField('2027-06-21')
       .optional()
       .describe('local date of the shadow in the assembly picture, "YYYY-MM-DD" (default: the local summer solstice of calendar.year, June 21 north, December 21 south)'),
-    time: z
-      .string({ error: 'allowed: a time "HH:MM" in quotes, e.g. "10:00"' })
-      .regex(HHMM, { error: 'allowed: a time "HH:MM" with hours 00-23 and minutes 00-59, e.g. "10:00"' })
+    time: clockField('10:00')
       .default('10:00')
       .describe('dial reading the shadow shows in the assembly picture, "HH:MM" (the moment the real sun puts the shadow on that line; the report gives its clock time)'),
     viewAzimuth: bounded(-80, 80, '°').default(35).describe('viewpoint of the assembly picture, degrees east of the equator-ward direction (negative: west)'),
