@@ -14,6 +14,7 @@ export * from './polar/layoutDial.ts';
 export * from './plate/plateDrawing.ts';
 export * from './sheet/sheetPart.ts';
 export * from './sheet/sheetParts.ts';
+export * from './sheet/nestSheet.ts';
 export * from './sheet/arcPoints.ts';
 export * from './outline/strokeOutlines.ts';
 export * from './sheet/roundedRectPath.ts';
