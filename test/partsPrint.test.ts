@@ -2,19 +2,8 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import {
-  faceToWedge,
-  fitsBed,
-  layoutDial,
-  parseSpec,
-  partsPlan,
-  printedWedge,
-  SpecError,
-  type Mesh,
-  type Vec3,
-} from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { parseSpecText } from '../packages/cli/src/readSpec.ts';
+import { faceToWedge, fitsBed, layoutDial, parseSpec, partsPlan, printedWedge, SpecError, type Mesh, type Vec3 } from '@umbrafab/geometry';
+import { buildFiles, parseSpecText } from '@umbrafab/cli';
 import { runAdmesh, type AdmeshReport } from './helpers/admesh.ts';
 import { expectClose } from './helpers/closeTo.ts';
 
