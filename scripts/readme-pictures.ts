@@ -7,6 +7,10 @@ import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { buildFiles, readSpecFile } from '@umbrafab/cli';
+import { buildAnyFiles } from '../packages/cli/src/buildFiles.ts';
+
+/** One picture per planar face type, from fixtures/planar/ (docs/images/face-<name>.png). */
+const PLANAR_PICTURES = ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial'];
 
 const ROOT = resolve(import.meta.dirname, '..');
 const OUT = join(ROOT, 'docs/images');
@@ -31,6 +35,13 @@ async function run(): Promise<void> {
     written.push('template-page1.png');
   } catch (e) {
     console.warn(`readme-pictures: template-page1.png skipped (pdftoppm from poppler-utils needed): ${(e as Error).message.split('\n')[0]}`);
+  }
+  for (const name of PLANAR_PICTURES) {
+    const built = await buildAnyFiles(readSpecFile(join(ROOT, `fixtures/planar/${name}.yaml`)));
+    const png = built.files.find((f) => f.name === 'preview.png');
+    if (!png) throw new Error(`fixtures/planar/${name}.yaml wrote no preview.png`);
+    writeFileSync(join(OUT, `face-${name}.png`), png.bytes);
+    written.push(`face-${name}.png`);
   }
   console.log(`readme-pictures: wrote ${written.map((n) => `docs/images/${n}`).join(', ')}`);
 }

@@ -13,7 +13,7 @@ import {
   type PlanarLayout,
   type PlateDrawing,
 } from '@umbrafab/geometry';
-import { assertToolFits, engraveFromSpec, stlHeader, toPlanarInstallMd, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
+import { assertToolFits, engraveFromSpec, stlHeader, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
 import { cutPartFiles } from './outputs/cutParts.ts';
 import { utf8 } from './outputs/outputTypes.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
@@ -49,7 +49,9 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   const [platePart, finPart] = flatParts(reliefToolRadius(spec));
   const plateCut = await cutPartFiles({ spec, drawing }, platePart);
   files.push(...plateCut.files);
-  files.push({ name: 'preview.svg', bytes: utf8(toSvg(drawing, { caption: `${spec.name} - ${layout.faceType} face, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` })) });
+  const preview = toSvg(drawing, { caption: `${spec.name} - ${layout.faceType} face, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+  files.push({ name: 'preview.svg', bytes: utf8(preview) });
+  if (spec.pictures.write) files.push({ name: 'preview.png', bytes: toPng(preview, { pxPerMm: spec.pictures.pxPerMm }) });
   const engraving = engraveFromSpec(spec, drawing);
   files.push(...engraving.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })));
 
