@@ -6,8 +6,7 @@ import { execFileSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { buildFiles, readSpecFile } from '@umbrafab/cli';
-import { buildAnyFiles } from '../packages/cli/src/buildFiles.ts';
+import { buildFiles, readSpecFile, buildAnyFiles } from '@umbrafab/cli';
 
 /** One picture per planar face type, from fixtures/planar/ (docs/images/face-<name>.png). */
 const PLANAR_PICTURES = ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial'];

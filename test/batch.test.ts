@@ -3,8 +3,8 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parse as parseYaml } from 'yaml';
-import { parseSpec } from '../packages/geometry/src/index.ts';
-import { buildContext, buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { parseSpec } from '@umbrafab/geometry';
+import { buildContext, buildFiles } from '@umbrafab/cli';
 import { runCli } from './helpers/runCli.ts';
 import { expectClose } from './helpers/closeTo.ts';
 

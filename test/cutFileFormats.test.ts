@@ -3,8 +3,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import DxfParser from 'dxf-parser';
 import { describe, expect, it } from 'vitest';
-import { parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { parseSpec } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 
 const site = { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' };

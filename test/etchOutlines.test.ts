@@ -3,9 +3,8 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { drawingStrokes, strokeOutlines } from '../packages/geometry/src/index.ts';
-import { buildContext, buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { drawingStrokes, strokeOutlines } from '@umbrafab/geometry';
+import { buildContext, buildFiles, readSpecFile } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');

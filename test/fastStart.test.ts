@@ -24,7 +24,7 @@ const HEAVY_PACKAGES: Record<string, RegExp> = {
   'the 3D page library (three)': /\/node_modules\/\.pnpm\/three@/,
   'the TypeScript transform (tsx)': /\/node_modules\/\.pnpm\/(tsx|esbuild)@/,
 };
-/** Project modules that only some outputs need, by the source-path comment esbuild writes above each bundled module. */
+/** Project modules that only some outputs need, by their source path (dist/<hash>/chunks.json lists the sources in each chunk). */
 const HEAVY_SOURCES: Record<string, string> = {
   'the PDF template writer': 'fabricate/src/template/toTemplatePdf.ts',
   'the PNG writer': 'fabricate/src/pictures/toPng.ts',
@@ -48,18 +48,24 @@ function loaded(args: readonly string[], bin = BIN, cwd = ROOT): { urls: string[
   return { urls, stdout: r.stdout, stderr: r.stderr, status: r.status };
 }
 
-/** The project code a process ran: the text of every loaded dist chunk. */
-function distText(urls: readonly string[]): string {
-  return urls
-    .filter((u) => /\/packages\/cli\/dist\/[0-9a-f]+\/[^/]+\.mjs$/.test(u))
-    .map((u) => readFileSync(fileURLToPath(u), 'utf8'))
-    .join('\n');
+/** The project sources a process ran: those of every loaded dist chunk, from the build's own chunks.json. */
+function distSources(urls: readonly string[]): string[] {
+  const out: string[] = [];
+  for (const u of urls) {
+    const m = /^(.*\/packages\/cli\/dist\/[0-9a-f]+)\/([^/]+\.mjs)$/.exec(fileURLToPath(u.startsWith('file:') ? u : 'file:///nothing'));
+    if (!m) continue;
+    const chunks = JSON.parse(readFileSync(join(m[1], 'chunks.json'), 'utf8')) as Record<string, string[]>;
+    out.push(...(chunks[m[2]] ?? []));
+  }
+  return out;
 }
+const holds = (sources: readonly string[], path: string) => sources.some((s) => s.includes(path));
 
 function expectNoneHeavy(urls: readonly string[]): void {
   for (const [what, re] of Object.entries(HEAVY_PACKAGES)) expect(urls.filter((u) => re.test(u)), what).toEqual([]);
-  const code = distText(urls);
-  for (const [what, path] of Object.entries(HEAVY_SOURCES)) expect(code.includes(`// ../${path}`) || code.includes(`// ${path}`), what).toBe(false);
+  const sources = distSources(urls);
+  expect(sources.length).toBeGreaterThan(0);
+  for (const [what, path] of Object.entries(HEAVY_SOURCES)) expect(holds(sources, path), what).toBe(false);
 }
 
 describe('the bin loads only what a command needs', () => {
@@ -78,13 +84,13 @@ describe('the bin loads only what a command needs', () => {
     });
   }
 
-  it('the probe sees the heavy modules when an output needs them (the demo build writes a PDF and PNGs; a printed body needs the mesh kernel)', () => {
+  it('the probe sees the heavy modules when an output needs them (the demo build writes a PDF and PNGs; the booleans of a printed body need the mesh kernel)', () => {
     const demo = loaded(['build', join(ROOT, 'fixtures/demo.yaml'), '--out', join(work, 'demo'), '--force']);
     expect(demo.status, demo.stderr).toBe(0);
     expect(demo.urls.some((u) => HEAVY_PACKAGES['the PDF writer (pdfkit)'].test(u))).toBe(true);
     expect(demo.urls.some((u) => HEAVY_PACKAGES['the rasteriser (@resvg/resvg-js)'].test(u))).toBe(true);
-    expect(demo.urls.some((u) => HEAVY_PACKAGES['the mesh kernel (manifold-3d)'].test(u))).toBe(false);
-    expect(distText(demo.urls)).toContain('fabricate/src/template/toTemplatePdf.ts');
+    expect(holds(distSources(demo.urls), 'fabricate/src/template/toTemplatePdf.ts')).toBe(true);
+    expect(holds(distSources(demo.urls), 'fabricate/src/engrave/')).toBe(true);
     const body = loaded(['build', join(ROOT, 'fixtures/golden-specs/print-body.yaml'), '--out', join(work, 'body'), '--force']);
     expect(body.status, body.stderr).toBe(0);
     expect(body.urls.some((u) => HEAVY_PACKAGES['the mesh kernel (manifold-3d)'].test(u))).toBe(true);
@@ -96,7 +102,8 @@ describe('the bin loads only what a command needs', () => {
     for (const what of ['the PDF writer (pdfkit)', 'the rasteriser (@resvg/resvg-js)', 'the mesh kernel (manifold-3d)', 'the TypeScript transform (tsx)']) {
       expect(r.urls.filter((u) => HEAVY_PACKAGES[what].test(u)), what).toEqual([]);
     }
-    expect(distText(r.urls)).toContain('geometry/src/shadow/checkDial.ts');
+    expect(holds(distSources(r.urls), 'geometry/src/shadow/checkDial.ts')).toBe(true);
+    expect(holds(distSources(r.urls), 'fabricate/src/template/toTemplatePdf.ts')).toBe(false);
   });
 
   it("the page's full build runs in the built worker thread (no TypeScript transform) and serves the build's files", async () => {

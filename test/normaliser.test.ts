@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { DERIVED_DEFAULTS, METHODS, parseSpec } from '../packages/geometry/src/index.ts';
-import { specFields } from '../packages/cli/src/serve/specFields.ts';
-import { formValuesToSpec, specToFormValues } from '../packages/cli/src/serve/formValues.ts';
+import { DERIVED_DEFAULTS, METHODS, parseSpec } from '@umbrafab/geometry';
+import { specFields, formValuesToSpec, specToFormValues } from '@umbrafab/cli';
 
 const site = { latitude: 47.3, longitude: 8.5, timezone: 'Europe/Zurich' };
 

@@ -3,7 +3,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { fitPixelBudget, MAX_PICTURE_PIXELS } from '../packages/fabricate/src/index.ts';
+import { fitPixelBudget, MAX_PICTURE_PIXELS } from '@umbrafab/fabricate';
 
 const ROOT = resolve(import.meta.dirname, '..');
 const work = mkdtempSync(join(tmpdir(), 'umbrafab-mem-'));

@@ -8,7 +8,7 @@ import { buildAnyFiles } from '@umbrafab/cli';
 import { runAdmesh } from './helpers/admesh.ts';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 
-const FIXTURES = ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial'];
+const FIXTURES = ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial', 'equatorial-lower'];
 const specOf = (name: string) => parseSpec(parse(readFileSync(new URL(`../fixtures/planar/${name}.yaml`, import.meta.url), 'utf8')));
 
 describe('every planar face type: build, read back, check on the real gnomon', () => {
@@ -72,7 +72,9 @@ describe('every planar face type: build, read back, check on the real gnomon', (
   it('the polar default is untouched: a spec without face builds the polar plate; a planar spec is refused by polar-only paths', async () => {
     const raw = parse(readFileSync(new URL('../fixtures/demo.yaml', import.meta.url), 'utf8'));
     const polar = await buildAnyFiles(parseSpec(raw));
-    expect(polar.files.map((f) => f.name)).toContain('wedge.stl');
+    // The polar layout (marks at xMm along the style), not a planar one.
+    expect('xMm' in polar.layout.marks[0]).toBe(true);
+    expect('kind' in polar.layout && polar.layout.kind === 'planar').toBe(false);
     expect((polar.report.spec as Record<string, unknown>).face).toBeUndefined();
     const { layoutDial } = await import('@umbrafab/geometry');
     expect(() => layoutDial(specOf('garden-horizontal'))).toThrow(/face\.type/);

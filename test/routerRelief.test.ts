@@ -3,8 +3,8 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { layoutDial, parseSpec, plateDrawing, sheetParts } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
+import { layoutDial, parseSpec, plateDrawing, sheetParts } from '@umbrafab/geometry';
+import { buildFiles } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 
 const site = { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' };

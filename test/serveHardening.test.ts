@@ -4,11 +4,8 @@ import { request } from 'node:http';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parse as parseYaml } from 'yaml';
-import { parseSpec } from '../packages/geometry/src/index.ts';
-import { buildCache } from '../packages/cli/src/serve/buildCache.ts';
-import { fullBuilder, type FullBuilder } from '../packages/cli/src/serve/fullBuilder.ts';
-import { bindPolicy } from '../packages/cli/src/serve/bindPolicy.ts';
-import { startServer, type RunningServer } from '../packages/cli/src/serve/startServer.ts';
+import { parseSpec } from '@umbrafab/geometry';
+import { bindPolicy, buildCache, fullBuilder, startServer, type FullBuilder, type RunningServer } from '@umbrafab/cli';
 
 const ROOT = resolve(import.meta.dirname, '..');
 const DEMO = join(ROOT, 'fixtures/demo.yaml');

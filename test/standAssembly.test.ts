@@ -1,8 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { flatStand, layoutDial, parseSpec, type PartPlacement, type SizedStand, type Vec2, type Vec3 } from '../packages/geometry/src/index.ts';
-import { parseSpecText } from '../packages/cli/src/readSpec.ts';
+import { flatStand, layoutDial, parseSpec, type PartPlacement, type SizedStand, type Vec2, type Vec3 } from '@umbrafab/geometry';
+import { parseSpecText } from '@umbrafab/cli';
 
 /**
  * The flat-pack stand put together from its own joint geometry, as a fitter

@@ -3,9 +3,8 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { flatStand, parseSpec, pieceRows, type Vec2 } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { parseSpecText } from '../packages/cli/src/readSpec.ts';
+import { flatStand, parseSpec, pieceRows, type Vec2 } from '@umbrafab/geometry';
+import { buildFiles, parseSpecText } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 import { runAdmesh } from './helpers/admesh.ts';
 

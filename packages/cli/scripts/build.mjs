@@ -62,6 +62,8 @@ export async function buildDist() {
       sourcemap: 'linked',
       sourcesContent: false,
       legalComments: 'none',
+      minifyWhitespace: true,
+      minifySyntax: true,
       // Bundled CommonJS packages require() Node's built-ins: give ESM chunks a require.
       banner: { js: "import { createRequire as __umbrafabRequire } from 'node:module';\nconst require = __umbrafabRequire(import.meta.url);" },
       logLevel: 'error',
@@ -69,24 +71,34 @@ export async function buildDist() {
     });
     cpSync(PAGE, join(tmp, 'page'), { recursive: true });
 
+    // Inputs to watch: every bundled project file; for a bundled third-party
+    // file, only its package's package.json (it changes with the version, on
+    // install), which keeps the bin's freshness check to a few hundred stats.
+    const bundled = Object.keys(r.metafile.inputs).map((p) => resolve(CLI, p));
     const inputs = [
-      ...Object.keys(r.metafile.inputs).map((p) => resolve(CLI, p)),
+      ...bundled.map((f) => packageManifestOf(f) ?? f),
       ...listFiles(PAGE),
       ...CONFIG_INPUTS,
       ...externals,
     ];
+    // Which project sources each output file holds (for tests that check what a command loads).
+    const chunks = {};
+    for (const [out, o] of Object.entries(r.metafile.outputs)) {
+      if (!out.endsWith('.mjs')) continue;
+      chunks[out.split('/').pop()] = Object.keys(o.inputs).filter((p) => !p.includes('node_modules')).map((p) => relative(CLI, resolve(CLI, p)).split(sep).join('/'));
+    }
+    writeFileSync(join(tmp, 'chunks.json'), JSON.stringify(chunks, null, 1) + '\n');
     const hash = createHash('sha256');
     for (const f of listFiles(tmp).sort()) hash.update(relative(tmp, f)).update('\0').update(readFileSync(f)).update('\0');
     const name = hash.digest('hex').slice(0, 16);
     const dir = join(DIST, name);
-    if (existsSync(join(dir, 'main.mjs'))) rmSync(tmp, { recursive: true, force: true });
-    else {
-      rmSync(dir, { recursive: true, force: true });
+    // A build folder appears whole (one rename) and is never replaced: another
+    // process may be loading its chunks. If it exists, it holds these very bytes.
+    if (!existsSync(join(dir, 'main.mjs'))) {
       try {
         renameSync(tmp, dir);
       } catch (e) {
-        if (!existsSync(join(dir, 'main.mjs'))) throw e; // another process put the same build there first
-        rmSync(tmp, { recursive: true, force: true });
+        if (!existsSync(join(dir, 'main.mjs'))) throw e; // not another process's identical build
       }
     }
     const current = { format: FORMAT, dir: name, inputs: [...new Set(inputs)].sort().map((f) => stamp(f)) };
@@ -98,6 +110,15 @@ export async function buildDist() {
   } finally {
     rmSync(tmp, { recursive: true, force: true });
   }
+}
+
+/** For a file inside node_modules, its package's package.json; otherwise undefined. */
+function packageManifestOf(file) {
+  const parts = file.split(sep);
+  const i = parts.lastIndexOf('node_modules');
+  if (i < 0) return undefined;
+  const n = parts[i + 1]?.startsWith('@') ? 3 : 2;
+  return parts.slice(0, i + n).concat('package.json').join(sep);
 }
 
 /** [path relative to packages/cli, size, mtime in ms] of one input. */

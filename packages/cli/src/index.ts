@@ -13,6 +13,8 @@ export { entryExists, OutputError, recoverInterrupted, writeFilesAtomic, type Ou
 export { UsageError } from './commands/commandTypes.ts';
 export { starterSpecYaml } from './starterSpec.ts';
 export { startServer, type RunningServer, type ServeOptions } from './serve/startServer.ts';
+export { buildCache, MAX_CACHED_FILE_BYTES, specId, type BuildCache, type CachedBuild } from './serve/buildCache.ts';
+export { fullBuilder, WORKER_IDLE_MS, type FullBuilder } from './serve/fullBuilder.ts';
 export { bindPolicy, DEFAULT_HOST, DEFAULT_PORT, isLoopbackHost } from './serve/bindPolicy.ts';
 export { formValuesToSpec, specToFormValues, type FormValue } from './serve/formValues.ts';
 export { MAX_BODY_BYTES, readJsonBody } from './serve/readJsonBody.ts';

@@ -1,4 +1,4 @@
-import { drawingStrokes, sheetParts, slotReliefs, reliefToolRadius, strokeOutlines, type SheetPart } from '@umbrafab/geometry';
+import { drawingStrokes, sheetParts, slotReliefs, reliefToolRadius, strokeOutlines, type SheetPart, type StrokeOutlines } from '@umbrafab/geometry';
 import { assertToolFits, partCutFiles, resolveStrokeMode, type PartCutReport } from '@umbrafab/fabricate';
 import { utf8, type BuildContext } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
@@ -13,6 +13,19 @@ export function cutParts(ctx: BuildContext): SheetPart[] {
   const { spec, layout, drawing } = ctx;
   if (spec.process.method !== 'print') assertToolFits(sheetParts(layout, drawing, { reliefToolRadiusMm: 0 }), spec.process.kerf);
   return sheetParts(layout, drawing);
+}
+
+/** Stroke unions already computed in this process, by the part's line list (the plate's is shared by plate.dxf and sheet.dxf). */
+const outlineCache = new WeakMap<object, { text: unknown; tol: number; outlines: Promise<StrokeOutlines> }>();
+
+/** The union of a part's engraved strokes (strokeOutlines), computed once per line list and tolerance. */
+export function partOutlines(part: SheetPart, chordToleranceMm: number): Promise<StrokeOutlines> {
+  const key = part.lines ?? part;
+  const hit = outlineCache.get(key);
+  if (hit && hit.text === part.text && hit.tol === chordToleranceMm) return hit.outlines;
+  const outlines = strokeOutlines(drawingStrokes(part.lines ?? [], part.text ?? []), chordToleranceMm);
+  outlineCache.set(key, { text: part.text, tol: chordToleranceMm, outlines });
+  return outlines;
 }
 
 /** How one part's cutting drawing was drawn, in report.json. */
@@ -39,7 +52,7 @@ export async function cutPartFiles(ctx: Pick<BuildContext, 'spec' | 'drawing'>, 
   const c = spec.cutFiles;
   const strokes = resolveStrokeMode(c.strokes, spec.process.method);
   const hasStrokes = (part.lines?.length ?? 0) + (part.text?.length ?? 0) > 0;
-  const outlines = strokes !== 'centre-lines' && hasStrokes ? await strokeOutlines(drawingStrokes(part.lines ?? [], part.text ?? []), c.chordTolerance) : undefined;
+  const outlines = strokes !== 'centre-lines' && hasStrokes ? await partOutlines(part, c.chordTolerance) : undefined;
   const r = await partCutFiles(part, {
     method: spec.process.method,
     kerfMm: spec.process.kerf,

@@ -3,6 +3,7 @@ import { partsOutputs } from './partsOutputs.ts';
 import { picturesOutputs } from './picturesOutputs.ts';
 import { plateOutputs } from './plateOutputs.ts';
 import { standOutputs } from './standOutputs.ts';
+import { sheetOutputs } from './sheetOutputs.ts';
 import { timeOutputs } from './timeOutputs.ts';
 import type { Producer } from './outputTypes.ts';
 
@@ -11,7 +12,7 @@ import type { Producer } from './outputTypes.ts';
  * one file in outputs/ (its report sections typed beside it), one line here
  * and one in report.ts. No two producers write the same report section.
  */
-export const PRODUCERS: readonly Producer[] = [plateOutputs, partsOutputs, standOutputs, engraveOutputs, timeOutputs, picturesOutputs];
+export const PRODUCERS: readonly Producer[] = [plateOutputs, partsOutputs, standOutputs, sheetOutputs, engraveOutputs, timeOutputs, picturesOutputs];
 
 /** Indices of PRODUCERS in the order they are started: the pictures (PNGs render on worker threads) first. */
 export const START_ORDER: readonly number[] = [PRODUCERS.indexOf(picturesOutputs), ...PRODUCERS.map((_, i) => i).filter((i) => PRODUCERS[i] !== picturesOutputs)];

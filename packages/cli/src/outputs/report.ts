@@ -4,6 +4,7 @@ import type { PartsSections } from './partsOutputs.ts';
 import type { PicturesSections } from './picturesOutputs.ts';
 import type { PlateSections } from './plateOutputs.ts';
 import type { StandSections } from './standOutputs.ts';
+import type { SheetSections } from './sheetOutputs.ts';
 import type { TimeSections } from './timeOutputs.ts';
 
 /**
@@ -15,7 +16,7 @@ import type { TimeSections } from './timeOutputs.ts';
  * from this type (`pnpm report-schema`) and checked against every build in
  * test/reportSchema.test.ts.
  */
-export type Report = ReportHead & PlateSections & PartsSections & StandSections & EngraveSections & TimeSections & PicturesSections & ReportTail;
+export type Report = ReportHead & PlateSections & PartsSections & StandSections & SheetSections & EngraveSections & TimeSections & PicturesSections & ReportTail;
 
 /** What every report starts with. */
 export interface ReportHead {

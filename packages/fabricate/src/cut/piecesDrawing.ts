@@ -7,12 +7,20 @@ import { cutDrawing, nominalProfiles, type CutDrawing, type CutEntity } from './
  * part's own nominal cutting drawing (`cutDrawing`: CUT_PROFILE profiles,
  * its reference lines) moved by the piece's offset, with a note under it on
  * REFERENCE_NO_CUT naming the part, the copy, the stock and its size. The
- * drawing's head notes say it is drawn at true size. Serialise it with
+ * drawing's head notes say it is drawn at true size (`drawPart` draws a
+ * part otherwise: sheet.dxf passes the build's stroke mode and offset). Serialise it with
  * `toDxf`, like every other cutting drawing.
  *
  * @example toDxf(piecesDrawing(stand.parts, pieceRows(stand.parts), new Map(), ['stand: true size']))
  */
-export function piecesDrawing(parts: readonly SheetPart[], pieces: readonly PlacedPiece[], labels: ReadonlyMap<string, string>, notes: readonly string[], noteHeightMm = 3.5): CutDrawing {
+export function piecesDrawing(
+  parts: readonly SheetPart[],
+  pieces: readonly PlacedPiece[],
+  labels: ReadonlyMap<string, string>,
+  notes: readonly string[],
+  noteHeightMm = 3.5,
+  drawPart: (part: SheetPart) => CutDrawing = (part) => cutDrawing(part, { profiles: nominalProfiles(part), strokes: 'centre-lines', notes: [] }),
+): CutDrawing {
   const byName = new Map(parts.map((p) => [p.name, p]));
   const entities: CutEntity[] = [];
   for (const piece of pieces) {
@@ -20,7 +28,7 @@ export function piecesDrawing(parts: readonly SheetPart[], pieces: readonly Plac
     if (!part) throw new Error(`piecesDrawing: a piece names no part ${piece.part}`);
     const [dx, dy] = piece.offsetMm;
     const move = (pts: readonly Vec2[]): Vec2[] => pts.map(([x, y]) => [x + dx, y + dy]);
-    for (const e of cutDrawing(part, { profiles: nominalProfiles(part), strokes: 'centre-lines', notes: [] }).entities) {
+    for (const e of drawPart(part).entities) {
       if (e.kind === 'polyline') entities.push({ ...e, points: move(e.points) });
       else if (e.kind === 'circle') entities.push({ ...e, cx: e.cx + dx, cy: e.cy + dy });
       else entities.push({ ...e, x: e.x + dx, y: e.y + dy });

@@ -2,26 +2,16 @@ import type { Manifold } from 'manifold-3d';
 import { SpecError } from '../errors.ts';
 import type { PlateDrawing } from '../plate/plateDrawing.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
-import type { RoundedRect, Vec2 } from '../types.ts';
 import { gnomonSolid } from './gnomonSolid.ts';
-import { manifoldEngine } from './manifoldEngine.ts';
+import { manifoldScope } from './manifoldScope.ts';
 import { manifoldFromMesh, meshFromManifold } from './manifoldMesh.ts';
 import type { Mesh } from './mesh.ts';
 import { meshVolumeMm3 } from './meshVolumeMm3.ts';
 import type { PartsPlan } from './partsPlan.ts';
 import { validateMesh } from './validateMesh.ts';
 import type { WedgePart } from './wedgeSolid.ts';
-import { circlePolygon, widenPolyline } from './widenPolyline.ts';
+import { contours, groovedPlate } from './groovedPlate.ts';
 
-/** Sides of each mounting-hole polygon (circumscribing the nominal circle). */
-const HOLE_SEGMENTS = 32;
-/** Corner-arc segments per quarter turn of the plate outline. */
-const CORNER_SEGMENTS = 8;
-/** How far the groove cutters reach above the face, mm (so no coplanar cut). */
-const CUTTER_OVERSHOOT_MM = 1;
-
-/** Outline simplification tolerance for the groove section, mm (5 µm, far below print resolution). */
-const SIMPLIFY_MM = 0.005;
 /** Overlap of the plate into the wedge's seat and lip when they are fused, mm (below any printer's resolution). */
 const FUSE_OVERLAP_MM = 0.01;
 
@@ -44,30 +34,6 @@ export interface BodyPart {
   /** volume of the fused fin alone (from its groove-floor foot to the style), mm³ */
   readonly finVolumeMm3: number;
   readonly volumeMm3: number;
-}
-
-/** Polygons in the mutable tuple form manifold-3d's CrossSection takes. */
-function contours(polys: readonly (readonly Vec2[])[]): [number, number][][] {
-  return polys.map((poly) => poly.map(([x, y]): [number, number] => [x, y]));
-}
-
-/** A rounded rectangle as a counter-clockwise polygon (corner arcs as chords). */
-function roundedRectPolygon(r: RoundedRect): Vec2[] {
-  const x0 = r.cx - r.widthMm / 2;
-  const x1 = r.cx + r.widthMm / 2;
-  const y0 = r.cy - r.heightMm / 2;
-  const y1 = r.cy + r.heightMm / 2;
-  const c = Math.min(r.cornerRadiusMm, r.widthMm / 2, r.heightMm / 2);
-  if (c <= 0) return [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];
-  const out: Vec2[] = [];
-  const corners: [number, number, number][] = [[x1 - c, y0 + c, -90], [x1 - c, y1 - c, 0], [x0 + c, y1 - c, 90], [x0 + c, y0 + c, 180]];
-  for (const [cx, cy, start] of corners) {
-    for (let k = 0; k <= CORNER_SEGMENTS; k++) {
-      const t = ((start + (90 * k) / CORNER_SEGMENTS) * Math.PI) / 180;
-      out.push([cx + c * Math.cos(t), cy + c * Math.sin(t)]);
-    }
-  }
-  return out;
 }
 
 /**
@@ -97,34 +63,9 @@ export async function bodySolid(layout: DialLayout, drawing: PlateDrawing, plan:
     throw new SpecError('parts.grooveDepth', d, `allowed: at most half the plate thickness (${T / 2} mm) so the body keeps its strength`);
   }
   if (plan.body.withWedge && wedge === null) throw new Error('bodySolid: plan.body.withWedge needs the wedge part');
-  const wasm = await manifoldEngine();
-  const { CrossSection, Manifold } = wasm;
-  const live: { delete(): void }[] = [];
-  const keep = <X extends { delete(): void }>(x: X): X => {
-    live.push(x);
-    return x;
-  };
-  try {
-    const outline = roundedRectPolygon(drawing.outline);
-    const holes = drawing.holes.map((c) => circlePolygon([c.cx, c.cy], c.radiusMm, HOLE_SEGMENTS).reverse());
-    const plateSection = keep(new CrossSection(contours([outline, ...holes]), 'Positive'));
-
-    const groovePolys: Vec2[][] = [];
-    for (const line of drawing.lines) {
-      const pts = line.path.closed ? [...line.path.points, line.path.points[0]] : line.path.points;
-      groovePolys.push(...widenPolyline(pts, line.widthMm, false));
-    }
-    for (const block of drawing.text) {
-      for (const s of block.strokes) {
-        const pts = s.closed ? [...s.points, s.points[0]] : s.points;
-        groovePolys.push(...widenPolyline(pts, block.strokeWidthMm, true));
-      }
-    }
-    // Grooves stay inside the plate outline (never cut through its edge).
-    // Simplified by SIMPLIFY_MM: the union of overlapping stroke polygons leaves
-    // corners microns apart, whose slivers float32 corners cannot describe.
-    const grooveSection = keep(keep(CrossSection.intersection(keep(new CrossSection(contours(groovePolys), 'Positive')), plateSection)).simplify(SIMPLIFY_MM));
-
+  return manifoldScope(async (wasm, keep) => {
+    const { CrossSection, Manifold } = wasm;
+    const { plateSection, grooveSection, grooved } = groovedPlate(wasm, keep, drawing, T, d, false);
     const g = plan.gnomon;
     const fin = gnomonSolid({ ...g, heightMm: g.heightMm + d, tabs: [] });
     const dx = layout.plate.substyleX;
@@ -133,9 +74,6 @@ export async function bodySolid(layout: DialLayout, drawing: PlateDrawing, plan:
     const finFoot = keep(new CrossSection(contours([[[dx - g.thicknessMm / 2, dy - g.lengthMm / 2], [dx + g.thicknessMm / 2, dy - g.lengthMm / 2], [dx + g.thicknessMm / 2, dy + g.lengthMm / 2], [dx - g.thicknessMm / 2, dy + g.lengthMm / 2]]])));
     const finOverGrooves = keep(CrossSection.intersection(finFoot, grooveSection)).area();
 
-    const plate = keep(plateSection.extrude(T));
-    const cutters = keep(keep(grooveSection.extrude(d + CUTTER_OVERSHOOT_MM)).translate([0, 0, T - d]));
-    const grooved = keep(Manifold.difference(plate, cutters));
     let body: Manifold = keep(Manifold.union(grooved, keep(manifoldFromMesh(wasm, finMesh))));
     if (plan.body.withWedge && wedge !== null) {
       // Sink the plate FUSE_OVERLAP_MM into the seat and the lip: a definite
@@ -159,7 +97,5 @@ export async function bodySolid(layout: DialLayout, drawing: PlateDrawing, plan:
       finVolumeMm3: meshVolumeMm3(finMesh),
       volumeMm3: meshVolumeMm3(mesh),
     };
-  } finally {
-    for (const x of live.reverse()) x.delete();
-  }
+  });
 }

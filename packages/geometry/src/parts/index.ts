@@ -36,3 +36,25 @@ export {
 } from './materials.ts';
 export { partMass, totalMass, type PartMass } from './partMass.ts';
 export { filamentUse, FILAMENT_DIAMETER_MM, type FilamentUse } from './filamentUse.ts';
+export { plateSolid, type PlatePart } from './plateSolid.ts';
+export { groovedPlate, roundedRectPolygon, type GroovedPlate } from './groovedPlate.ts';
+export { HEAT_SET_INSERTS, INSERT_POCKET_EXTRA_MM, insertForHole, type HeatSetInsert } from './heatSetInsert.ts';
+export { seatPockets, type SeatPocket } from './seatPockets.ts';
+export { wedgeShell, WEDGE_SHELL_DEFAULTS, type WedgeShellOptions, type WedgeShellPart, type SolidBand } from './wedgeShell.ts';
+export {
+  splitForBed,
+  planBedCuts,
+  fitsBed,
+  DOVETAIL_KEY,
+  KEY_PITCH_MM,
+  type BedSize,
+  type DovetailKey,
+  type ForbiddenBands,
+  type CutPlan,
+  type CutPlanResult,
+  type SplitPart,
+  type SplitPiece,
+} from './splitForBed.ts';
+export { printedPlate, printedWedge, fitToBed, type PrintedWedge } from './printedParts.ts';
+export { sheetPlateVolumeMm3 } from './sheetPlateVolume.ts';
+export { manifoldScope, type Keep } from './manifoldScope.ts';

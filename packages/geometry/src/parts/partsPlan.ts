@@ -4,6 +4,8 @@ import type { GnomonSource, PartFile } from '../spec/sections/partsSection.ts';
 import type { Hemisphere } from '../types.ts';
 import type { GnomonOptions } from './gnomonSolid.ts';
 import type { WedgeOptions } from './wedgeSolid.ts';
+import { isFilament, type Filament } from './materials.ts';
+import type { BedSize } from './splitForBed.ts';
 
 /** Processes that cut the plate from sheet (and so, by default, the gnomon too). */
 const CUT_METHODS = new Set(['laser', 'waterjet', 'router']);
@@ -34,6 +36,18 @@ export interface PartsPlan {
   readonly wedge: WedgeOptions;
   /** body.stl: groove depth for lines, numerals and text, mm, and whether the wedge is fused on */
   readonly body: { readonly grooveDepthMm: number; readonly withWedge: boolean };
+  /** printed parts: the bed they must fit, the hollow wedge, insert pockets, the filament */
+  readonly print: {
+    readonly bed: BedSize;
+    /** skin and rib thickness of the printed wedge, mm (0: solid); the hollow wedge is made for process print */
+    readonly shellWallMm: number;
+    readonly ribSpacingMm: number;
+    /** heat-set insert pockets in the seat under the plate holes (process print) */
+    readonly inserts: boolean;
+    /** filament of every printed part */
+    readonly filament: Filament;
+    readonly filamentDiameterMm: number;
+  };
 }
 
 /**
@@ -118,7 +132,11 @@ export function partsPlan(layout: DialLayout): PartsPlan {
       segments: 32,
     },
     arrow: w.arrow ? { lengthMm: 12, shaftWidthMm: 1.6, headWidthMm: 5, headLengthMm: 4, depthMm: 0.6 } : null,
+    backShelfMm: 0,
   };
+  const pr = parts.print;
+  const plateMaterial: string = spec.plate.material;
+  const filament: Filament = pr.filament !== 'auto' ? pr.filament : isFilament(plateMaterial) ? plateMaterial : 'petg';
 
   return {
     files: partFiles(parts.write, method, parts.body),
@@ -131,18 +149,27 @@ export function partsPlan(layout: DialLayout): PartsPlan {
     gnomonCentreYMm: centre,
     wedge,
     body: { grooveDepthMm: parts.grooveDepth, withWedge: parts.bodyWedge },
+    print: {
+      bed: { widthMm: pr.bed.width, depthMm: pr.bed.depth, heightMm: pr.bed.height },
+      shellWallMm: pr.wall,
+      ribSpacingMm: pr.ribSpacing,
+      inserts: pr.inserts,
+      filament,
+      filamentDiameterMm: pr.filamentDiameter,
+    },
   };
 }
 
 /** Fixed file order for "auto" and for explicit lists alike. */
-const ORDER: readonly PartFile[] = ['gnomon.stl', 'gnomon.dxf', 'wedge.stl', 'stand.dxf', 'stand.stl', 'body.stl'];
+const ORDER: readonly PartFile[] = ['gnomon.stl', 'gnomon.dxf', 'plate.stl', 'wedge.stl', 'stand.dxf', 'stand.stl', 'body.stl'];
 
 function partFiles(write: 'auto' | readonly PartFile[], method: string, body: boolean): PartFile[] {
   if (write !== 'auto') return ORDER.filter((f) => write.includes(f));
   // Cut processes cut the gnomon too (from the plate's sheet, or from other
   // stock of its thickness), and a flat-pack stand from sheet instead of the
   // solid wedge no wood or metal shop could make (wedge.stl only on request).
-  const out: PartFile[] = method === 'print' ? ['gnomon.stl', 'wedge.stl'] : ['gnomon.dxf', 'stand.dxf', 'stand.stl'];
+  // Print: the plate is printed too (plate.stl, grooved like body.stl).
+  const out: PartFile[] = method === 'print' ? ['gnomon.stl', 'plate.stl', 'wedge.stl'] : ['gnomon.dxf', 'stand.dxf', 'stand.stl'];
   if (body) out.push('body.stl');
   return ORDER.filter((f) => out.includes(f));
 }

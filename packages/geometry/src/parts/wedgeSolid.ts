@@ -59,6 +59,12 @@ export interface WedgeOptions {
   readonly wallMm: number;
   readonly holes: WedgeHoles;
   readonly arrow: WedgeArrow | null;
+  /**
+   * a flat shelf behind the seat's upper edge, mm (0 for none): the back
+   * moves this far toward +y and its top stays level with the seat's upper
+   * edge, so pockets near that edge keep material behind them
+   */
+  readonly backShelfMm: number;
 }
 
 /** Defaults: a 100 × 150 mm seat, 5 mm base, 2 × 3 mm lip, two countersunk M4 holes, a 12 mm arrow. */
@@ -70,6 +76,7 @@ export const WEDGE_DEFAULTS: WedgeOptions = {
   lipMm: 2,
   lipWidthMm: 3,
   payloadHeightMm: 25,
+  backShelfMm: 0,
   wallMm: 3,
   holes: { count: 2, diameterMm: 4.5, countersink: { diameterMm: 9, angleDeg: 90 }, segments: 32 },
   arrow: { lengthMm: 12, shaftWidthMm: 1.6, headWidthMm: 5, headLengthMm: 4, depthMm: 0.6 },
@@ -133,7 +140,8 @@ export interface WedgePart {
  *   perpendicular to the seat at its lower edge (its overhang filled down to
  *   the toe by a vertical face, so nothing faces downward), the seat of
  *   length seatLength along the slope, and a vertical back at
- *   y = (lipWidth + seatLength)·cos(tilt). At 0° this is a flat slab of
+ *   y = (lipWidth + seatLength)·cos(tilt) (moved back by backShelf, with a
+ *   level shelf at the seat's upper edge, when that is set). At 0° this is a flat slab of
  *   thickness minBase with a lip; at high tilt a tall stand whose toe grows
  *   (payloadHeight·sin(tilt) − lipWidth·cos(tilt) + wall) so that the seat and
  *   everything standing on it lies over the footprint.
@@ -255,10 +263,12 @@ export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'
   const L1: Vec2 = [P0[0] + lipH * nrm[0], P0[1] + lipH * nrm[1]];
   const L2: Vec2 = [F[0] + lipH * nrm[0], F[1] + lipH * nrm[1]];
   const G: Vec2 = [L2[0], base];
-  const yBack = P1[0];
-  const profile: Vec2[] = [[-toe, 0], [yBack, 0], P1, P0, L1, L2, G, [-toe, base]];
+  assertNonNegative('wedge.backShelfMm', o.backShelfMm);
+  const shelf = o.backShelfMm;
+  const yBack = P1[0] + shelf;
+  const profile: Vec2[] = shelf > 0 ? [[-toe, 0], [yBack, 0], [yBack, P1[1]], P1, P0, L1, L2, G, [-toe, base]] : [[-toe, 0], [yBack, 0], P1, P0, L1, L2, G, [-toe, base]];
   const BOTTOM_WALL = 0;
-  const TOE_TOP_WALL = 6;
+  const TOE_TOP_WALL = shelf > 0 ? 7 : 6;
 
   // Hole centres: pairs symmetric about x = 0, outside the arrow.
   const holeXs: number[] = [];

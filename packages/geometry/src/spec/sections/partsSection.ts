@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { boundedNumber } from '../boundedNumber.ts';
 import { SpecError, formatValue } from '../../errors.ts';
+import { FILAMENTS } from '../../parts/materials.ts';
 
 /**
  * The `parts:` section of the dial spec: which 3D parts and gnomon outline
@@ -11,7 +12,7 @@ import { SpecError, formatValue } from '../../errors.ts';
  */
 
 /** File names a spec may list in `parts.write`. */
-export const PART_FILES = ['gnomon.stl', 'gnomon.dxf', 'wedge.stl', 'stand.dxf', 'stand.stl', 'body.stl'] as const;
+export const PART_FILES = ['gnomon.stl', 'gnomon.dxf', 'plate.stl', 'wedge.stl', 'stand.dxf', 'stand.stl', 'body.stl'] as const;
 export type PartFile = (typeof PART_FILES)[number];
 
 /** Where the gnomon comes from: cut from the plate's own sheet, or made separately (printed or other stock). */
@@ -32,7 +33,7 @@ export const partsSection = z
       .refine((v) => v === 'auto' || new Set(v).size === v.length, { error: 'allowed: each file name at most once' })
       .default('auto')
       .describe(
-        'part files to write: "auto" (print: gnomon.stl + wedge.stl; laser, waterjet, router: gnomon.dxf + the flat-pack stand, stand.dxf to cut and stand.stl as assembled; body.stl too with parts.body: true) or a list of gnomon.stl, gnomon.dxf, wedge.stl, stand.dxf, stand.stl, body.stl',
+        'part files to write: "auto" (print: gnomon.stl + plate.stl + wedge.stl; laser, waterjet, router: gnomon.dxf + the flat-pack stand, stand.dxf to cut and stand.stl as assembled; body.stl too with parts.body: true) or a list of gnomon.stl, gnomon.dxf, plate.stl, wedge.stl, stand.dxf, stand.stl, body.stl',
       ),
     body: flag.default(false).describe('with write "auto", also write body.stl: the whole dial printed in one piece'),
     gnomonFrom: z
@@ -60,6 +61,29 @@ export const partsSection = z
         holeDiameter: length(1, 30).default(4.5).describe('mounting hole bore, mm (4.5 clears an M4 screw)'),
         countersink: length(0, 60).default(9).describe('countersink diameter at the top of each hole, 90° cone, mm; 0 for a plain hole'),
         arrow: flag.default(true).describe('recess a meridian arrow in the toe, pointing to the elevated pole (true north in the north, true south in the south)'),
+      })
+      .prefault({}),
+    print: z
+      .strictObject({
+        bed: z
+          .strictObject({
+            width: length(50, 2000).default(220).describe('print bed width (x), mm'),
+            depth: length(50, 2000).default(220).describe('print bed depth (y), mm'),
+            height: length(20, 2000).default(250).describe('largest print height (z), mm'),
+          })
+          .prefault({})
+          .describe('print bed W × D × H, mm: a printed part larger than this is split into pieces that fit, joined by dovetail keys'),
+        wall: length(0, 50)
+          .refine((v) => v === 0 || v >= 0.8, { error: 'allowed: 0 (a solid wedge) or a number from 0.8 mm to 50 mm (two 0.4 mm extrusion widths at least)' })
+          .default(3)
+          .describe('wall thickness of the hollow printed wedge (outer skin and inner ribs), mm; 0 prints it solid'),
+        ribSpacing: length(10, 500).default(40).describe('largest gap between the inner ribs of the hollow wedge, mm (the seat skin bridges it)'),
+        inserts: flag.default(true).describe('pockets for heat-set threaded inserts in the printed wedge seat, under the plate holes'),
+        filament: z
+          .enum(['auto', ...FILAMENTS], { error: `allowed: "auto", ${FILAMENTS.map((f) => JSON.stringify(f)).join(', ')}` })
+          .default('auto')
+          .describe('filament of the printed parts: auto (plate.material when it is pla or petg, else petg), pla, petg or asa'),
+        filamentDiameter: length(1, 3.5).default(1.75).describe('filament diameter, mm (1.75 or 2.85), for the filament length in report.json'),
       })
       .prefault({}),
   })
