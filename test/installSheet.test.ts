@@ -23,7 +23,12 @@ describe('install.md', () => {
       const shown = Math.abs(d).toFixed(1);
       const needle = d > 0 ? 'east' : 'west';
       const turn = d > 0 ? 'west' : 'east';
-      expect(md).toContain(`magnetic north lies ${shown}° ${needle} of true north: turn the dial ${shown}° ${turn} of the compass's north to face true north`);
+      // North: the raised end points to true north; south: to true south (the compass's south end is turned by the same declination).
+      expect(md).toContain(
+        site.latitude >= 0
+          ? `magnetic north lies ${shown}° ${needle} of true north: turn the dial ${shown}° ${turn} of the compass's north to face true north`
+          : `magnetic north lies ${shown}° ${needle} of true north, so the compass's south end points ${shown}° ${turn} of true south: turn the dial until its raised end points ${shown}° ${needle} of the compass's south, at true south`,
+      );
       signs.add(Math.sign(d));
       console.log(`${site.timezone}: WMM2025 declination ${d.toFixed(2)}°, sheet says ${shown}° ${needle}`);
     }

@@ -3,9 +3,8 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { parseSpec } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { parseSpec } from '@umbrafab/geometry';
+import { buildFiles, readSpecFile } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');

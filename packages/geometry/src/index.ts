@@ -42,3 +42,4 @@ export * from './spec/sections/standSection.ts';
 export * from './spec/materials.ts';
 export * from './planar/index.ts';
 export * from './spec/sections/faceSection.ts';
+export * from './install/assemblyGuide.ts';

@@ -38,12 +38,32 @@ export function toInstallMd(sheet: InstallSheet): string {
   for (const c of sheet.cautions) out.push(`- ${c}`);
   out.push('');
 
+  const a = sheet.assembly;
+  out.push(`## Parts and weights (on its ${a.carrier})`, '');
+  out.push('| part | material | pieces | each (kg) | together (kg) |', '|---|---|---|---|---|');
+  for (const w of a.weights.parts) out.push(`| ${w.part} | ${w.material} | ${w.quantity} | ${fx(w.massKgEach, 2)} | ${fx(w.massKg, 2)} |`);
+  out.push(`| **total to lift and ship** | | | | **${fx(a.weights.totalKg, 2)}** |`, '');
+  out.push(`Heaviest piece ${fx(a.weights.heaviestPieceKg, 2)} kg; ${a.weights.note}.`, '');
+  out.push('## Fasteners', '');
+  if (a.fasteners.length === 0) out.push('None listed.', '');
+  else {
+    out.push('| for | item | size | length (mm) | count | countersink |', '|---|---|---|---|---|---|');
+    for (const f of a.fasteners) out.push(`| ${f.use} | ${f.item} | ${f.size} | ${f.lengthMm === null ? '–' : fx(f.lengthMm, 0)} | ${f.count} | ${f.countersink} |`);
+    out.push('');
+  }
+  out.push('## Assembly', '');
+  a.steps.forEach((st, i) => out.push(`${i + 1}. **${st.title}.** ${st.text}`));
+  out.push('');
+  if (a.nodus !== null) out.push(`The nodus: ${a.nodus}`, '');
+  for (const c of a.cautions) out.push(`- ${c}`);
+  out.push('');
+
   out.push('## 1. Tilt', '');
   out.push(`- Tilt the plate **${fx(sheet.tilt.angleDeg, 1)}°** from the horizontal (equal to the latitude); check with a digital level laid along the style.`);
   out.push(`- Over the plate's length of ${fx(sheet.tilt.plateLengthMm, 0)} mm the raised end stands **${fx(sheet.tilt.riseMm, 0)} mm** above the lower end (horizontal run ${fx(sheet.tilt.runMm, 0)} mm).`);
   out.push(`- The raised end (the end away from the numerals) points to the geographic ${pole}; the face looks up toward the celestial equator.`, '');
 
-  out.push('## 2. True north', '');
+  out.push(`## 2. True ${pole}`, '');
   const d = sheet.trueNorth.magneticDeclinationDeg;
   if (d === null) {
     out.push(`- Compass: ${sheet.trueNorth.sentence}.`);
@@ -78,6 +98,9 @@ export function toInstallMd(sheet: InstallSheet): string {
     out.push(`| ${a.date} | ${signed(a.minutes, 1)} | ${b.date} | ${signed(b.minutes, 1)} |`);
   }
   out.push('');
+
+  for (const line of a.reading) out.push(`- ${line}`);
+  if (a.reading.length > 0) out.push('');
 
   out.push('## 5. Which marks the Sun reaches here', '');
   const never = sheet.reach.filter((r) => !r.reached);

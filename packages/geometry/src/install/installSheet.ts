@@ -1,7 +1,8 @@
 import { isSpecError, SpecError } from '../errors.ts';
+import { assemblyGuide, type AssemblyGuide } from './assemblyGuide.ts';
 import { DEG } from '../guards.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
-import { describeDeclination } from '../sun/describeDeclination.ts';
+import { describeMeridianTurn } from '../sun/describeMeridianTurn.ts';
 import { equationOfTimeMin } from '../sun/equationOfTimeMin.ts';
 import { localApparentNoon } from '../sun/localApparentNoon.ts';
 import { formatIsoDate, MS_PER_DAY, parseLocalDate, dateToUtcMidnightMs } from '../sun/localDate.ts';
@@ -65,6 +66,8 @@ export interface InstallSheet {
   };
   readonly reach: readonly MarkReach[];
   readonly cautions: readonly string[];
+  /** putting the dial together: steps, nodus, reading, weights, fasteners (assemblyGuide) */
+  readonly assembly: AssemblyGuide;
 }
 
 /** The cautions printed on every sheet (common practice for outdoor instruments). */
@@ -118,7 +121,7 @@ export function installSheet(layout: DialLayout): InstallSheet {
     sentence = `no magnetic declination: ${date} is outside WMM2025's validity (2024-11-13 to 2029-11-13); use the noon table below, or a newer World Magnetic Model`;
   } else {
     decl = magneticDeclinationDeg({ latitudeDeg: lat, longitudeDeg: lon, date: at });
-    sentence = describeDeclination(decl);
+    sentence = describeMeridianTurn(decl, layout.hemisphere);
   }
 
   const site = { latitudeDeg: lat, longitudeDeg: lon, timezone: spec.site.timezone };
@@ -176,5 +179,6 @@ export function installSheet(layout: DialLayout): InstallSheet {
     },
     reach,
     cautions: INSTALL_CAUTIONS,
+    assembly: assemblyGuide(layout),
   };
 }

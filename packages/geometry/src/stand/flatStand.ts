@@ -159,7 +159,8 @@ export function flatStand(layout: DialLayout, options: Partial<FlatStandOptions>
   const topAt = (u: number) => (u <= uA ? vA - T : vA + (u - uA) * Math.tan(phi));
   const bandTop = Math.min(topAt(us - slotHalf), roomInRun ? Infinity : vA - T);
   const H = bandTop - T;
-  const hs = H / 2; // the cross member's height; its tabs are half that
+  // The cross member's height (its tabs are half that): half the cheek's there, more when a router's reliefs need the room.
+  const hs = Math.max(H / 2, Math.min(z.reliefRoomMm, 0.8 * H));
   const vsc = T + H / 2; // slot centre height
   const crossTab = hs / 2;
   const crossSlot: NominalSlot = { centre: [us, vsc], axis: [0, 1], lengthMm: crossTab + 2 * c, widthMm: T + 2 * c };

@@ -3,6 +3,8 @@ import { DEG } from '../guards.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import { METRIC_SIZES, screwForHole, type MetricSize } from './metricFasteners.ts';
 import type { StandDimensions } from './standTypes.ts';
+import { RELIEF_OVERSIZE_MM } from '../sheet/cornerRelief.ts';
+import { reliefToolRadius } from '../sheet/sheetParts.ts';
 
 /** Least width of a seat rail along the slope, mm (room for a slot and a hole). */
 export const RAIL_MIN_WIDTH_MM = 16;
@@ -31,6 +33,8 @@ export interface StandSizing extends StandDimensions {
   readonly anchorDiameterMm: number;
   /** how far a plate screw, its washer and nut reach below a seat rail, mm */
   readonly screwBelowRailMm: number;
+  /** least width of a tabbed edge for a tab of half its width and the tool's root reliefs beside it, mm (0 without relief) */
+  readonly reliefRoomMm: number;
 }
 
 /**
@@ -79,7 +83,11 @@ export function standDimensions(layout: DialLayout): StandSizing {
 
   // Seat rails: under every hole row, plus the plate's two ends.
   const inset = spec.holes.inset;
-  const b = Math.max(2 * inset, RAIL_MIN_WIDTH_MM, holeDia + 10);
+  // Each tab is half its rail's (or foot's) width, centred: the quarter left at
+  // each side must hold a tab-root relief (2 ρ) for a router's tool.
+  const tool = reliefToolRadius(spec);
+  const reliefRoom = tool > 0 ? 4 * (2 * (tool + RELIEF_OVERSIZE_MM) + 0.5) : 0;
+  const b = Math.max(2 * inset, RAIL_MIN_WIDTH_MM, holeDia + 10, reliefRoom);
   const rows = [...new Set(holes.map((h) => h.cy))].sort((p, q) => p - q);
   const rails: { lowerEdgeMm: number; widthMm: number }[] = [{ lowerEdgeMm: 0, widthMm: b }];
   for (const y of rows) {
@@ -105,7 +113,7 @@ export function standDimensions(layout: DialLayout): StandSizing {
 
   const d = st.anchorDiameter;
   const aWasher = anchor?.washerOdMm ?? 0;
-  const fb = Math.max(FOOT_MIN_WIDTH_MM, 4 * d);
+  const fb = Math.max(FOOT_MIN_WIDTH_MM, 4 * d, reliefRoom);
   const anchorOffsetMm = anchor ? xc + T / 2 + Math.max(aWasher / 2, d) + SPANNER_ROOM_MM : 0;
   const footLengthMm = anchor ? 2 * (anchorOffsetMm + Math.max(1.5 * d, aWasher / 2 + SPANNER_ROOM_MM)) : 2 * (xc + T / 2 + 10);
 
@@ -136,5 +144,6 @@ export function standDimensions(layout: DialLayout): StandSizing {
     anchor,
     anchorDiameterMm: d,
     screwBelowRailMm,
+    reliefRoomMm: reliefRoom,
   };
 }

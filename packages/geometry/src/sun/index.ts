@@ -13,3 +13,4 @@ export * from './describeDeclination.ts';
 export * from './sunAngularRadiusRad.ts';
 export * from './sunTrack.ts';
 export * from './sunAtTime.ts';
+export * from './describeMeridianTurn.ts';
