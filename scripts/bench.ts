@@ -13,7 +13,7 @@
  *   npx -y pnpm@10.34.9 bench            (BENCH_RUNS=N for more runs)
  */
 import { spawn, spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { cpus, loadavg, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 
@@ -32,22 +32,22 @@ interface Sample {
 }
 
 /** One fresh Node process; the preloaded probe writes its CPU time and peak RSS (workers included) at exit. */
-function measure(args: readonly string[]): Sample {
+function measure(args: readonly string[], status = 0): Sample {
   const out = join(work, 'usage.json');
   rmSync(out, { force: true });
   const t0 = process.hrtime.bigint();
   const r = spawnSync(process.execPath, ['--require', PROBE, ...args], { encoding: 'utf8', cwd: ROOT, env: { ...process.env, UMBRAFAB_BENCH_USAGE: out } });
   const ms = Number(process.hrtime.bigint() - t0) / 1e6;
-  if (r.status !== 0) throw new Error(`bench: node ${args.join(' ')} exited ${r.status}: ${r.stderr}`);
+  if (r.status !== status) throw new Error(`bench: node ${args.join(' ')} exited ${r.status}: ${r.stderr}`);
   const u = JSON.parse(readFileSync(out, 'utf8')) as { cpuMs: number; maxRssKb: number };
   return { ms, ...u };
 }
 
 const med = (xs: readonly number[]): number => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
-function run(args: readonly string[], runs = RUNS): Sample {
-  measure(args); // warm the file cache
-  const s = Array.from({ length: runs }, () => measure(args));
+function run(args: readonly string[], runs = RUNS, status = 0): Sample {
+  measure(args, status); // warm the file cache
+  const s = Array.from({ length: runs }, () => measure(args, status));
   return { ms: med(s.map((x) => x.ms)), cpuMs: med(s.map((x) => x.cpuMs)), maxRssKb: med(s.map((x) => x.maxRssKb)) };
 }
 
@@ -58,6 +58,16 @@ const build = run([BIN, 'build', DEMO, '--out', join(work, 'demo'), '--force']);
 const check = run([BIN, 'check', DEMO]);
 const batch = run([BIN, 'batch', DEMO, '--latitudes', lats, '--out', join(work, 'batch'), '--force'], Math.min(RUNS, 3));
 
+// Hostile inputs: a 40k-key spec (the reader counts nodes from the lexer and refuses it), /dev/zero (reading
+// stops at the 1 MiB cap), and a 3000 x 3000 mm plate at 20 px/mm (each PNG held to 8 million pixels).
+const keysSpec = join(work, 'keys40k.yaml');
+writeFileSync(keysSpec, [readFileSync(DEMO, 'utf8'), 'junk:', ...Array.from({ length: 40_000 }, (_, i) => `  k${i}: ${i}`)].join('\n') + '\n');
+const bigSpec = join(work, 'plate3000.yaml');
+writeFileSync(bigSpec, readFileSync(DEMO, 'utf8').replace(/^plate:\n/m, 'plate:\n  width: 3000\n  length: 3000\n') + 'pictures:\n  pxPerMm: 20\n');
+const keys = run([BIN, 'build', keysSpec, '--out', join(work, 'keys')], RUNS, 1);
+const zero = run([BIN, 'build', '/dev/zero', '--out', join(work, 'zero')], RUNS, 1);
+const big = run([BIN, 'build', bigSpec, '--out', join(work, 'big'), '--force'], 1);
+
 // Wall-time ratios are the targets; CPU-time ratios beside them hold up
 // better when other work shares the cores (worker threads count as CPU).
 const x = (s: Sample, of: Sample) => `${(s.ms / of.ms).toFixed(2)} × (CPU ${(s.cpuMs / of.cpuMs).toFixed(2)} ×)`;
@@ -67,6 +77,9 @@ const rows: [string, Sample, string, string][] = [
   ['`umbrafab build` of fixtures/demo.yaml', build, x(build, floor), '≤ 6 ×, ≤ 200 MiB'],
   ['`umbrafab check` of fixtures/demo.yaml', check, x(check, floor), '≤ 8 ×'],
   ['`umbrafab batch`, 50 latitudes (20°–59.2°)', batch, `${x(batch, floor)}; ${x(batch, build)} build`, '≤ 10 × build'],
+  ['a 629 KB spec with 40k keys (refused, exit 1)', keys, x(keys, floor), '< 1 s past start-up'],
+  ['`/dev/zero` as the spec (refused at 1 MiB, exit 1)', zero, x(zero, floor), '< 2 s, < 300 MiB'],
+  ['a 3000 × 3000 mm plate at 20 px/mm (1 run)', big, x(big, floor), '≤ 512 MiB'],
 ];
 
 console.log(`umbrafab bench — ${cpus()[0]?.model ?? 'cpu'}, ${cpus().length} cores, Node ${process.version}, median of ${RUNS} fresh processes (batch: ${Math.min(RUNS, 3)}), load average ${loadAtStart.toFixed(1)} at the start\n`);

@@ -1,13 +1,15 @@
 import { execFileSync } from 'node:child_process';
-import { mkdirSync, mkdtempSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import fc from 'fast-check';
-import { stringify } from 'yaml';
+import MarkdownIt from 'markdown-it';
+import { parse as parseYaml, stringify } from 'yaml';
 import { afterAll, describe, expect, it } from 'vitest';
 import { isSpecError, parseSpec } from '@umbrafab/geometry';
-import { buildFiles } from '@umbrafab/cli';
+import { buildFiles, parseSpecText } from '@umbrafab/cli';
+import { escapeMarkdownText } from '@umbrafab/fabricate';
 import { runCli } from './helpers/runCli.ts';
 
 /**
@@ -143,3 +145,79 @@ function setPath(obj: Record<string, any>, path: string, value: unknown): void {
   for (const k of keys.slice(0, -1)) node = node[k] = node[k] && typeof node[k] === 'object' ? node[k] : {};
   node[keys.at(-1)!] = value;
 }
+
+/**
+ * Hostile spec texts, the shapes a probe of the reader used: a huge number of
+ * keys, repeated keys, alias chains (bombs), deep nests, control characters
+ * and markup in the free-text fields, a byte order mark, arbitrary bytes.
+ * Each is read to a spec or refused with a SpecError (exit 1, no stack trace).
+ */
+describe('fuzzed hostile spec texts', () => {
+  const demoText = readFileSync(fileURLToPath(new URL('../fixtures/demo.yaml', import.meta.url)), 'utf8');
+  const HOSTILE_RUNS = Math.max(20, Math.round(BAD_RUNS / 5));
+  const controlText = fc.string({ unit: fc.oneof(fc.constantFrom('\u0000', '\u0007', '\u000b', '\u001b', '\n', '\t', '\u007f', '\u0085', '\u202e', '\ud800', '\uffff'), fc.constantFrom('<', '>', '&', '[', ']', '(', ')', '|', '#', '*', '_', '`', '\\', 'a', ' ')), maxLength: 20 });
+  const textArb = fc.oneof(
+    fc.string({ unit: 'binary', maxLength: 400 }),
+    fc.record({ n: fc.integer({ min: 0, max: 20_000 }), dup: fc.boolean() }).map(({ n, dup }) => {
+      const lines = [demoText, 'junk:'];
+      for (let i = 0; i < n; i++) lines.push(`  k${i}: ${i}`);
+      if (dup) lines.push('  k0: again');
+      return lines.join('\n');
+    }),
+    fc.record({ depth: fc.integer({ min: 1, max: 9 }), width: fc.integer({ min: 1, max: 12 }) }).map(({ depth, width }) => {
+      const lines = [`a0: &a0 [${Array(width).fill('x').join(', ')}]`];
+      for (let d = 1; d < depth; d++) lines.push(`a${d}: &a${d} [${Array(width).fill(`*a${d - 1}`).join(', ')}]`);
+      return lines.join('\n');
+    }),
+    fc.record({ depth: fc.integer({ min: 1, max: 6000 }), open: fc.constantFrom('[', '{a: ', '- ') }).map(({ depth, open }) => (open === '- ' ? Array.from({ length: Math.min(depth, 300) }, (_, i) => `${' '.repeat(i * 2)}- x`).join('\n') : `x: ${open.repeat(depth)}`)),
+    fc.record({ name: controlText, place: controlText, label: controlText }).map(({ name, place, label }) =>
+      stringify({ ...(parseYaml(demoText) as object), name, site: { ...(parseYaml(demoText) as { site: object }).site, place }, gnomon: { nodus: true }, calendar: { year: 2027, dates: [{ date: '06-14', label }] } }),
+    ),
+    fc.constant('\uFEFF' + demoText),
+    fc.jsonValue({ maxDepth: 4 }).map((v) => JSON.stringify(v)),
+  );
+
+  it(`every hostile text is read to a spec or refused with a SpecError; a refused file exits 1 without a stack trace (${HOSTILE_RUNS} cases)`, async () => {
+    const specFile = join(work, 'hostile.yaml');
+    const out = join(work, 'hostile-out');
+    let read = 0;
+    let refused = 0;
+    await fc.assert(
+      fc.asyncProperty(textArb, async (text) => {
+        try {
+          parseSpec(parseSpecText(text));
+          read++;
+          return;
+        } catch (e) {
+          if (!isSpecError(e)) throw e;
+        }
+        refused++;
+        writeFileSync(specFile, text);
+        const r = await runCli(['build', specFile, '--out', out]);
+        expect(r.code).toBe(1);
+        expect(r.err).not.toMatch(/\n\s+at |internal error/);
+        expect(() => readdirSync(out)).toThrow();
+      }),
+      { numRuns: HOSTILE_RUNS, seed: SEED + 2 },
+    );
+    console.log(`fuzz: ${HOSTILE_RUNS} hostile texts, ${read} read, ${refused} refused with exit 1`);
+    expect(refused).toBeGreaterThan(HOSTILE_RUNS / 2);
+  }, 600_000);
+
+  it(`free text through escapeMarkdownText renders back as the same text, never as HTML, a link or a new block (${HOSTILE_RUNS * 5} cases)`, () => {
+    // markdown-it 15 in CommonMark mode with raw HTML on (GFM's www./http:// autolinking is a renderer option, off here).
+    const md = new MarkdownIt({ html: true, linkify: false });
+    fc.assert(
+      fc.property(fc.oneof(controlText, fc.string({ unit: 'grapheme-ascii', maxLength: 40 }), fc.string({ unit: 'binary', maxLength: 40 })), (s) => {
+        const html = md.render(`# Installing "${escapeMarkdownText(s)}"\n\nSite: ${escapeMarkdownText(s)}, 50° N\n`);
+        expect(html.match(/<[a-z][a-z0-9]*/g)).toEqual(['<h1', '<p']);
+        const shown = /<h1>Installing &quot;([\s\S]*)&quot;<\/h1>/.exec(html)?.[1] ?? '';
+        const decoded = shown.replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&amp;/g, '&');
+        // markdown-it replaces NUL by U+FFFD (CommonMark §2.3); escapeMarkdownText turns every control character to a space first.
+        const expected = s.replace(/[\u0000-\u001f\u007f-\u009f\u2028\u2029]+/g, ' ').trim().replace(/\u0000/g, '\ufffd');
+        expect(decoded).toBe(expected);
+      }),
+      { numRuns: HOSTILE_RUNS * 5, seed: SEED + 3 },
+    );
+  });
+});

@@ -45,6 +45,8 @@ export type Hemisphere = 'north' | 'south';
 /** One line on the face: the report.json contract of docs/design.md §6. */
 export interface Mark {
   readonly label: string;
+  /** The clock reading the line stands for, minutes after midnight (495 for the 08:15 line). */
+  readonly minutes: number;
   readonly kind: MarkKind;
   /** Hour angle of the sun when the shadow lies on this line, degrees (0 at apparent noon, negative mornings). */
   readonly hourAngleDeg: number;

@@ -104,7 +104,8 @@ export const batchCommand: CommandModule = {
       return {
         latitudeDeg: b.lat,
         wedgeAngleDeg: round(wedge?.angleDeg ?? Math.abs(b.lat), 3),
-        wedgeFile: mine.get('wedge.stl') ?? mine.get('stand.stl') ?? mine.get('stand.dxf') ?? null,
+        // A printed wedge split to fit the bed: its first piece names the set (wedge-1-of-2-S30.stl, …).
+        wedgeFile: mine.get('wedge.stl') ?? [...mine.entries()].find(([name]) => /^wedge-1-of-\d+\.stl$/.test(name))?.[1] ?? mine.get('stand.stl') ?? mine.get('stand.dxf') ?? null,
         plateFile: [...mine.entries()].find(([name]) => PLATE_DXF.test(name))?.[1] ?? '',
         files: [...mine.values()],
         riseMm: round(b.plateLengthMm * Math.sin((Math.abs(b.lat) * Math.PI) / 180), 1),

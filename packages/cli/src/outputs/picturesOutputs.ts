@@ -99,7 +99,11 @@ async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[];
   const picture = viewAssembly(layout, drawing, sun, { viewAzimuthDeg: pics.viewAzimuth, viewElevationDeg: pics.viewElevation });
   const assemblySvg = toAssemblySvg(picture, { title: `${spec.name} on its ${Math.abs(spec.site.latitude)}° wedge, ${date}, shadow on ${pics.time}` });
   const assemblyFit = fitPixelBudget(picture.widthMm, picture.heightMm, ppm);
-  const [previewPng, assemblyPng] = await Promise.all([previewPngJob, toPngAsync(assemblySvg, { pxPerMm: assemblyFit.pxPerMm })]);
+  // Two pictures at the full pixel budget render one after the other, so only one large pixel buffer is alive at a time.
+  const large = (widthMm: number, heightMm: number, pxPerMm: number) => widthMm * heightMm * pxPerMm * pxPerMm > MAX_PICTURE_PIXELS / 2;
+  const oneAtATime = large(svgWidthMm(preview), svgHeightMm(preview), previewFit.pxPerMm) && large(picture.widthMm, picture.heightMm, assemblyFit.pxPerMm);
+  const assemblyPngJob = oneAtATime ? previewPngJob.then(() => toPngAsync(assemblySvg, { pxPerMm: assemblyFit.pxPerMm })) : toPngAsync(assemblySvg, { pxPerMm: assemblyFit.pxPerMm });
+  const [previewPng, assemblyPng] = await Promise.all([previewPngJob, assemblyPngJob]);
   const lowered = [
     ...(previewFit.lowered ? [`preview.png at ${previewFit.pxPerMm} px/mm`] : []),
     ...(assemblyFit.lowered ? [`assembly.png at ${assemblyFit.pxPerMm} px/mm`] : []),

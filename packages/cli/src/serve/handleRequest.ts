@@ -14,7 +14,7 @@ import { previewSvgOptions } from '../outputs/plateOutputs.ts';
 import { BodyAbortedError, MAX_BODY_BYTES, readJsonBody } from './readJsonBody.ts';
 import { sceneMeshes } from './sceneMeshes.ts';
 import { specFields } from './specFields.ts';
-import { parseSpecText } from '../readSpec.ts';
+import { parseSpecText, readSpecText } from '../readSpec.ts';
 import { starterSpecYaml } from '../starterSpec.ts';
 import { derivedValues, type DerivedValue } from './derivedValues.ts';
 import { describeChange, editSpecText } from './editSpecText.ts';
@@ -218,7 +218,7 @@ function save(ctx: ServeContext, body: unknown) {
   const fields = fieldsOf(body, ['fields', 'preview']);
   if (ctx.specPath === null) throw new HttpError(409, 'save spec: no spec file was named when the server started; allowed: start it as `umbrafab serve my-dial.yaml` to save to that file');
   parseSpec(formValuesToSpec(fields)); // refuse to save a spec the CLI would refuse
-  const current = existsSync(ctx.specPath) ? readFileSync(ctx.specPath, 'utf8') : starterSpecYaml(ctx.starterYear);
+  const current = existsSync(ctx.specPath) ? readSpecText(ctx.specPath) : starterSpecYaml(ctx.starterYear); // capped, like every spec read
   const raw = parseSpecText(current, ctx.specLabel ?? 'spec') ?? {};
   const edit = editSpecText(current, raw, fields);
   const changes = edit.changes.map((c) => ({ ...c, text: describeChange(c) }));

@@ -1,7 +1,7 @@
 import {
   DEG,
   SpecError,
-  parseClockMinutes,
+  parseClock,
   parseLocalDate,
   sunAtClock,
   sunAtHourAngle,
@@ -60,7 +60,7 @@ const tracks = new Map<string, SunTrack>();
  */
 export function sunView(layout: DialLayout, query: SunQuery): SunView {
   const day = parseLocalDate(query.date, 'date');
-  const minutes = parseClockMinutes(query.time, 'time');
+  const minutes = parseClock('time', query.time, { seconds: true });
   if (query.kind !== 'apparent' && query.kind !== 'clock') throw new SpecError('time kind', query.kind, 'allowed: "apparent" or "clock"');
   const { site } = layout.spec;
   const track = trackFor(site.latitude, site.longitude, site.timezone, day.year);

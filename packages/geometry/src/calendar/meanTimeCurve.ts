@@ -2,7 +2,8 @@ import { SpecError } from '../errors.ts';
 import { assertPositive, assertRange } from '../guards.ts';
 import { equationOfTimeMin } from '../sun/equationOfTimeMin.ts';
 import { longitudeDifferenceDeg } from '../sun/longitudeCorrectionMin.ts';
-import { formatIsoDate, MS_PER_DAY, parseClockMinutes } from '../sun/localDate.ts';
+import { parseClock } from '../spec/parseClock.ts';
+import { formatIsoDate, MS_PER_DAY } from '../sun/localDate.ts';
 import { sunDeclinationRad } from '../sun/sunDeclinationRad.ts';
 import { assertHemisphere, declinationTowardPoleRad } from './declinationTowardPoleRad.ts';
 import type { FacePoint, FacePolyline, Hemisphere, StyleEdge } from './types.ts';
@@ -81,7 +82,7 @@ export const MEAN_TIME_CURVE_DEFAULTS = { thicknessMm: 0, stepDays: 1, maxHourAn
  */
 export function meanTimeCurve(options: MeanTimeCurveOptions): MeanTimeCurve {
   const o = { ...MEAN_TIME_CURVE_DEFAULTS, ...options };
-  const clockMin = parseClockMinutes(o.clockTime, 'clockTime');
+  const clockMin = parseClock('clockTime', o.clockTime, { seconds: true });
   if (!Number.isInteger(o.year) || o.year < 1700 || o.year > 2300) {
     throw new SpecError('year', o.year, 'allowed: an integer year from 1700 to 2300');
   }

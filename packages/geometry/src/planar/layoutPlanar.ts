@@ -29,6 +29,8 @@ const DATE_LINE_STEP_DEG = 0.25;
 /** One line on a planar face, face coordinates of the plate frame (see `plateFrame`), mm. */
 export interface PlanarMark {
   readonly label: string;
+  /** the clock reading the line stands for, minutes after midnight */
+  readonly minutes: number;
   readonly kind: MarkKind;
   /** hour angle at which the shadow lies on this line, degrees */
   readonly hourAngleDeg: number;
@@ -219,7 +221,7 @@ export function layoutPlanar(spec: DialSpec): PlanarLayout {
         a = [px + dx * rIn, py + dy * rIn];
         b = [px + dx * R, py + dy * R];
       }
-      marks.push({ label, kind, hourAngleDeg: Hdeg, edge, a, b, widthMm: w });
+      marks.push({ label, minutes: m, kind, hourAngleDeg: Hdeg, edge, a, b, widthMm: w });
     }
   }
   if (marks.length === 0) {
@@ -381,11 +383,11 @@ function fitNumerals(spec: DialSpec, marks: readonly PlanarMark[], parallel: boo
 
 function hourNumerals(spec: DialSpec, marks: readonly PlanarMark[], heightMm: number, parallel: boolean): TextBlock[] {
   const stroke = Math.min(spec.marks.hour.width, Math.max(0.2, heightMm / 12));
-  const byLabel = new Map<string, PlanarMark[]>();
-  for (const m of marks) if (m.kind === 'hour') byLabel.set(m.label, [...(byLabel.get(m.label) ?? []), m]);
+  const byMinutes = new Map<number, PlanarMark[]>();
+  for (const m of marks) if (m.kind === 'hour') byMinutes.set(m.minutes, [...(byMinutes.get(m.minutes) ?? []), m]);
   const out: TextBlock[] = [];
-  for (const [label, ms] of byLabel) {
-    const text = numeralText(Number(label.slice(0, 2)), spec.dial.numerals);
+  for (const [minutes, ms] of byMinutes) {
+    const text = numeralText(Math.floor(minutes / 60), spec.dial.numerals);
     const bx = ms.reduce((s, m) => s + m.b[0], 0) / ms.length;
     const by = ms.reduce((s, m) => s + m.b[1], 0) / ms.length;
     const ax = ms.reduce((s, m) => s + m.a[0], 0) / ms.length;
@@ -421,9 +423,9 @@ function planarCurves(spec: DialSpec, face: PlanarFace, model: PlanarGnomon, gno
     if (paths.length) out.push({ label: e.label, kind: 'date', widthMm: width, paths });
   }
   if (spec.dial.meanTimeCurves) {
-    const whole = [...new Set(marks.filter((m) => m.kind === 'hour').map((m) => m.label))];
-    for (const label of whole) {
-      const minutes = parseClock('marks.label', label);
+    const whole = [...new Set(marks.filter((m) => m.kind === 'hour').map((m) => m.minutes))];
+    for (const minutes of whole) {
+      const label = formatClock(minutes);
       const runs = planarMeanTimeCurve(face, model, { clockMinutes: minutes, year: spec.calendar.year, shiftDeg: spec.site.longitude - time.standardMeridianDeg, standardMeridianDeg: time.standardMeridianDeg, stepDays: 2, alongStyleMm: along });
       const paths = runs.flatMap((r) => clip(r.points));
       if (paths.length) out.push({ label: `${label} mean time`, kind: 'meanTime', widthMm: width, paths });

@@ -1,7 +1,8 @@
 import { Body, Equator, Horizon, MakeTime, Observer } from 'astronomy-engine';
 import { SpecError } from '../errors.ts';
 import { assertRange } from '../guards.ts';
-import { dateToUtcMidnightMs, parseClockMinutes, parseLocalDate } from '../sun/localDate.ts';
+import { parseClock } from '../spec/parseClock.ts';
+import { dateToUtcMidnightMs, parseLocalDate } from '../sun/localDate.ts';
 import { assertZone, offsetHoursAt } from '../sun/zoneOffsets.ts';
 
 /**
@@ -80,7 +81,7 @@ export function wallDeclinationFromShadow(site: WallSite, readings: readonly Sha
   const results = readings.map((r, i): ReadingResult => {
     const field = `readings.${i}`;
     const day = dateToUtcMidnightMs(parseLocalDate(r.date, `${field}.date`));
-    const clock = parseClockMinutes(r.time, `${field}.time`);
+    const clock = parseClock(`${field}.time`, r.time, { seconds: true });
     const theta = r.angleDeg;
     if (typeof theta !== 'number' || !Number.isFinite(theta) || !(theta > 0 && theta < 180)) {
       throw new SpecError(`${field}.angle`, theta, 'allowed: an angle greater than 0° and less than 180° (the shadow leaves the wall toward the Sun)');

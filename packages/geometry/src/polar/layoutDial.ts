@@ -124,6 +124,7 @@ export function layoutDial(spec: DialSpec, options: LayoutOptions = {}): DialLay
       const m = lengths[mt.kind];
       marks.push({
         label: formatClock(mt.minutes),
+        minutes: mt.minutes,
         kind: mt.kind,
         hourAngleDeg: mt.hourAngleDeg,
         style: edge,

@@ -229,7 +229,7 @@ export function checkDial(layout: DialLayout, options: CheckOptions = {}): Check
       a.lit++;
       const penumbra = penumbraWidthMm({ heightMm: h, hourAngleRad: H, declinationRad: s.declinationRad, sunRadiusRad: Math.asin(SUN_RADIUS_KM / (s.distanceAu * KM_PER_AU)) });
       a.penumbra = widen(a.penumbra, penumbra);
-      a.clock = widen(a.clock, (t - day.startMs) / 60_000 - labelMinutes(d.mark.label));
+      a.clock = widen(a.clock, (t - day.startMs) / 60_000 - d.mark.minutes);
       const cast = shadowOnLine(edgesOf(d.mark.style), sun, d.a, d.b);
       if (!cast) {
         a.errors.push(null);
@@ -363,13 +363,6 @@ function newAccumulator(): Accumulator {
 
 function widen(r: Range | null, v: number): Range {
   return r === null ? { min: v, max: v } : { min: Math.min(r.min, v), max: Math.max(r.max, v) };
-}
-
-/** "08:15" → 495 (minutes after midnight). */
-function labelMinutes(label: string): number {
-  const m = /^(\d{2}):(\d{2})/.exec(label);
-  if (!m) throw new SpecError('marks.label', label, 'allowed: a mark label starting "HH:MM"');
-  return Number(m[1]) * 60 + Number(m[2]);
 }
 
 /** Linear interpolation of the instant of hour angle H within the sweep (the hour angle grows monotonically). */

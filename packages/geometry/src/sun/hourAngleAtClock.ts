@@ -3,7 +3,8 @@ import { assertRange } from '../guards.ts';
 import { instantMs } from './clockAtHourAngle.ts';
 import { equationOfTimeMin } from './equationOfTimeMin.ts';
 import { longitudeDifferenceDeg } from './longitudeCorrectionMin.ts';
-import { dateToUtcMidnightMs, parseClockMinutes, parseLocalDate } from './localDate.ts';
+import { parseClock } from '../spec/parseClock.ts';
+import { dateToUtcMidnightMs, parseLocalDate } from './localDate.ts';
 import { assertZone, zoneYearOffsets } from './zoneOffsets.ts';
 
 /** Options of `hourAngleAtClock`. */
@@ -38,7 +39,7 @@ export interface HourAngleAtClockOptions {
  */
 export function hourAngleAtClock(options: HourAngleAtClockOptions): number {
   const day = parseLocalDate(options.dateLocal, 'dateLocal');
-  const clockMin = parseClockMinutes(options.clock, 'clock');
+  const clockMin = parseClock('clock', options.clock, { seconds: true });
   const lon = assertRange('site.longitude', options.longitudeDeg, -180, 180, '°');
   const zone = assertZone(options.timezone);
   if (typeof options.daylightSaving !== 'boolean') {

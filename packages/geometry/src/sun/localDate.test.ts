@@ -1,5 +1,6 @@
 import { describe, expect, test } from 'vitest';
-import { formatClockHms, formatIsoDate, parseClockMinutes, parseLocalDate } from './localDate.ts';
+import { parseClock } from '../spec/parseClock.ts';
+import { formatClockHms, formatIsoDate, parseLocalDate } from './localDate.ts';
 
 describe('localDate helpers', () => {
   test('parseLocalDate', () => {
@@ -8,11 +9,12 @@ describe('localDate helpers', () => {
     expect(() => parseLocalDate('21/06/2025')).toThrow(/YYYY-MM-DD/);
   });
 
-  test('parseClockMinutes', () => {
-    expect(parseClockMinutes('13:30')).toBe(810);
-    expect(parseClockMinutes('00:00:30')).toBe(0.5);
-    expect(() => parseClockMinutes('24:00')).toThrow(/clock/);
-    expect(() => parseClockMinutes('9:30')).toThrow(/HH:MM/);
+  test('parseClock with seconds', () => {
+    expect(parseClock('clock', '13:30', { seconds: true })).toBe(810);
+    expect(parseClock('clock', '00:00:30', { seconds: true })).toBe(0.5);
+    expect(parseClock('clock', '9:30', { seconds: true })).toBe(570);
+    expect(() => parseClock('clock', '24:00', { seconds: true })).toThrow(/clock: .*HH:MM:SS/);
+    expect(() => parseClock('hours.from', '09:30:15')).toThrow(/hours\.from: .*"HH:MM"/);
   });
 
   test('formatClockHms rounds to the second', () => {

@@ -8,7 +8,6 @@ export interface CalendarDate {
 }
 
 const DATE_RE = /^(\d{4})-(\d{2})-(\d{2})$/;
-const CLOCK_RE = /^(\d{2}):(\d{2})(?::(\d{2}(?:\.\d+)?))?$/;
 
 /** Milliseconds in one day. */
 export const MS_PER_DAY = 86_400_000;
@@ -30,22 +29,6 @@ export function parseLocalDate(text: unknown, field = 'date'): CalendarDate {
     throw new SpecError(field, text, 'allowed: a real calendar date written YYYY-MM-DD');
   }
   return { year, month, day };
-}
-
-/**
- * Parse a clock reading 'HH:MM' or 'HH:MM:SS' (seconds may carry a fraction)
- * into minutes after midnight, 0 <= minutes < 1440.
- * @example parseClockMinutes('13:30') // 810
- */
-export function parseClockMinutes(text: unknown, field = 'clock'): number {
-  const m = typeof text === 'string' ? CLOCK_RE.exec(text) : null;
-  const allowed = 'allowed: a clock time written HH:MM or HH:MM:SS, 00:00 to 23:59:59';
-  if (!m) throw new SpecError(field, text, allowed);
-  const h = Number(m[1]);
-  const min = Number(m[2]);
-  const s = m[3] === undefined ? 0 : Number(m[3]);
-  if (h > 23 || min > 59 || s >= 60) throw new SpecError(field, text, allowed);
-  return h * 60 + min + s / 60;
 }
 
 /**
