@@ -1,12 +1,14 @@
 #!/usr/bin/env bash
 # Make sure the outside validators the tests use are present:
-#   python3-ezdxf (DXF reader + audit, run with /usr/bin/python3), admesh (STL),
+#   python3-ezdxf (DXF reader + audit, run with /usr/bin/python3), python3-shapely
+#   (polygon validity, overlaps, areas), admesh (STL),
 #   linuxcnc-uspace (rs274, the standalone RS274NGC interpreter), poppler-utils (PDF),
 #   chromium (the browser test of the local page).
 # Installs the missing ones with apt-get when running as root; otherwise says what to install.
 set -euo pipefail
 need=()
 /usr/bin/python3 -c 'import ezdxf' >/dev/null 2>&1 || need+=(python3-ezdxf)
+/usr/bin/python3 -c 'import shapely' >/dev/null 2>&1 || need+=(python3-shapely)
 command -v admesh >/dev/null 2>&1 || need+=(admesh)
 command -v rs274 >/dev/null 2>&1 || need+=(linuxcnc-uspace)
 command -v pdftoppm >/dev/null 2>&1 || need+=(poppler-utils)
