@@ -97,9 +97,11 @@ describe('umbrafab batch', () => {
     const r = await runCli(['batch', join(ROOT, 'fixtures/specs/page-print.yaml'), '--latitudes', '-30,-34', '--out', dir, '--no-progress']);
     expect(r.err).toBe('');
     const names = readdirSync(dir);
-    // body.stl, or its pieces when it does not fit the print bed (body-1-of-2.stl, …).
+    // The body (in bed-sized pieces when it is large) once if it is the same for both, else per latitude.
     expect(names.some((n) => /^body(-\d+-of-\d+)?(-S30)?\.stl$/.test(n))).toBe(true);
     expect(names.some((n) => /^body(-\d+-of-\d+)?(-S34)?\.stl$/.test(n))).toBe(true);
+    expect(names.some((n) => /^wedge(-\d+-of-\d+)?-S34\.stl$/.test(n))).toBe(true);
+    expect(r.out).toMatch(/^-34°\s+34\.00°.*wedge(-\d+-of-\d+)?-S34\.stl/m);
   });
 
   it('reads latitudes from a file with comments', async () => {

@@ -16,7 +16,7 @@ describe('umbrafab check (CLI)', () => {
     expect(lines[0]).toMatch(/^mark\s+lit days\s+worst mm\s+worst s/);
     expect(lines.filter((l) => /^\d\d:\d\d (west|east)\s/.test(l)).length).toBe(33);
     expect(r.out).toMatch(/^PASS: /m);
-    expect(r.out).toMatch(/33 marks \(from the layout\) x 365 days of 2027, \d+ sun positions/);
+    expect(r.out).toMatch(/33 engraved marks measured \(from the layout\) x 365 days of 2027, \d+ sun positions/);
   });
 
   it('--out writes check.json and check.svg, byte-identical on a second run; --year changes the simulated year', async () => {

@@ -1,5 +1,6 @@
 import yargs from 'yargs';
-import { didYouMean, isSpecError } from '@umbrafab/geometry';
+// The one module of the geometry package start-up needs (the index would bring every builder).
+import { didYouMean } from '@umbrafab/geometry/didYouMean';
 import { COMMANDS } from './commands/index.ts';
 import { UsageError, type Io } from './commands/commandTypes.ts';
 import { OutputError } from './writeFilesAtomic.ts';
@@ -43,11 +44,12 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
     .version('0.1.0')
     .exitProcess(false)
     .fail((msg, err) => {
-      throw err ?? new UsageError(withSuggestions(msg, argv));
+      throw err ?? new UsageError(msg);
     });
   try {
     await cli.parseAsync();
   } catch (e) {
+    if (e instanceof UsageError && /^Unknown arguments?: /.test(e.message)) e.message = await withSuggestions(e.message, argv);
     code = reportError(e, io);
   }
   return code;
@@ -71,7 +73,7 @@ export function negativeValuesJoined(argv: readonly string[]): string[] {
 }
 
 /** yargs' "Unknown argument: otu" as "unknown option --otu (did you mean --out?)"; extra words as extra arguments. */
-function withSuggestions(msg: string, argv: readonly string[]): string {
+async function withSuggestions(msg: string, argv: readonly string[]): Promise<string> {
   const m = /^Unknown arguments?: (.+)$/.exec(msg);
   if (!m) return msg;
   const command = COMMANDS.find((c) => c.command.split(' ')[0] === argv[0]);
@@ -89,8 +91,17 @@ function withSuggestions(msg: string, argv: readonly string[]): string {
   return `${problems.join('; ')}; allowed: ${usage}${known.map((k) => `--${k}`).join(', ')} (see umbrafab ${command ? `${argv[0]} ` : ''}--help)`;
 }
 
+/**
+ * A SpecError, told by its shape as geometry's isSpecError does, so that this
+ * start-up module imports nothing of the geometry package (a good command line
+ * loads it only when its command runs).
+ */
+function isSpecErrorLike(e: unknown): boolean {
+  return e instanceof Error && e.name === 'SpecError' && 'field' in e;
+}
+
 function reportError(e: unknown, io: Io): number {
-  if (isSpecError(e) || e instanceof OutputError || e instanceof UsageError) {
+  if (isSpecErrorLike(e) || e instanceof OutputError || e instanceof UsageError) {
     io.err(`umbrafab: ${(e as Error).message}`);
     return EXIT.badInput;
   }

@@ -1,4 +1,6 @@
-import { DERIVED_DEFAULTS, SITE_PLACEHOLDER, specSchema } from '@umbrafab/geometry';
+// The spec modules only (not the package index, which would bring every builder into `init`).
+import { DERIVED_DEFAULTS, SITE_PLACEHOLDER } from '@umbrafab/geometry/derivedDefaults';
+import { specSchema } from '@umbrafab/geometry/schema';
 import { specToCommentedYaml } from './serve/specYaml.ts';
 
 /**

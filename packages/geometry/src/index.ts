@@ -11,6 +11,7 @@ export * from './text/strokeText.ts';
 export * from './polar/markOffset.ts';
 export * from './polar/numeralText.ts';
 export * from './polar/layoutDial.ts';
+export * from './polar/markCount.ts';
 export * from './plate/plateDrawing.ts';
 export * from './sheet/sheetPart.ts';
 export * from './sheet/sheetParts.ts';

@@ -12,7 +12,7 @@ export const buildCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
-    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }] = await Promise.all([import('../buildFiles.ts'), import('../readSpec.ts'), import('../writeFilesAtomic.ts')]);
+    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }, { countMarks, markCountText }] = await Promise.all([import('../buildFiles.ts'), import('../readSpec.ts'), import('../writeFilesAtomic.ts'), import('@umbrafab/geometry')]);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
     assertOutFolder(outDir);
     const spec = readSpecFile(args.spec);
@@ -22,7 +22,7 @@ export const buildCommand: CommandModule = {
     const p = result.layout.plate;
     const total = result.files.reduce((s, f) => s + f.bytes.length, 0);
     io.out(
-      `umbrafab: wrote ${result.files.length} files (${(total / 1024).toFixed(1)} KiB) to ${outDir}: ${result.files.map((f) => f.name).join(', ')} — plate ${p.widthMm} x ${p.lengthMm} mm, ${result.layout.marks.length} marks, ${spec.process.method} kerf ${spec.process.kerf} mm`,
+      `umbrafab: wrote ${result.files.length} files (${(total / 1024).toFixed(1)} KiB) to ${outDir}: ${result.files.map((f) => f.name).join(', ')} — plate ${p.widthMm} x ${p.lengthMm} mm, ${markCountText(countMarks(result.layout.marks))}, ${spec.process.method} kerf ${spec.process.kerf} mm`,
     );
     for (const note of 'notes' in result ? result.notes : result.layout.notes) io.out(`note: ${note}`);
     for (const line of cutFileLines(result.report)) io.out(line);

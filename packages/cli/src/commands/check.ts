@@ -16,7 +16,7 @@ export const checkCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick; the DXF reader only with --plate.
-    const { checkDial, checkPlanar, checkTableText, faceOrientationOf, layoutDial, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, readRawSpec, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
+    const { checkDial, checkPlanar, checkTableText, countMarks, faceOrientationOf, layoutDial, markCountText, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, readRawSpec, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
     if (args.out !== undefined) assertOutFolder(String(args.out));
     // The spec as written, normalised once (with --year in place of calendar.year): the same path as build.
     const raw = readRawSpec(args.spec) as Record<string, unknown>;
@@ -56,6 +56,8 @@ export const checkCommand: CommandModule = {
       result = checkDial(layout);
     }
     io.out(checkTableText(result));
+    const count = countMarks(layout.marks);
+    if (count.underGnomon.length) io.out(`note: the face has ${markCountText(count)}; the check measures the ${count.engraved} engraved ones`);
     if (args.out !== undefined) {
       const dir = String(args.out);
       writeFilesAtomic(dir, [

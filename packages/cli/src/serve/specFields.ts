@@ -1,4 +1,5 @@
-import { derivedDefault, specSchema } from '@umbrafab/geometry';
+import { derivedDefault } from '@umbrafab/geometry/derivedDefaults';
+import { specSchema } from '@umbrafab/geometry/schema';
 
 /**
  * One field of the dial spec as the page's form shows it, read from the ONE

@@ -3,7 +3,8 @@ import type { DialSpec } from '@umbrafab/geometry';
 import { specFields } from './specFields.ts';
 
 /**
- * The spec as commented YAML, for "save spec" on the page: every field with
+ * The spec as commented YAML, for the starter spec of `umbrafab init` (the
+ * page's "save spec" edits the user's own file instead: editSpecText.ts): every field with
  * its value and, beside it, the schema's describe() text (unit included).
  * Sections left empty by the schema (no fields yet) are left out. The text
  * reads back through `umbrafab build` to the same spec.

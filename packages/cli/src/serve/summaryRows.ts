@@ -1,4 +1,4 @@
-import type { DialLayout } from '@umbrafab/geometry';
+import { countMarks, markCountText, type DialLayout } from '@umbrafab/geometry';
 
 /** One line of the page's numbers panel: already formatted, nothing left to compute in the browser. */
 export interface SummaryRow {
@@ -29,7 +29,7 @@ export function summaryRows(layout: DialLayout): SummaryRow[] {
     if (m) rows.push({ key: `mark${label.slice(0, 2)}`, label: `${label} line from the style centre`, value: `${mm(m.xMm)} (hour angle ${Number(m.hourAngleDeg.toFixed(3))}°)` });
   }
   rows.push(
-    { key: 'marks', label: 'marks', value: String(layout.marks.length) },
+    { key: 'marks', label: 'marks', value: markCountText(countMarks(layout.marks)) },
     { key: 'reads', label: 'reads', value: time.reads === 'solar' ? 'apparent solar time' : 'standard time' },
     { key: 'meridian', label: 'standard meridian', value: `${time.standardMeridianDeg}°` },
     { key: 'longitudeCorrection', label: 'longitude correction', value: `${Number(time.longitudeCorrectionMin.toFixed(2))} min` },

@@ -1,4 +1,4 @@
-import type { CheckResult, MarkCheck } from '@umbrafab/geometry';
+import { countMarks, type CheckResult, type MarkCheck } from '@umbrafab/geometry';
 
 /** Fixed-decimals text of a number, "-0.000" shown as "0.000". */
 function fx(v: number, d: number): string {
@@ -51,7 +51,7 @@ export function checkTableText(result: CheckResult): string {
   const days = result.days.length;
   lines.push('');
   lines.push(
-    `${result.marks.length} marks (${result.source === 'plate' ? 'read from the plate drawing' : 'from the layout'}) x ${days} days of ${result.year}, ${result.sunPositions} sun positions; gnomon h ${fx(result.gnomon.heightMm, 2)} mm, t ${fx(result.gnomon.thicknessMm, 2)} mm; refraction ${result.refraction}; installed tilt error ${signed(result.tiltErrorDeg, 2)}°, azimuth error ${signed(result.azimuthErrorDeg, 2)}°`,
+    `${countMarks(result.marks).marks} engraved marks measured (${result.source === 'plate' ? 'read from the plate drawing' : 'from the layout'}) x ${days} days of ${result.year}, ${result.sunPositions} sun positions; gnomon h ${fx(result.gnomon.heightMm, 2)} mm, t ${fx(result.gnomon.thicknessMm, 2)} mm; refraction ${result.refraction}; installed tilt error ${signed(result.tiltErrorDeg, 2)}°, azimuth error ${signed(result.azimuthErrorDeg, 2)}°`,
   );
   lines.push(
     result.reads === 'standard'

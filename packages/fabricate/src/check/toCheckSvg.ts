@@ -1,4 +1,4 @@
-import type { CheckResult } from '@umbrafab/geometry';
+import { countMarks, type CheckResult } from '@umbrafab/geometry';
 import { roundTo } from '../process/roundTo.ts';
 
 /** Plot box in SVG user units (px). */
@@ -67,7 +67,7 @@ export function toCheckSvg(result: CheckResult): string {
   }
 
   const w = result.worst;
-  rec.push({ kind: 'text', x: M.left, y: 24, text: `Shadow minus mark over ${result.year}, ${result.marks.length} marks (${result.source}); worst ${w ? `${formatMm(w.errorMm)} at ${w.label} ${w.style} on ${w.date}` : 'none'}; ${result.pass ? 'PASS' : 'FAIL'}`, cls: 'title', anchor: 'start' });
+  rec.push({ kind: 'text', x: M.left, y: 24, text: `Shadow minus mark over ${result.year}, ${countMarks(result.marks).marks} engraved marks (${result.source}); worst ${w ? `${formatMm(w.errorMm)} at ${w.label} ${w.style} on ${w.date}` : 'none'}; ${result.pass ? 'PASS' : 'FAIL'}`, cls: 'title', anchor: 'start' });
   rec.push({ kind: 'text', x: 16, y: M.top + (H - M.top - M.bottom) / 2, text: 'mm', cls: 'small', anchor: 'start' });
 
   return serialise(rec, r);

@@ -1,3 +1,6 @@
+/** What `umbrafab init` writes for each site field: `parseSpec` refuses it with a message saying so until it is edited. */
+export const SITE_PLACEHOLDER = 'EDIT ME';
+
 /**
  * Spec fields whose default follows other fields: left out of a spec, they
  * take a value computed from those fields (by `parseSpec`, or for the

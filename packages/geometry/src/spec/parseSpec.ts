@@ -9,8 +9,7 @@ import { normaliseGnomonStock } from './sections/partsSection.ts';
 
 type Issue = z.core.$ZodIssue;
 
-/** What `umbrafab init` writes for each site field: `parseSpec` refuses it with a message saying so until it is edited. */
-export const SITE_PLACEHOLDER = 'EDIT ME';
+import { SITE_PLACEHOLDER } from './derivedDefaults.ts';
 
 const SITE_HELP: Readonly<Record<string, string>> = {
   latitude: 'your site\'s latitude, a number from -90° to 90° (north positive), e.g. 43.55',
