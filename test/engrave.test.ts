@@ -99,7 +99,10 @@ const dedupe = (pts: readonly Vec2[]): Vec2[] =>
   pts.filter((p, i) => i === 0 || Math.abs(p[0] - pts[i - 1][0]) > 1e-9 || Math.abs(p[1] - pts[i - 1][1]) > 1e-9);
 
 describe.each(CASES)('umbrafab build engraving: $name', ({ file, programs }) => {
-  const spec = readSpecFile(join(ROOT, file));
+  // Centre-line scoring for the laser here (engrave.laserFill: score): these checks trace every drawn line once;
+  // the default fill is checked in engraveFill.test.ts.
+  const read = readSpecFile(join(ROOT, file));
+  const spec = { ...read, engrave: { ...read.engrave, laserFill: 'score' as const } };
   // The drawing as buildFiles makes it: the layout plus the time work's curves and labels.
   const layout = layoutDial(spec);
   const extras = timeFaceExtras(layout);

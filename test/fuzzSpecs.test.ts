@@ -88,7 +88,7 @@ describe('fuzzed specs', () => {
         expect(txt, file).toMatch(/Degenerate facets\s*:\s*0\b/);
         expect(txt, file).toMatch(/Edges fixed\s*:\s*0\b/);
       } else {
-        execFileSync('rs274', ['-g', file], { encoding: 'utf8', cwd: work, env: { ...process.env, HOME: work } });
+        execFileSync('rs274', ['-g', file], { encoding: 'utf8', cwd: work, env: { ...process.env, HOME: work }, maxBuffer: 1 << 28 });
       }
     }
     console.log(`fuzz: ${RUNS} specs, ${built} built (${Object.keys(audit).length} DXF audited, ${others.length} STL/NGC checked), ${refused} refused by field: ${JSON.stringify(Object.fromEntries(refusedFields))}`);

@@ -52,7 +52,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   const preview = toSvg(drawing, { caption: `${spec.name} - ${layout.faceType} face, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
   files.push({ name: 'preview.svg', bytes: utf8(preview) });
   if (spec.pictures.write) files.push({ name: 'preview.png', bytes: toPng(preview, { pxPerMm: spec.pictures.pxPerMm }) });
-  const engraving = engraveFromSpec(spec, drawing);
+  const engraving = await engraveFromSpec(spec, drawing);
   files.push(...engraving.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })));
 
   const b = meshBounds(part.mesh);

@@ -13,6 +13,8 @@ export * from './polar/numeralText.ts';
 export * from './polar/layoutDial.ts';
 export * from './polar/markCount.ts';
 export * from './plate/plateDrawing.ts';
+export * from './parts/manifoldEngine.ts';
+export { shoelaceArea } from './parts/ring2d.ts';
 export * from './sheet/sheetPart.ts';
 export * from './sheet/sheetParts.ts';
 export * from './sheet/nestSheet.ts';

@@ -12,8 +12,8 @@ export interface EngraveSections {
   readonly engraving: EngravingReport;
 }
 
-export const engraveOutputs: Producer<EngraveSections> = ({ spec, drawing }) => {
-  const r = engraveFromSpec(spec, drawing);
+export const engraveOutputs: Producer<EngraveSections> = async ({ spec, drawing }) => {
+  const r = await engraveFromSpec(spec, drawing);
   return {
     files: r.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })),
     report: { engraving: r.report },

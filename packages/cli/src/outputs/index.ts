@@ -1,3 +1,4 @@
+import { cutOutputs } from './cutOutputs.ts';
 import { engraveOutputs } from './engraveOutputs.ts';
 import { partsOutputs } from './partsOutputs.ts';
 import { picturesOutputs } from './picturesOutputs.ts';
@@ -12,7 +13,7 @@ import type { Producer } from './outputTypes.ts';
  * one file in outputs/ (its report sections typed beside it), one line here
  * and one in report.ts. No two producers write the same report section.
  */
-export const PRODUCERS: readonly Producer[] = [plateOutputs, partsOutputs, standOutputs, sheetOutputs, engraveOutputs, timeOutputs, picturesOutputs];
+export const PRODUCERS: readonly Producer[] = [plateOutputs, partsOutputs, standOutputs, sheetOutputs, engraveOutputs, cutOutputs, timeOutputs, picturesOutputs];
 
 /** Indices of PRODUCERS in the order they are started: the pictures (PNGs render on worker threads) first. */
 export const START_ORDER: readonly number[] = [PRODUCERS.indexOf(picturesOutputs), ...PRODUCERS.map((_, i) => i).filter((i) => PRODUCERS[i] !== picturesOutputs)];

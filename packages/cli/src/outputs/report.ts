@@ -1,4 +1,5 @@
 import type { DialSpec } from '@umbrafab/geometry';
+import type { CutSections } from './cutOutputs.ts';
 import type { EngraveSections } from './engraveOutputs.ts';
 import type { PartsSections } from './partsOutputs.ts';
 import type { PicturesSections } from './picturesOutputs.ts';
@@ -16,7 +17,7 @@ import type { TimeSections } from './timeOutputs.ts';
  * from this type (`pnpm report-schema`) and checked against every build in
  * test/reportSchema.test.ts.
  */
-export type Report = ReportHead & PlateSections & PartsSections & StandSections & SheetSections & EngraveSections & TimeSections & PicturesSections & ReportTail;
+export type Report = ReportHead & PlateSections & PartsSections & StandSections & SheetSections & EngraveSections & CutSections & TimeSections & PicturesSections & ReportTail;
 
 /** What every report starts with. */
 export interface ReportHead {

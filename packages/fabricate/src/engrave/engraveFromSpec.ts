@@ -9,6 +9,7 @@ import { rampSlope, type EngraveSettings } from './materialPresets.ts';
 import { parkPoint } from './millProgram.ts';
 import { polylineLengthMm } from './polylineLength.ts';
 import { specSummaryLines } from './specSummaryLines.ts';
+import { laserFillPasses, type LaserFill } from './laserFill.ts';
 import { planLaser, toLaserGcode } from './toLaserGcode.ts';
 import { planNgc, toNgc } from './toNgc.ts';
 
@@ -66,8 +67,20 @@ export interface NgcReport {
 
 export interface LaserReport {
   readonly file: string;
-  /** Every stroke is traced once. */
+  /** Every stroke (centre line or fill pass) is traced once. */
   readonly passes: 1;
+  /** 'fill': lines wider than the beam burned as wide as drawn; 'score': centre lines only. */
+  readonly mode: 'fill' | 'score';
+  /** The fill, when mode is 'fill'. */
+  readonly fill?: {
+    readonly beamMm: number;
+    readonly intervalMm: number;
+    readonly regions: number;
+    readonly rings: number;
+    readonly scoredLines: number;
+    /** Area of the union of the wide lines, less the holes and slots, mm². */
+    readonly filledAreaMm2: number;
+  };
   readonly strokes: number;
   readonly timeEstimateS: number;
   readonly timeBreakdownS: { readonly burning: number; readonly travel: number };
@@ -149,8 +162,8 @@ function ngcProgram(job: EngraveJob, s: EngraveSettings, spec: DialSpec): { text
   };
 }
 
-function laserProgram(job: EngraveJob, s: EngraveSettings): { text: string; report: LaserReport } {
-  const plan = planLaser(job, s);
+function laserProgram(job: EngraveJob, s: EngraveSettings, fill: LaserFill | undefined): { text: string; report: LaserReport } {
+  const plan = planLaser(job, s, {}, fill);
   const text = toLaserGcode(job, s, {}, plan);
   const e = plan.estimate;
   return {
@@ -158,6 +171,10 @@ function laserProgram(job: EngraveJob, s: EngraveSettings): { text: string; repo
     report: {
       file: ENGRAVE_FILE_NAMES.laser,
       passes: 1,
+      mode: fill ? 'fill' : 'score',
+      ...(fill
+        ? { fill: { beamMm: fill.beamMm, intervalMm: fill.intervalMm, regions: fill.regions, rings: fill.rings, scoredLines: fill.scored, filledAreaMm2: fill.filledAreaMm2 } }
+        : {}),
       strokes: plan.strokes.length,
       timeEstimateS: e.totalS,
       timeBreakdownS: { burning: e.cuttingS, travel: e.rapidS + e.retractS },
@@ -181,9 +198,9 @@ function laserProgram(job: EngraveJob, s: EngraveSettings): { text: string; repo
  * @throws SpecError (field, value, allowed) for a material without a preset, a
  *   V-bit too narrow for the widest line, a groove deeper than the sheet
  *   allows; feeds of zero never get here (the schema rejects them)
- * @example engraveFromSpec(spec, plateDrawing(layoutDial(spec))).files.map((f) => f.name)
+ * @example (await engraveFromSpec(spec, plateDrawing(layoutDial(spec)))).files.map((f) => f.name)
  */
-export function engraveFromSpec(spec: DialSpec, drawing: PlateDrawing): SpecEngraving {
+export async function engraveFromSpec(spec: DialSpec, drawing: PlateDrawing): Promise<SpecEngraving> {
   const programs = engraveProgramsFor(spec.engrave.programs, spec.process.method);
   if (programs.length === 0) return { files: [], report: { programs } };
   const settings = engraveSettingsFromSpec(spec);
@@ -197,7 +214,17 @@ export function engraveFromSpec(spec: DialSpec, drawing: PlateDrawing): SpecEngr
       files.push({ name: ENGRAVE_FILE_NAMES.ngc, text: r.text });
       ngc = r.report;
     } else {
-      const r = laserProgram(job, settings);
+      const fill =
+        spec.engrave.laserFill === 'fill'
+          ? await laserFillPasses(job, {
+              beamMm: spec.engrave.laserBeamMm,
+              intervalMm: spec.engrave.laserFillIntervalMm ?? spec.engrave.laserBeamMm,
+              chordToleranceMm: spec.cutFiles.chordTolerance,
+              holes: drawing.holes,
+              slots: drawing.slots,
+            })
+          : undefined;
+      const r = laserProgram(job, settings, fill);
       files.push({ name: ENGRAVE_FILE_NAMES.laser, text: r.text });
       laser = r.report;
     }

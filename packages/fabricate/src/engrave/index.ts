@@ -24,3 +24,8 @@ export * from './engraveSettingsFromSpec.ts';
 export * from './checkMillJob.ts';
 export * from './engraveFromSpec.ts';
 export * from './clipToPlate.ts';
+export * from './cutSettings.ts';
+export * from './toolCentrePaths.ts';
+export * from './planCut.ts';
+export * from './cutFromSpec.ts';
+export * from './laserFill.ts';

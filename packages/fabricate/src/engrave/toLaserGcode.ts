@@ -1,9 +1,10 @@
-import type { EngraveJob, Vec2 } from './engraveInput.ts';
+import type { EngraveJob } from './engraveInput.ts';
 import { validateEngraveJob } from './engraveInput.ts';
 import { estimateTime, type TimeEstimate } from './estimateTime.ts';
 import { formatNumber } from './formatNumber.ts';
 import { serializeGcode, type GcodeRecord } from './gcodeRecords.ts';
 import type { EngraveSettings } from './materialPresets.ts';
+import type { LaserFill, LaserPass } from './laserFill.ts';
 import { orderPaths } from './orderPaths.ts';
 import { parkPoint } from './millProgram.ts';
 import { figureComments, safetyComments, stockComments } from './headerComments.ts';
@@ -18,36 +19,39 @@ import { resolveWriterOptions, type GcodeWriterOptions } from './writerOptions.t
  * is set by hand), end `S0`, the park move `G0 X Y` (engrave.parkXMm/parkYMm,
  * default X0 at the stock's far edge), `M5`, `M2`. No `%` lines: GRBL senders
  * do not all accept them. Every path is traced once along its
- * centre line (a score line); wide marks are not hatched.
+ * centre line (a score line), or, with a LaserFill (laserFillPasses), the
+ * fill passes that burn every line as wide as it is drawn.
  *
  * The same text is valid RS-274/NGC (S words and M4 are spindle words there)
  * and is checked with `rs274 -g`.
  */
 
 export interface LaserPlan {
-  /** Ordered single-pass strokes. */
-  readonly strokes: readonly { readonly points: readonly Vec2[]; readonly closed: boolean; readonly label: string; readonly sourceIndex: number }[];
+  /** Ordered single-pass strokes (the job's centre lines, or the fill passes). */
+  readonly strokes: readonly LaserPass[];
   readonly body: readonly GcodeRecord[];
   readonly estimate: TimeEstimate;
   readonly rapidTravelMm: { readonly inputOrder: number; readonly ordered: number; readonly lowerBound: number };
   /** The S word written while the beam is on. */
   readonly powerS: number;
+  /** The fill the passes came from; undefined = centre-line scoring. */
+  readonly fill?: LaserFill;
 }
 
 /**
  * Build the laser program's records and figures (what toLaserGcode writes).
  * @param options decimals (default 3), optimizeOrder (default true)
  */
-export function planLaser(job: EngraveJob, settings: EngraveSettings, options: GcodeWriterOptions = {}): LaserPlan {
+export function planLaser(job: EngraveJob, settings: EngraveSettings, options: GcodeWriterOptions = {}, fill?: LaserFill): LaserPlan {
   validateEngraveJob(job);
   const o = resolveWriterOptions(options);
   const s = settings;
   const powerS = (s.laserPowerPct * s.laserMaxS) / 100;
-  const strokes = job.paths.map((p, i) => ({ points: p.points, closed: p.closed, label: p.label, sourceIndex: i }));
+  const strokes: readonly LaserPass[] = fill ? fill.passes : job.paths.map((p) => ({ points: p.points, closed: p.closed, operation: p.operation, label: p.label }));
   const ordered = orderPaths(strokes, { optimize: o.optimizeOrder });
   const body: GcodeRecord[] = [{ kind: 'modal', words: 'G21 G90 G17 G94' }, { kind: 'spindle', mode: 'ccw', s: 0 }];
   ordered.paths.forEach((p, n) => {
-    body.push({ kind: 'comment', text: `stroke ${n + 1}/${ordered.paths.length}: ${job.paths[p.sourceIndex].operation} ${p.label}` });
+    body.push({ kind: 'comment', text: `stroke ${n + 1}/${ordered.paths.length}: ${p.operation} ${p.label}` });
     body.push({ kind: 'rapid', to: { x: p.points[0][0], y: p.points[0][1] } });
     body.push({ kind: 'power', s: powerS });
     const trace = p.closed ? [...p.points.slice(1), p.points[0]] : p.points.slice(1);
@@ -58,7 +62,7 @@ export function planLaser(job: EngraveJob, settings: EngraveSettings, options: G
   const [px, py] = parkPoint(s, job.stock.lengthMm);
   body.push({ kind: 'rapid', to: { x: px, y: py } }, { kind: 'spindle', mode: 'off' }, { kind: 'end' });
   const estimate = estimateTime(body, { rapidMmPerMin: s.rapidMmPerMin });
-  return { strokes: ordered.paths, body, estimate, rapidTravelMm: ordered.rapidTravelMm, powerS };
+  return { strokes: ordered.paths, body, estimate, rapidTravelMm: ordered.rapidTravelMm, powerS, fill };
 }
 
 /**
@@ -69,10 +73,11 @@ export function planLaser(job: EngraveJob, settings: EngraveSettings, options: G
  * @returns program text, '\n' line ends, byte-stable for the same input
  * @example toLaserGcode(job, resolveEngraveSettings('acrylic'))
  */
-export function toLaserGcode(job: EngraveJob, settings: EngraveSettings, options: GcodeWriterOptions = {}, planned?: LaserPlan): string {
+export function toLaserGcode(job: EngraveJob, settings: EngraveSettings, options: GcodeWriterOptions = {}, planned?: LaserPlan, fill?: LaserFill): string {
   const o = resolveWriterOptions(options);
   // A caller that already planned (for the report's figures) passes the plan, so the paths are ordered once.
-  const plan = planned ?? planLaser(job, settings, o);
+  const plan = planned ?? planLaser(job, settings, o, fill);
+  const f = fill ?? planned?.fill;
   const s = settings;
   const header: GcodeRecord[] = [
     { kind: 'comment', text: 'umbrafab engrave-laser.gcode: laser scoring program, GRBL laser mode [$32=1]' },
@@ -82,7 +87,12 @@ export function toLaserGcode(job: EngraveJob, settings: EngraveSettings, options
       kind: 'comment',
       text: `laser: M4 dynamic power, ${formatNumber(s.laserPowerPct, 3, true)} % = S${formatNumber(plan.powerS, 3, true)} of S${formatNumber(s.laserMaxS, 3, true)}, speed ${formatNumber(s.laserSpeedMmPerMin, 3, true)} mm/min, S0 during travel`,
     },
-    { kind: 'comment', text: `${plan.strokes.length} strokes, each traced once` },
+    {
+      kind: 'comment',
+      text: f
+        ? `fill: beam ${formatNumber(f.beamMm, 3, true)} mm, concentric passes every ${formatNumber(f.intervalMm, 3, true)} mm inside the union of the lines [each line as wide as drawn, overlaps burned once]; ${f.scored} lines no wider than the beam scored along their centre; ${plan.strokes.length} passes`
+        : `${plan.strokes.length} strokes, each traced once along its centre line [scoring: engrave.laserFill score]`,
+    },
     ...figureComments({ rapidTravelMm: plan.rapidTravelMm, estimate: plan.estimate, title: job.title, process: 'laser' }),
   ];
   return serializeGcode([...header, ...plan.body], o.decimals);

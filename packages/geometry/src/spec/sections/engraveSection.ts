@@ -24,6 +24,8 @@ import { boundedNumber } from '../boundedNumber.ts';
 export const ENGRAVE_PROGRAM_CHOICES = ['auto', 'ngc', 'laser', 'both', 'none'] as const;
 export type EngraveProgramChoice = (typeof ENGRAVE_PROGRAM_CHOICES)[number];
 
+export const LASER_FILL_CHOICES = ['fill', 'score'] as const;
+
 export const COOLANT_CHOICES = ['off', 'mist', 'flood'] as const;
 
 /** A number field with bounds and unit (see boundedNumber). */
@@ -66,6 +68,33 @@ const toolSection = z
   })
   .prefault({});
 
+export const MILLING_DIRECTIONS = ['climb', 'conventional'] as const;
+
+const CUT_PRESET = 'default: the cutting preset of plate.material';
+
+/** `engrave.cut`: the router cutting program cut.ngc (holes, slots, outer profiles). */
+const cutSection = z
+  .strictObject({
+    write: z
+      .boolean({ error: 'allowed: true or false' })
+      .default(true)
+      .describe('write cut.ngc when process.method is router: holes, slots, then the outer profiles of the plate and the gnomon, cut through with the process.kerf end mill'),
+    spindleRpm: num({ min: 0, max: 100000, unit: 'rev/min', exclusiveMin: true }).optional().describe(`spindle speed for cutting, rev/min (${CUT_PRESET}, e.g. aluminium 18000)`),
+    feedMmPerMin: num({ min: 0, max: 100000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`cutting feed, mm/min (${CUT_PRESET}, e.g. aluminium 600)`),
+    plungeMmPerMin: num({ min: 0, max: 100000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`plunge feed, and the most a ramp descends per minute, mm/min (${CUT_PRESET}, e.g. aluminium 150)`),
+    stepDownMm: num({ min: 0, max: 50, unit: 'mm', exclusiveMin: true }).optional().describe(`deepest single pass, mm (${CUT_PRESET}, e.g. aluminium 0.5)`),
+    breakthroughMm: num({ min: 0, max: 5, unit: 'mm' }).default(0.3).describe('how far the last pass goes below the stock into a sacrificial spoilboard, mm'),
+    tabs: num({ min: 0, max: 12, unit: '', int: true }).default(4).describe('holding tabs per outer profile (0 = none), at the middles of its longest straight edges'),
+    tabWidthMm: num({ min: 0, max: 50, unit: 'mm', exclusiveMin: true }).default(4).describe('width of the bridge each tab leaves, along the profile, mm'),
+    tabHeightMm: num({ min: 0, max: 50, unit: 'mm', exclusiveMin: true }).default(0.8).describe('height of each tab above the bottom of the stock, mm (less than plate.thickness)'),
+    leadInMm: num({ min: 0, max: 20, unit: 'mm' }).optional().describe('straight lead-in from the waste side and lead-out, mm (default: the tool radius; shortened to fit inside a slot)'),
+    direction: z
+      .enum(MILLING_DIRECTIONS, { error: `allowed: ${MILLING_DIRECTIONS.map((v) => JSON.stringify(v)).join(', ')}` })
+      .default('climb')
+      .describe('climb (with M3: outer profiles counter-clockwise, cut-outs clockwise; the better finish on a rigid machine) or conventional'),
+  })
+  .prefault({});
+
 export const engraveSection = z
   .strictObject({
     programs: z
@@ -73,6 +102,7 @@ export const engraveSection = z
       .default('auto')
       .describe('engraving programs to write: auto (router/waterjet: engrave.ngc, laser: engrave-laser.gcode, print: none), ngc, laser, both or none'),
     tool: toolSection,
+    cut: cutSection,
     spindleRpm: num({ min: 0, max: 100000, unit: 'rev/min', exclusiveMin: true }).optional().describe(`spindle speed, rev/min (${PRESET}, e.g. aluminium 16000)`),
     feedMmPerMin: num({ min: 0, max: 100000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`cutting feed along the lines, mm/min (${PRESET}, e.g. aluminium 400)`),
     plungeMmPerMin: num({ min: 0, max: 100000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`plunge feed into the stock, mm/min (${PRESET}, e.g. aluminium 100)`),
@@ -96,11 +126,24 @@ export const engraveSection = z
     rapidMmPerMin: num({ min: 0, max: 200000, unit: 'mm/min', exclusiveMin: true }).default(3000).describe('rapid (G0) rate of the machine, mm/min, for the time estimate only'),
     laserPowerPct: num({ min: 0, max: 100, unit: '%', exclusiveMin: true }).optional().describe(`laser power while scoring, percent of the machine maximum (${PRESET}, e.g. acrylic 30)`),
     laserSpeedMmPerMin: num({ min: 0, max: 200000, unit: 'mm/min', exclusiveMin: true }).optional().describe(`laser scoring speed, mm/min (${PRESET}, e.g. acrylic 3000)`),
+    laserFill: z
+      .enum(LASER_FILL_CHOICES, { error: `allowed: ${LASER_FILL_CHOICES.map((v) => JSON.stringify(v)).join(', ')}` })
+      .default('fill')
+      .describe('fill: lines wider than the beam are burned as wide as drawn (concentric passes inside the union of the lines, overlaps burned once); score: every line traced once along its centre'),
+    laserBeamMm: num({ min: 0, max: 5, unit: 'mm', exclusiveMin: true })
+      .default(0.15)
+      .describe('width of the line one laser pass burns, mm (about 0.1-0.2 for a focused CO2 or diode laser; measure a scored line on scrap); lines no wider are scored along their centre'),
+    laserFillIntervalMm: num({ min: 0, max: 5, unit: 'mm', exclusiveMin: true })
+      .optional()
+      .describe('distance between concentric fill passes, mm (default: the beam width, so the passes just meet; at most laserBeamMm)'),
     laserMaxS: num({ min: 0, max: 100000, unit: '', exclusiveMin: true }).default(1000).describe('the S word for 100 % laser power (GRBL $30; default 1000)'),
   })
   .superRefine((e, ctx) => {
     if (e.clearanceZMm > e.safeZMm) {
       ctx.addIssue({ code: 'custom', path: ['clearanceZMm'], input: e.clearanceZMm, message: `allowed: at most engrave.safeZMm (${e.safeZMm} mm)` });
+    }
+    if (e.laserFillIntervalMm !== undefined && e.laserFillIntervalMm > e.laserBeamMm) {
+      ctx.addIssue({ code: 'custom', path: ['laserFillIntervalMm'], input: e.laserFillIntervalMm, message: `allowed: at most engrave.laserBeamMm (${e.laserBeamMm} mm), so the passes meet` });
     }
     if (e.entryZMm > e.clearanceZMm) {
       ctx.addIssue({ code: 'custom', path: ['entryZMm'], input: e.entryZMm, message: `allowed: at most engrave.clearanceZMm (${e.clearanceZMm} mm)` });
