@@ -44,7 +44,7 @@ describe.each(built)('gnomon.dxf read back: $name', ({ result, text, dump }) => 
   const k = spec.cutFiles.precompensate ? kerf / 2 : 0;
 
   it('is written for the cut process, with the gnomon cut from the sheet: t = plate.thickness', () => {
-    expect(result.files.map((f) => f.name)).toEqual(expect.arrayContaining([k ? `gnomon-offset-${k}mm.dxf` : 'gnomon.dxf', 'wedge.stl']));
+    expect(result.files.map((f) => f.name)).toEqual(expect.arrayContaining([k ? `gnomon-offset-${k}mm.dxf` : 'gnomon.dxf']));
     expect(result.files.some((f) => f.name === 'gnomon.stl')).toBe(false);
     expect(g.thicknessMm).toBe(T);
     expect(spec.parts.gnomonFrom).toBe('sheet');

@@ -1,3 +1,4 @@
+import type { ManifoldToplevel } from 'manifold-3d';
 import { manifoldEngine } from '../parts/manifoldEngine.ts';
 import type { DrawnLine, DrawnText } from '../plate/plateDrawing.ts';
 import { arcSegments, CHORD_TOLERANCE_MM } from '../sheet/arcPoints.ts';
@@ -56,35 +57,8 @@ export function drawingStrokes(lines: readonly DrawnLine[], text: readonly Drawn
  * @example (await strokeOutlines(drawingStrokes(d.lines, d.text))).rings
  */
 export async function strokeOutlines(strokes: readonly Stroke[], chordToleranceMm = CHORD_TOLERANCE_MM): Promise<StrokeOutlines> {
-  const pieces: [number, number][][] = [];
   const { CrossSection } = await manifoldEngine();
-  for (const s of strokes) {
-    const own = strokePieces(s, chordToleranceMm);
-    const [startBox, endBox] = s.caps === 'butt' && !s.closed ? capOverhangs(s) : [null, null];
-    if (!startBox && !endBox) {
-      pieces.push(...own.map((p) => p.poly));
-      continue;
-    }
-    // Joins near a square end may bulge past it: cut the pieces near that end off square
-    // (only those: the other end of a nearly closed curve may lie right beside it).
-    const zone = 2 * s.widthMm;
-    const total = own.reduce((m, p) => Math.max(m, p.hi), 0);
-    for (const p of own) {
-      const cuts = [p.lo < zone ? startBox : null, p.hi > total - zone ? endBox : null].filter((b): b is [number, number][] => b !== null);
-      if (cuts.length === 0) {
-        pieces.push(p.poly);
-        continue;
-      }
-      const piece = new CrossSection([p.poly], 'Positive');
-      const trimmed = piece.subtract(cuts);
-      try {
-        pieces.push(...trimmed.toPolygons().map((r) => r.map(([x, y]): [number, number] => [x, y])));
-      } finally {
-        piece.delete();
-        trimmed.delete();
-      }
-    }
-  }
+  const pieces = strokePolygons(strokes, chordToleranceMm, CrossSection);
   if (pieces.length === 0) return { regions: [], rings: 0, areaMm2: 0, chordToleranceMm };
   const union = new CrossSection(pieces, 'Positive');
   try {
@@ -113,6 +87,43 @@ export async function strokeOutlines(strokes: readonly Stroke[], chordToleranceM
   } finally {
     union.delete();
   }
+}
+
+/**
+ * The overlapping counter-clockwise polygons whose union (positive fill
+ * rule) is the strokes' area: strokeOutlines' input to the polygon engine,
+ * exposed to measure other engines on the same data (scripts/bench-etch.ts).
+ */
+export function strokePolygons(strokes: readonly Stroke[], chordToleranceMm: number, CrossSection: ManifoldToplevel['CrossSection']): [number, number][][] {
+  const pieces: [number, number][][] = [];
+  for (const s of strokes) {
+    const own = strokePieces(s, chordToleranceMm);
+    const [startBox, endBox] = s.caps === 'butt' && !s.closed ? capOverhangs(s) : [null, null];
+    if (!startBox && !endBox) {
+      pieces.push(...own.map((p) => p.poly));
+      continue;
+    }
+    // Joins near a square end may bulge past it: cut the pieces near that end off square
+    // (only those: the other end of a nearly closed curve may lie right beside it).
+    const zone = 2 * s.widthMm;
+    const total = own.reduce((m, p) => Math.max(m, p.hi), 0);
+    for (const p of own) {
+      const cuts = [p.lo < zone ? startBox : null, p.hi > total - zone ? endBox : null].filter((b): b is [number, number][] => b !== null);
+      if (cuts.length === 0) {
+        pieces.push(p.poly);
+        continue;
+      }
+      const piece = new CrossSection([p.poly], 'Positive');
+      const trimmed = piece.subtract(cuts);
+      try {
+        pieces.push(...trimmed.toPolygons().map((r) => r.map(([x, y]): [number, number] => [x, y])));
+      } finally {
+        piece.delete();
+        trimmed.delete();
+      }
+    }
+  }
+  return pieces;
 }
 
 /** How far a join wedge's arc runs past each segment end, radians. */
