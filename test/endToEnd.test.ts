@@ -30,7 +30,7 @@ describe('end to end: the umbrafab bin on the demo spec', () => {
 
   it('fills the report contract of docs/design.md §6', () => {
     for (const m of report.marks) {
-      expect(Object.keys(m).filter((k) => k !== 'underGnomon').sort()).toEqual(['hourAngleDeg', 'kind', 'label', 'style', 'widthMm', 'xMm', 'y0Mm', 'y1Mm'].sort());
+      expect(Object.keys(m).filter((k) => k !== 'underGnomon').sort()).toEqual(['hourAngleDeg', 'kind', 'label', 'minutes', 'style', 'widthMm', 'xMm', 'y0Mm', 'y1Mm'].sort());
     }
     expect(report.plate).toMatchObject({ widthMm: expect.any(Number), lengthMm: expect.any(Number), substyleX: expect.any(Number) });
     expect(report.gnomon).toMatchObject({ heightMm: 50, thicknessMm: 3 });
