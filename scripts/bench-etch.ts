@@ -10,8 +10,7 @@
  * Run: npx -y pnpm@10.34.9 exec tsx scripts/bench-etch.ts  (BENCH_RUNS=N)
  */
 import { drawingStrokes, manifoldEngine, strokeOutlines, strokePolygons } from '@umbrafab/geometry';
-import { buildContext } from '../packages/cli/src/buildFiles.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { buildContext, readSpecFile } from '@umbrafab/cli';
 
 const runs = Number(process.env.BENCH_RUNS ?? 5);
 const spec = readSpecFile(new URL('../fixtures/specs/waterjet-nodus-60n.yaml', import.meta.url).pathname);

@@ -1,9 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { MATERIAL_DENSITIES, flatStand, parseSpec, sheetPartAreaMm2, type InstallSheet } from '../packages/geometry/src/index.ts';
-import { buildFiles } from '../packages/cli/src/buildFiles.ts';
-import { parseSpecText, readSpecFile } from '../packages/cli/src/readSpec.ts';
+import { MATERIAL_DENSITIES, flatStand, parseSpec, sheetPartAreaMm2, type InstallSheet } from '@umbrafab/geometry';
+import { buildFiles, parseSpecText, readSpecFile } from '@umbrafab/cli';
 
 /**
  * The assembly section of install.md: steps in order, wording right in both

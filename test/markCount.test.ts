@@ -2,9 +2,8 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { countMarks, layoutDial } from '../packages/geometry/src/index.ts';
-import { readSpecFile } from '../packages/cli/src/readSpec.ts';
-import { summaryRows } from '../packages/cli/src/serve/summaryRows.ts';
+import { countMarks, layoutDial } from '@umbrafab/geometry';
+import { readSpecFile, summaryRows } from '@umbrafab/cli';
 import { runCli } from './helpers/runCli.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');

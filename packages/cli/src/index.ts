@@ -20,3 +20,4 @@ export { formValuesToSpec, specToFormValues, type FormValue } from './serve/form
 export { MAX_BODY_BYTES, readJsonBody } from './serve/readJsonBody.ts';
 export { specFields, unitOf, type SpecField } from './serve/specFields.ts';
 export { specToCommentedYaml } from './serve/specYaml.ts';
+export { summaryRows } from './serve/summaryRows.ts';
