@@ -1,4 +1,4 @@
-import type { DrawnLine, DrawnText, PlateDrawing } from '../plate/plateDrawing.ts';
+import { plateOutline, type DrawnLine, type DrawnText, type PlateDrawing } from '../plate/plateDrawing.ts';
 import { clipPolyline } from '../polar/clipPolyline.ts';
 import type { Path, Vec2 } from '../types.ts';
 import type { PlanarLayout } from './layoutPlanar.ts';
@@ -55,7 +55,7 @@ export function planarPlateDrawing(layout: PlanarLayout): PlateDrawing {
     lengthMm: plate.lengthMm,
     substyleX: dx,
     faceOriginY: dy,
-    outline: { kind: 'rect', cx: plate.widthMm / 2, cy: plate.lengthMm / 2, widthMm: plate.widthMm, heightMm: plate.lengthMm, cornerRadiusMm: plate.cornerRadiusMm },
+    outline: plateOutline(plate),
     holes: plate.holes,
     slots: plate.slots,
     lines,

@@ -35,6 +35,11 @@ export interface PlateDrawing {
   readonly reference: readonly { readonly label: string; readonly path: Path }[];
 }
 
+/** The plate's outer profile in plate coordinates: a rounded rectangle from the origin at its lower-left corner. */
+export function plateOutline(plate: { readonly widthMm: number; readonly lengthMm: number; readonly cornerRadiusMm: number }): RoundedRect {
+  return { kind: 'rect', cx: plate.widthMm / 2, cy: plate.lengthMm / 2, widthMm: plate.widthMm, heightMm: plate.lengthMm, cornerRadiusMm: plate.cornerRadiusMm };
+}
+
 /**
  * The plate drawing of a layout: face coordinates moved to plate coordinates
  * (x + substyleX, y + faceOriginY).
@@ -78,7 +83,7 @@ export function plateDrawing(layout: DialLayout, extraLines: readonly DrawnLine[
     lengthMm: plate.lengthMm,
     substyleX: dx,
     faceOriginY: dy,
-    outline: { kind: 'rect', cx: plate.widthMm / 2, cy: plate.lengthMm / 2, widthMm: plate.widthMm, heightMm: plate.lengthMm, cornerRadiusMm: plate.cornerRadiusMm },
+    outline: plateOutline(plate),
     holes: plate.holes,
     slots: plate.slots,
     lines: [...lines, ...extraLines],
