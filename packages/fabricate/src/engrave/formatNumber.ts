@@ -12,7 +12,7 @@ import { assertFinite } from '@umbrafab/geometry';
 export function formatNumber(value: number, decimals: number, trim = false): string {
   assertFinite('value', value);
   let text = value.toFixed(decimals);
-  if (/^-0(\.0*)?$/.test(text)) text = text.slice(1);
+  if (text.charCodeAt(0) === 0x2d && /^-0(\.0*)?$/.test(text)) text = text.slice(1);
   if (trim && text.includes('.')) text = text.replace(/0+$/, '').replace(/\.$/, '');
   return text;
 }
