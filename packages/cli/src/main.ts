@@ -46,6 +46,7 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
     .fail((msg, err) => {
       throw err ?? new UsageError(msg);
     });
+  skipHelpCache(cli);
   try {
     await cli.parseAsync();
   } catch (e) {
@@ -53,6 +54,20 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
     code = reportError(e, io);
   }
   return code;
+}
+
+/**
+ * yargs lays out a command's whole help text each time the command runs,
+ * before its handler's work (held in case a failure should print it). Our
+ * `.fail` handler throws instead and never prints it, and laying it out
+ * (every line's display width through a large emoji pattern) costs a build
+ * tens of milliseconds, so the cache is skipped; `--help` still lays it out
+ * when asked. Guarded: an internal method, so a yargs without it is left as it is.
+ */
+function skipHelpCache(cli: object): void {
+  const internal = (cli as { getInternalMethods?: () => { getUsageInstance?: () => { cacheHelpMessage?: () => void } } }).getInternalMethods?.();
+  const usage = internal?.getUsageInstance?.();
+  if (usage && typeof usage.cacheHelpMessage === 'function') usage.cacheHelpMessage = () => {};
 }
 
 /**

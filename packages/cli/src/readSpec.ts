@@ -1,4 +1,4 @@
-import { CST, Lexer, LineCounter, isAlias, isCollection, isMap, isScalar, parseDocument, visit, type Node } from 'yaml';
+import { CST, Lexer, LineCounter, Parser, isAlias, isCollection, isMap, isScalar, parseDocument, visit, type Node } from 'yaml';
 import { SpecError, parseSpec, type DialSpec } from '@umbrafab/geometry';
 import { CappedReadError, readTextCapped } from './readTextCapped.ts';
 
@@ -13,6 +13,9 @@ export const MAX_SPEC_ALIASES = 100;
 
 /** Lexer tokens that start a node: a scalar (key or value), an alias, a list item, a flow list or map. */
 const NODE_TOKENS = new Set<string>(['scalar', 'single-quoted-scalar', 'double-quoted-scalar', 'block-scalar-header', 'alias', 'seq-item-ind', 'explicit-key-ind', 'flow-map-start', 'flow-seq-start']);
+
+/** Deepest nesting of lists and maps a spec may hold (a full spec nests 4 deep); deeper would overflow the YAML reader's stack. */
+export const MAX_SPEC_DEPTH = 64;
 
 const KIB = (n: number) => `${Math.round(n / 1024)} KiB`;
 
@@ -81,11 +84,13 @@ export function parseSpecText(text: string, source = 'spec', field = 'spec file'
   for (const token of new Lexer().lex(text)) {
     if (NODE_TOKENS.has(CST.tokenType(token) ?? '') && ++tokens > MAX_SPEC_NODES) fail(`allowed: at most ${MAX_SPEC_NODES} values (a full spec has about 300)`, `more than ${MAX_SPEC_NODES} values (keys, items, lists and maps)`);
   }
+  const depth = deepestNesting(text, MAX_SPEC_DEPTH);
+  if (depth !== null) fail(`allowed: lists and maps nested at most ${MAX_SPEC_DEPTH} deep (a full spec nests 4 deep)`, `nested more than ${MAX_SPEC_DEPTH} deep at line ${depth.line}, column ${depth.col}`);
   let doc;
   try {
     doc = parseDocument(text, { prettyErrors: true, uniqueKeys: false, lineCounter: lines });
   } catch (e) {
-    if (e instanceof RangeError) fail('allowed: valid YAML or JSON nested a few levels deep', 'nested too deeply to read');
+    if (e instanceof RangeError) fail(`allowed: lists and maps nested at most ${MAX_SPEC_DEPTH} deep`, 'nested too deeply to read');
     throw e;
   }
   const error = doc.errors[0];
@@ -115,8 +120,31 @@ export function parseSpecText(text: string, source = 'spec', field = 'spec file'
     if (e instanceof SpecError) throw e;
     const message = e instanceof Error ? e.message.split('\n')[0] : '';
     if (/alias count/i.test(message)) fail(`allowed: aliases (*name) that repeat a value at most ${MAX_SPEC_ALIASES} times in all`, `its aliases expand to too many values (a YAML alias bomb); reading stopped`);
-    if (e instanceof RangeError) fail('allowed: valid YAML or JSON nested a few levels deep', 'nested too deeply to read');
+    if (e instanceof RangeError) fail(`allowed: lists and maps nested at most ${MAX_SPEC_DEPTH} deep`, 'nested too deeply to read');
     if (e instanceof ReferenceError) fail('allowed: valid YAML or JSON', `not valid YAML: ${message}`);
     throw e;
   }
+}
+
+/**
+ * The first list or map nested deeper than `limit`, from the yaml package's
+ * concrete syntax tree (its parser keeps an explicit stack, so a deep text
+ * cannot overflow ours), walked without recursion: linear in the text.
+ * Null when the text stays within the limit.
+ */
+function deepestNesting(text: string, limit: number): { line: number; col: number } | null {
+  const lines = new LineCounter();
+  const open: { token: CST.Token | undefined; depth: number }[] = [];
+  for (const doc of new Parser(lines.addNewLine).parse(text)) open.push({ token: doc.type === 'document' ? doc.value : undefined, depth: 0 });
+  while (open.length > 0) {
+    const { token, depth } = open.pop()!;
+    if (token === undefined) continue;
+    if (token.type !== 'block-map' && token.type !== 'block-seq' && token.type !== 'flow-collection') continue;
+    if (depth + 1 > limit) return lines.linePos(token.offset);
+    for (const item of token.items) {
+      if ('key' in item) open.push({ token: item.key ?? undefined, depth: depth + 1 });
+      open.push({ token: item.value, depth: depth + 1 });
+    }
+  }
+  return null;
 }

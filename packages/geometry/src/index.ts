@@ -1,6 +1,6 @@
 export * from './types.ts';
 export * from './errors.ts';
-export * from './guards.ts';
+export { DEG, assertFinite, assertInteger, assertNonNegative, assertPositive, assertRange } from './guards.ts';
 export * from './spec/schema.ts';
 export * from './spec/parseSpec.ts';
 export * from './spec/parseClock.ts';

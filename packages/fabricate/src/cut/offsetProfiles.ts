@@ -31,6 +31,8 @@ export async function offsetProfiles(part: SheetPart, kerfMm: number, chordToler
   };
   const outer = offset(part.outer.points, k).filter((r) => signedArea(r) > 0);
   const inner: (Path | Circle)[] = [];
+  // A kerf too wide for a feature is refused before this as a SpecError on
+  // process.kerf (process/assertToolFits.ts), so the two throws below are bugs.
   for (const f of part.inner) {
     if (f.kind === 'circle') {
       if (!(f.radiusMm > k)) throw new Error(`offsetProfiles: a ${2 * f.radiusMm} mm hole vanishes under a ${kerfMm} mm kerf`);

@@ -1,4 +1,4 @@
-import { assertInRange, assertNonNegative, assertPositive } from './checks.ts';
+import { SpecError, assertNonNegative, assertPositive, assertRange } from '@umbrafab/geometry';
 import type { MaterialName } from './materialPresets.ts';
 
 /**
@@ -68,19 +68,15 @@ export const CUT_DEFAULTS = {
 export const DRILL_MATCH_MM = 0.05;
 
 /**
- * Check resolved cutting settings; throws an Error naming the field and value.
+ * Check resolved cutting settings; throws a SpecError naming the field and value.
  * @example checkCutSettings({ ...CUT_PRESETS.aluminium, ...CUT_DEFAULTS, toolDiameterMm: 3.175, leadInMm: 1.5875 }, 3)
  */
 export function checkCutSettings(s: CutSettings, thicknessMm: number): void {
-  assertPositive(s.toolDiameterMm, 'toolDiameterMm', 'mm');
-  assertPositive(s.spindleRpm, 'spindleRpm', 'rev/min');
-  assertPositive(s.feedMmPerMin, 'feedMmPerMin', 'mm/min');
-  assertPositive(s.plungeMmPerMin, 'plungeMmPerMin', 'mm/min');
-  assertPositive(s.stepDownMm, 'stepDownMm', 'mm');
-  assertNonNegative(s.breakthroughMm, 'breakthroughMm', 'mm');
-  if (!Number.isInteger(s.tabCount) || s.tabCount < 0) throw new Error(`tabCount must be a whole number >= 0, got ${s.tabCount}`);
-  assertPositive(s.tabWidthMm, 'tabWidthMm', 'mm');
-  assertInRange(s.tabHeightMm, 'tabHeightMm', 0, thicknessMm, { hiInclusive: false, unit: 'mm' });
-  assertNonNegative(s.leadInMm, 'leadInMm', 'mm');
-  if (s.direction !== 'climb' && s.direction !== 'conventional') throw new Error(`direction must be climb or conventional, got ${String(s.direction)}`);
+  for (const key of ['toolDiameterMm', 'spindleRpm', 'feedMmPerMin', 'plungeMmPerMin', 'stepDownMm'] as const) assertPositive(key, s[key]);
+  assertNonNegative('breakthroughMm', s.breakthroughMm);
+  if (!Number.isInteger(s.tabCount) || s.tabCount < 0) throw new SpecError('tabCount', s.tabCount, 'allowed: a whole number 0 or more');
+  assertPositive('tabWidthMm', s.tabWidthMm);
+  assertRange('tabHeightMm', s.tabHeightMm, 0, thicknessMm, ' mm', 'both');
+  assertNonNegative('leadInMm', s.leadInMm);
+  if (s.direction !== 'climb' && s.direction !== 'conventional') throw new SpecError('direction', s.direction, 'allowed: climb or conventional');
 }

@@ -1,4 +1,4 @@
-import { assertFinite, assertPositive, quote } from './checks.ts';
+import { assertFinite, assertPositive, formatValue } from '@umbrafab/geometry';
 
 /**
  * The engraving writers' input, decoupled from the layout code.
@@ -54,31 +54,33 @@ export function assertOnStock(p: Vec2, field: string, stock: EngraveJob['stock']
 const OPERATIONS: readonly EngraveOperation[] = ['marks', 'text', 'curves'];
 
 /**
- * Check a job's invariants and throw an Error naming the first bad field:
+ * Check a job's invariants and throw naming the first bad field (a plain
+ * Error for the shape of a path, which the code builds from the clipped
+ * drawing; the number guards throw a SpecError):
  * finite points, at least 2 points per path (3 for a loop), a positive width,
  * a known operation, a positive stock size, every point on the stock
  * (0 ≤ x ≤ stock.widthMm, 0 ≤ y ≤ stock.lengthMm, within 1e-6 mm).
  */
 export function validateEngraveJob(job: EngraveJob): void {
-  assertPositive(job.stock.widthMm, 'stock.widthMm', 'mm');
-  assertPositive(job.stock.lengthMm, 'stock.lengthMm', 'mm');
-  assertPositive(job.stock.thicknessMm, 'stock.thicknessMm', 'mm');
+  assertPositive('stock.widthMm', job.stock.widthMm);
+  assertPositive('stock.lengthMm', job.stock.lengthMm);
+  assertPositive('stock.thicknessMm', job.stock.thicknessMm);
   job.paths.forEach((path, i) => {
     const at = `paths[${i}]`;
     const min = path.closed ? 3 : 2;
     if (!Array.isArray(path.points) || path.points.length < min) {
       throw new Error(
-        `${at}.points must hold at least ${min} points for a${path.closed ? ' closed' : 'n open'} path, got ${path.points?.length ?? quote(path.points)}`,
+        `${at}.points must hold at least ${min} points for a${path.closed ? ' closed' : 'n open'} path, got ${path.points?.length ?? formatValue(path.points)}`,
       );
     }
     path.points.forEach((p, j) => {
-      assertFinite(p[0], `${at}.points[${j}][0]`);
-      assertFinite(p[1], `${at}.points[${j}][1]`);
+      assertFinite(`${at}.points[${j}][0]`, p[0]);
+      assertFinite(`${at}.points[${j}][1]`, p[1]);
       assertOnStock(p, `${at}.points[${j}]`, job.stock);
     });
-    assertPositive(path.widthMm, `${at}.widthMm`, 'mm');
+    assertPositive(`${at}.widthMm`, path.widthMm);
     if (!OPERATIONS.includes(path.operation)) {
-      throw new Error(`${at}.operation must be one of ${OPERATIONS.join(', ')}, got ${quote(path.operation)}`);
+      throw new Error(`${at}.operation must be one of ${OPERATIONS.join(', ')}, got ${formatValue(path.operation)}`);
     }
   });
 }

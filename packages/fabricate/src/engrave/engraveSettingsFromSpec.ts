@@ -1,5 +1,8 @@
-import { SpecError, type DialSpec } from '@umbrafab/geometry';
+import { SpecError, isSpecError, type DialSpec } from '@umbrafab/geometry';
 import { MATERIAL_NAMES, resolveEngraveSettings, type EngraveOverrides, type EngraveSettings } from './materialPresets.ts';
+
+/** The settings that sit under `engrave.tool` in the spec (the rest sit under `engrave`). */
+const TOOL_SETTINGS: ReadonlySet<string> = new Set(['vbitAngleDeg', 'vbitTipMm', 'vbitMaxWidthMm', 'flatEndMillMm', 'flatMinWidthMm', 'flatDepthMm', 'flatStepoverFraction']);
 
 /**
  * The engraving settings of a spec: the preset of `plate.material`
@@ -50,7 +53,9 @@ export function engraveSettingsFromSpec(spec: DialSpec): EngraveSettings {
   try {
     return resolveEngraveSettings(material, overrides);
   } catch (err) {
-    // The schema checks every field first; this is a safety net naming the section.
-    throw new SpecError('engrave', e, 'allowed: the ranges given by each engrave field', (err as Error).message);
+    // The schema checks each field alone; the settings' own checks (one value
+    // against another, e.g. clearanceZMm against safeZMm) name the spec field here.
+    if (!isSpecError(err)) throw err;
+    throw new SpecError(TOOL_SETTINGS.has(err.field) ? `engrave.tool.${err.field}` : `engrave.${err.field}`, err.value, err.allowed);
   }
 }

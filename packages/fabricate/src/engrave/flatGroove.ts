@@ -1,4 +1,4 @@
-import { assertInRange, assertPositive } from './checks.ts';
+import { assertPositive, assertRange } from '@umbrafab/geometry';
 import type { Vec2 } from './engraveInput.ts';
 import { offsetPolyline } from './offsetPolyline.ts';
 
@@ -21,9 +21,9 @@ export function flatGroovePath(
   toolMm: number,
   stepoverFraction: number,
 ): readonly Vec2[] {
-  assertPositive(widthMm, 'widthMm', 'mm');
-  assertPositive(toolMm, 'flatEndMillMm', 'mm');
-  assertInRange(stepoverFraction, 'flatStepoverFraction', 0, 1);
+  assertPositive('widthMm', widthMm);
+  assertPositive('flatEndMillMm', toolMm);
+  assertRange('flatStepoverFraction', stepoverFraction, 0, 1, '', 'lo');
   const spanMm = widthMm - toolMm;
   if (!(spanMm > 1e-9)) return points;
   const rows = Math.ceil(spanMm / (toolMm * stepoverFraction) - 1e-9) + 1;

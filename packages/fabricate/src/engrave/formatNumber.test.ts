@@ -17,6 +17,6 @@ describe('formatNumber', () => {
   });
 
   it('rejects a non-finite value', () => {
-    expect(() => formatNumber(Number.POSITIVE_INFINITY, 3)).toThrow(/value must be a finite number, got Infinity/);
+    expect(() => formatNumber(Number.POSITIVE_INFINITY, 3)).toThrow('value: got Infinity (not a finite number); a finite number is required');
   });
 });

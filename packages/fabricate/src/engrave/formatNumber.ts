@@ -1,4 +1,4 @@
-import { assertFinite } from './checks.ts';
+import { assertFinite } from '@umbrafab/geometry';
 
 /**
  * The one place where G-code numbers are rounded, so output is byte-stable:
@@ -10,9 +10,9 @@ import { assertFinite } from './checks.ts';
  * @example formatNumber(12.5, 3, true) // '12.5'
  */
 export function formatNumber(value: number, decimals: number, trim = false): string {
-  assertFinite(value, 'value');
+  assertFinite('value', value);
   let text = value.toFixed(decimals);
-  if (/^-0(\.0*)?$/.test(text)) text = text.slice(1);
+  if (text.charCodeAt(0) === 0x2d && /^-0(\.0*)?$/.test(text)) text = text.slice(1);
   if (trim && text.includes('.')) text = text.replace(/0+$/, '').replace(/\.$/, '');
   return text;
 }

@@ -61,10 +61,7 @@ export function serializeGcode(records: readonly GcodeRecord[], decimals: number
   const lines: string[] = options.percent ? ['%'] : [];
   let feed: string | undefined;
   const axes = (to: AxisTarget): string =>
-    (['x', 'y', 'z'] as const)
-      .filter((a) => to[a] !== undefined)
-      .map((a) => ` ${a.toUpperCase()}${formatNumber(to[a] as number, decimals)}`)
-      .join('');
+    (to.x === undefined ? '' : ` X${formatNumber(to.x, decimals)}`) + (to.y === undefined ? '' : ` Y${formatNumber(to.y, decimals)}`) + (to.z === undefined ? '' : ` Z${formatNumber(to.z, decimals)}`);
   for (const r of records) {
     switch (r.kind) {
       case 'comment':

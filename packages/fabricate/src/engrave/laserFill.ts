@@ -77,6 +77,7 @@ function rectPoly(r: RoundedRect): Poly {
  * @example (await laserFillPasses(job, { beamMm: 0.15, intervalMm: 0.15, chordToleranceMm: 0.005, holes: [], slots: [] })).rings
  */
 export async function laserFillPasses(job: EngraveJob, o: LaserFillOptions): Promise<LaserFill> {
+  // parseSpec refuses an interval wider than the beam first (engrave.laserFillIntervalMm)
   if (!(o.beamMm > 0) || !(o.intervalMm > 0) || o.intervalMm > o.beamMm + 1e-12) {
     throw new Error(`laser fill needs 0 < intervalMm <= beamMm, got interval ${o.intervalMm} mm, beam ${o.beamMm} mm`);
   }

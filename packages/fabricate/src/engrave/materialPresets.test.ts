@@ -19,27 +19,27 @@ describe('resolveEngraveSettings', () => {
   });
 
   it('rejects bad values, naming the field and the value', () => {
-    expect(() => resolveEngraveSettings('brass', { feedMmPerMin: 0 })).toThrow('feedMmPerMin must be > 0 mm/min, got 0');
-    expect(() => resolveEngraveSettings('brass', { feedMmPerMin: -5 })).toThrow('feedMmPerMin must be > 0 mm/min, got -5');
-    expect(() => resolveEngraveSettings('brass', { plungeMmPerMin: 0 })).toThrow(/plungeMmPerMin .*got 0/);
-    expect(() => resolveEngraveSettings('brass', { clearanceZMm: 11 })).toThrow('clearanceZMm 11 must not exceed safeZMm 10');
-    expect(() => resolveEngraveSettings('brass', { entryZMm: 2 })).toThrow('entryZMm 2 must not exceed clearanceZMm 1');
-    expect(() => resolveEngraveSettings('brass', { coolant: 'air' as never })).toThrow('coolant must be one of off, mist, flood, got "air"');
-    expect(() => resolveEngraveSettings('brass', { spindleDwellS: -1 })).toThrow('spindleDwellS must be >= 0 s, got -1');
-    expect(() => resolveEngraveSettings('brass', { rampAngleDeg: 95 })).toThrow(/rampAngleDeg must be in \(0, 90\] deg, got 95/);
-    expect(() => resolveEngraveSettings('brass', { vbitAngleDeg: 0 })).toThrow(/vbitAngleDeg must be in \(0, 180\) deg, got 0/);
-    expect(() => resolveEngraveSettings('brass', { laserPowerPct: 120 })).toThrow(/laserPowerPct must be in \(0, 100\] %, got 120/);
-    expect(() => resolveEngraveSettings('brass', { vbitTipMm: 4 })).toThrow('vbitMaxWidthMm 3.175 must exceed vbitTipMm 4');
-    expect(() => resolveEngraveSettings('brass', { flatEndMillMm: 2, flatMinWidthMm: 1 })).toThrow(/flatMinWidthMm 1 must be >= flatEndMillMm 2/);
+    expect(() => resolveEngraveSettings('brass', { feedMmPerMin: 0 })).toThrow('feedMmPerMin: got 0; a number greater than 0 is required');
+    expect(() => resolveEngraveSettings('brass', { feedMmPerMin: -5 })).toThrow('feedMmPerMin: got -5; a number greater than 0 is required');
+    expect(() => resolveEngraveSettings('brass', { plungeMmPerMin: 0 })).toThrow(/plungeMmPerMin: got 0;/);
+    expect(() => resolveEngraveSettings('brass', { clearanceZMm: 11 })).toThrow('clearanceZMm: got 11; allowed: at most safeZMm (10)');
+    expect(() => resolveEngraveSettings('brass', { entryZMm: 2 })).toThrow('entryZMm: got 2; allowed: at most clearanceZMm (1)');
+    expect(() => resolveEngraveSettings('brass', { coolant: 'air' as never })).toThrow('coolant: got "air"; allowed: off, mist, flood');
+    expect(() => resolveEngraveSettings('brass', { spindleDwellS: -1 })).toThrow('spindleDwellS: got -1; a number 0 or greater is required');
+    expect(() => resolveEngraveSettings('brass', { rampAngleDeg: 95 })).toThrow('rampAngleDeg: got 95; allowed: more than 0°, up to 90°');
+    expect(() => resolveEngraveSettings('brass', { vbitAngleDeg: 0 })).toThrow('vbitAngleDeg: got 0; allowed: more than 0° and less than 180°');
+    expect(() => resolveEngraveSettings('brass', { laserPowerPct: 120 })).toThrow('laserPowerPct: got 120; allowed: more than 0%, up to 100%');
+    expect(() => resolveEngraveSettings('brass', { vbitTipMm: 4 })).toThrow('vbitMaxWidthMm: got 3.175; allowed: more than vbitTipMm (4)');
+    expect(() => resolveEngraveSettings('brass', { flatEndMillMm: 2, flatMinWidthMm: 1 })).toThrow('flatMinWidthMm: got 1; allowed: flatEndMillMm (2) or more');
   });
 
   it('rejects an unknown material, listing the allowed ones', () => {
     expect(() => resolveEngraveSettings('granite')).toThrow(
-      'stock.material "granite" has no engraving preset; allowed: aluminium, brass, stainless, steel, acrylic, hardwood, plywood, slate',
+      'stock.material: "granite" has no engraving preset; allowed: aluminium, brass, stainless, steel, acrylic, hardwood, plywood, slate',
     );
   });
 
   it('rejects an unknown override key', () => {
-    expect(() => resolveEngraveSettings('slate', { feed: 100 } as never)).toThrow(/engrave setting "feed" is unknown; allowed: .*feedMmPerMin/);
+    expect(() => resolveEngraveSettings('slate', { feed: 100 } as never)).toThrow(/^engrave: the setting "feed" is unknown; allowed: .*feedMmPerMin/);
   });
 });

@@ -1,4 +1,4 @@
-import { assertFinite, assertInRange, assertPositive, assertNonNegative, quote } from './checks.ts';
+import { SpecError, assertFinite, assertNonNegative, assertPositive, assertRange } from '@umbrafab/geometry';
 import type { CoolantMode } from './gcodeRecords.ts';
 
 /**
@@ -152,7 +152,7 @@ export function rampFeedMmPerMin(s: { readonly feedMmPerMin: number; readonly pl
  *
  * @param material one of MATERIAL_NAMES
  * @param overrides any EngraveSettings field but `material`
- * @throws Error naming the field and value: unknown material (lists the allowed
+ * @throws SpecError naming the field (the setting's key) and value: unknown material (lists the allowed
  *   ones), unknown override key, feed/plunge/rpm/step-down <= 0, clearance above
  *   safe height, V-bit angle outside (0, 180) deg, tip wider than the bit,
  *   laser power outside (0, 100] %.
@@ -160,52 +160,47 @@ export function rampFeedMmPerMin(s: { readonly feedMmPerMin: number; readonly pl
  */
 export function resolveEngraveSettings(material: string, overrides: EngraveOverrides = {}): EngraveSettings {
   if (!(MATERIAL_NAMES as readonly string[]).includes(material)) {
-    throw new Error(`stock.material ${quote(material)} has no engraving preset; allowed: ${MATERIAL_NAMES.join(', ')}`);
+    throw new SpecError('stock.material', material, `allowed: ${MATERIAL_NAMES.join(', ')}`, `${JSON.stringify(material)} has no engraving preset`);
   }
   const given: Record<string, unknown> = {};
   for (const [key, value] of Object.entries(overrides)) {
     if (!SETTING_KEYS.includes(key)) {
-      throw new Error(`engrave setting ${quote(key)} is unknown; allowed: ${SETTING_KEYS.join(', ')}`);
+      throw new SpecError('engrave', key, `allowed: ${SETTING_KEYS.join(', ')}`, `the setting ${JSON.stringify(key)} is unknown`);
     }
     if (value !== undefined) given[key] = value;
   }
   const s = { ...ENGRAVE_DEFAULTS, ...MATERIAL_PRESETS[material as MaterialName], ...given, material } as EngraveSettings;
 
-  assertPositive(s.spindleRpm, 'spindleRpm', 'rev/min');
-  assertPositive(s.feedMmPerMin, 'feedMmPerMin', 'mm/min');
-  assertPositive(s.plungeMmPerMin, 'plungeMmPerMin', 'mm/min');
-  assertPositive(s.stepDownMm, 'stepDownMm', 'mm');
-  assertPositive(s.safeZMm, 'safeZMm', 'mm');
-  assertPositive(s.clearanceZMm, 'clearanceZMm', 'mm');
+  for (const key of ['spindleRpm', 'feedMmPerMin', 'plungeMmPerMin', 'stepDownMm', 'safeZMm', 'clearanceZMm'] as const) assertPositive(key, s[key]);
   if (s.clearanceZMm > s.safeZMm) {
-    throw new Error(`clearanceZMm ${s.clearanceZMm} must not exceed safeZMm ${s.safeZMm}`);
+    throw new SpecError('clearanceZMm', s.clearanceZMm, `allowed: at most safeZMm (${s.safeZMm})`);
   }
-  assertNonNegative(s.entryZMm, 'entryZMm', 'mm');
-  if (s.entryZMm > s.clearanceZMm) throw new Error(`entryZMm ${s.entryZMm} must not exceed clearanceZMm ${s.clearanceZMm}`);
-  if (s.rampAngleDeg !== undefined) assertInRange(s.rampAngleDeg, 'rampAngleDeg', 0, 90, { unit: 'deg' });
-  assertNonNegative(s.spindleDwellS, 'spindleDwellS', 's');
-  if (typeof s.toolWords !== 'boolean') throw new Error(`toolWords must be true or false, got ${quote(s.toolWords)}`);
-  if (!['off', 'mist', 'flood'].includes(s.coolant)) throw new Error(`coolant must be one of off, mist, flood, got ${quote(s.coolant)}`);
-  if (s.parkXMm !== undefined) assertFinite(s.parkXMm, 'parkXMm');
-  if (s.parkYMm !== undefined) assertFinite(s.parkYMm, 'parkYMm');
-  assertInRange(s.vbitAngleDeg, 'vbitAngleDeg', 0, 180, { hiInclusive: false, unit: 'deg' });
-  assertNonNegative(s.vbitTipMm, 'vbitTipMm', 'mm');
-  assertPositive(s.vbitMaxWidthMm, 'vbitMaxWidthMm', 'mm');
+  assertNonNegative('entryZMm', s.entryZMm);
+  if (s.entryZMm > s.clearanceZMm) throw new SpecError('entryZMm', s.entryZMm, `allowed: at most clearanceZMm (${s.clearanceZMm})`);
+  if (s.rampAngleDeg !== undefined) assertRange('rampAngleDeg', s.rampAngleDeg, 0, 90, '°', 'lo');
+  assertNonNegative('spindleDwellS', s.spindleDwellS);
+  if (typeof s.toolWords !== 'boolean') throw new SpecError('toolWords', s.toolWords, 'allowed: true or false');
+  if (!['off', 'mist', 'flood'].includes(s.coolant)) throw new SpecError('coolant', s.coolant, 'allowed: off, mist, flood');
+  if (s.parkXMm !== undefined) assertFinite('parkXMm', s.parkXMm);
+  if (s.parkYMm !== undefined) assertFinite('parkYMm', s.parkYMm);
+  assertRange('vbitAngleDeg', s.vbitAngleDeg, 0, 180, '°', 'both');
+  assertNonNegative('vbitTipMm', s.vbitTipMm);
+  assertPositive('vbitMaxWidthMm', s.vbitMaxWidthMm);
   if (!(s.vbitMaxWidthMm > s.vbitTipMm)) {
-    throw new Error(`vbitMaxWidthMm ${s.vbitMaxWidthMm} must exceed vbitTipMm ${s.vbitTipMm}`);
+    throw new SpecError('vbitMaxWidthMm', s.vbitMaxWidthMm, `allowed: more than vbitTipMm (${s.vbitTipMm})`);
   }
-  if (s.flatEndMillMm !== undefined) assertPositive(s.flatEndMillMm, 'flatEndMillMm', 'mm');
+  if (s.flatEndMillMm !== undefined) assertPositive('flatEndMillMm', s.flatEndMillMm);
   if (s.flatMinWidthMm !== undefined) {
-    assertPositive(s.flatMinWidthMm, 'flatMinWidthMm', 'mm');
+    assertPositive('flatMinWidthMm', s.flatMinWidthMm);
     if (s.flatEndMillMm !== undefined && s.flatMinWidthMm < s.flatEndMillMm) {
-      throw new Error(`flatMinWidthMm ${s.flatMinWidthMm} must be >= flatEndMillMm ${s.flatEndMillMm} (a mill cannot cut a narrower groove)`);
+      throw new SpecError('flatMinWidthMm', s.flatMinWidthMm, `allowed: flatEndMillMm (${s.flatEndMillMm}) or more (a mill cannot cut a narrower groove)`);
     }
   }
-  assertPositive(s.flatDepthMm, 'flatDepthMm', 'mm');
-  assertInRange(s.flatStepoverFraction, 'flatStepoverFraction', 0, 1);
-  assertInRange(s.laserPowerPct, 'laserPowerPct', 0, 100, { unit: '%' });
-  assertPositive(s.laserSpeedMmPerMin, 'laserSpeedMmPerMin', 'mm/min');
-  assertPositive(s.laserMaxS, 'laserMaxS');
-  assertPositive(s.rapidMmPerMin, 'rapidMmPerMin', 'mm/min');
+  assertPositive('flatDepthMm', s.flatDepthMm);
+  assertRange('flatStepoverFraction', s.flatStepoverFraction, 0, 1, '', 'lo');
+  assertRange('laserPowerPct', s.laserPowerPct, 0, 100, '%', 'lo');
+  assertPositive('laserSpeedMmPerMin', s.laserSpeedMmPerMin);
+  assertPositive('laserMaxS', s.laserMaxS);
+  assertPositive('rapidMmPerMin', s.rapidMmPerMin);
   return s;
 }

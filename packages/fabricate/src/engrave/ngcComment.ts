@@ -1,3 +1,30 @@
+/** Symbols written as ASCII words or letters. */
+const SYMBOLS: Readonly<Record<string, string>> = {
+  '°': ' deg',
+  'º': ' deg',
+  'µ': 'u',
+  'μ': 'u',
+  '×': 'x',
+  '−': '-',
+  '–': '-',
+  '—': '-',
+  '′': "'",
+  '″': '"',
+  '‘': "'",
+  '’': "'",
+  '“': '"',
+  '”': '"',
+  '±': '+/-',
+  '…': '...',
+  'ß': 'ss',
+  'æ': 'ae',
+  'Æ': 'AE',
+  'ø': 'o',
+  'Ø': 'O',
+  'œ': 'oe',
+  'Œ': 'OE',
+};
+
 /**
  * Make text safe inside one RS-274/NGC comment `( … )`.
  *
@@ -17,34 +44,14 @@
  * @example ngcComment('tilt 51.5° (north)') // 'tilt 51.5 deg [north]'
  */
 export function ngcComment(text: string): string {
-  const symbols: Readonly<Record<string, string>> = {
-    '°': ' deg',
-    'º': ' deg',
-    'µ': 'u',
-    'μ': 'u',
-    '×': 'x',
-    '−': '-',
-    '–': '-',
-    '—': '-',
-    '′': "'",
-    '″': '"',
-    '‘': "'",
-    '’': "'",
-    '“': '"',
-    '”': '"',
-    '±': '+/-',
-    '…': '...',
-    'ß': 'ss',
-    'æ': 'ae',
-    'Æ': 'AE',
-    'ø': 'o',
-    'Ø': 'O',
-    'œ': 'oe',
-    'Œ': 'OE',
-  };
   let out = '';
   for (const ch of text) {
-    const mapped = symbols[ch] ?? ch.normalize('NFD').replace(/[\u0300-\u036f]/g, '');
+    const first = ch.charCodeAt(0);
+    if (first >= 0x20 && first < 0x7f && first !== 0x28 && first !== 0x29) {
+      out += ch; // printable ASCII other than parentheses: kept as it is (the rules below leave it so)
+      continue;
+    }
+    const mapped = SYMBOLS[ch] ?? ch.normalize('NFD').replace(/[\u0300-\u036f]/g, '');
     for (const c of mapped) {
       const code = c.codePointAt(0) as number;
       if (c === '(') out += '[';

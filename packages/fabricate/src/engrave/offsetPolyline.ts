@@ -1,4 +1,4 @@
-import { assertFinite } from './checks.ts';
+import { assertFinite } from '@umbrafab/geometry';
 import type { Vec2 } from './engraveInput.ts';
 
 /**
@@ -13,7 +13,7 @@ import type { Vec2 } from './engraveInput.ts';
  * @example offsetPolyline([[0, 0], [10, 0]], 1) // [[0, 1], [10, 1]]
  */
 export function offsetPolyline(points: readonly Vec2[], distanceMm: number): readonly Vec2[] {
-  assertFinite(distanceMm, 'distanceMm');
+  assertFinite('distanceMm', distanceMm);
   const pts = points.filter((p, i) => i === 0 || p[0] !== points[i - 1][0] || p[1] !== points[i - 1][1]);
   if (pts.length < 2) return pts.map((p) => [p[0], p[1]] as const);
   const normals = pts.slice(1).map((p, i) => {

@@ -68,18 +68,20 @@ export interface OrderedPaths<T extends OrderablePath> {
   readonly end: Vec2;
 }
 
-function entryOf(p: OrderablePath, reversed: boolean): Vec2 {
+/** Where the tool enters a path traced in the given direction. */
+export function entryOf(p: OrderablePath, reversed: boolean): Vec2 {
   if (p.closed) return p.points[0];
   return reversed ? p.points[p.points.length - 1] : p.points[0];
 }
 
-function exitOf(p: OrderablePath, reversed: boolean): Vec2 {
+/** Where the tool leaves a path traced in the given direction. */
+export function exitOf(p: OrderablePath, reversed: boolean): Vec2 {
   if (p.closed || p.endsAtStart) return entryOf(p, reversed);
   return reversed ? p.points[0] : p.points[p.points.length - 1];
 }
 
 /** End points a path can be entered or left at. */
-function endsOf(p: OrderablePath): readonly Vec2[] {
+export function endsOf(p: OrderablePath): readonly Vec2[] {
   return p.closed ? [p.points[0]] : [p.points[0], p.points[p.points.length - 1]];
 }
 
@@ -102,59 +104,200 @@ export function travelLowerBoundMm(paths: readonly OrderablePath[], start: Vec2 
   const ends: (readonly Vec2[])[] = [[start], ...paths.map(endsOf)];
   // Node-to-node weights (the shortest distance between any of their ends),
   // computed once into a flat matrix: both bounds read each weight often.
-  const W = new Float64Array((n + 1) * (n + 1));
-  for (let i = 0; i <= n; i += 1) {
-    for (let j = i + 1; j <= n; j += 1) {
-      let best = Infinity;
-      for (const a of ends[i]) for (const b of ends[j]) best = Math.min(best, Math.sqrt((a[0] - b[0]) ** 2 + (a[1] - b[1]) ** 2));
-      W[i * (n + 1) + j] = best;
-      W[j * (n + 1) + i] = best;
-    }
-  }
-  const w = (i: number, j: number): number => W[i * (n + 1) + j];
-  // Prim's algorithm over nodes 0 (start) … n.
-  const inTree = new Array<boolean>(n + 1).fill(false);
-  const key = new Array<number>(n + 1).fill(Infinity);
-  key[0] = 0;
-  let mst = 0;
-  for (let step = 0; step <= n; step += 1) {
-    let u = -1;
-    for (let v = 0; v <= n; v += 1) if (!inTree[v] && (u < 0 || key[v] < key[u])) u = v;
-    inTree[u] = true;
-    mst += key[u];
-    for (let v = 0; v <= n; v += 1) if (!inTree[v]) key[v] = Math.min(key[v], w(u, v));
-  }
+  const W = nodeWeights(ends);
+  const mst = spanningTreeMm(W, n + 1);
   let incoming = 0;
   for (let i = 1; i <= n; i += 1) {
     let best = Infinity;
-    for (let j = 0; j <= n; j += 1) if (j !== i) best = Math.min(best, w(i, j));
+    for (let j = 0; j <= n; j += 1) if (j !== i) best = Math.min(best, W[i * (n + 1) + j]);
     incoming += best;
   }
   return Math.max(mst, incoming);
 }
 
+/** The (m × m) matrix of least distances between any end of node i and any end of node j (each node has one or two ends). */
+function nodeWeights(ends: readonly (readonly Vec2[])[]): Float64Array {
+  const m = ends.length;
+  const ax = new Float64Array(m);
+  const ay = new Float64Array(m);
+  const bx = new Float64Array(m);
+  const by = new Float64Array(m);
+  const two = new Uint8Array(m);
+  ends.forEach((e, i) => {
+    ax[i] = e[0][0];
+    ay[i] = e[0][1];
+    two[i] = e.length > 1 ? 1 : 0;
+    bx[i] = e[e.length - 1][0];
+    by[i] = e[e.length - 1][1];
+  });
+  const W = new Float64Array(m * m);
+  for (let i = 0; i < m; i += 1) {
+    for (let j = i + 1; j < m; j += 1) {
+      // The root of the least squared sum is the least root (the root is monotone): one root per pair.
+      let best = (ax[i] - ax[j]) ** 2 + (ay[i] - ay[j]) ** 2;
+      if (two[j]) best = Math.min(best, (ax[i] - bx[j]) ** 2 + (ay[i] - by[j]) ** 2);
+      if (two[i]) {
+        best = Math.min(best, (bx[i] - ax[j]) ** 2 + (by[i] - ay[j]) ** 2);
+        if (two[j]) best = Math.min(best, (bx[i] - bx[j]) ** 2 + (by[i] - by[j]) ** 2);
+      }
+      const w = Math.sqrt(best);
+      W[i * m + j] = w;
+      W[j * m + i] = w;
+    }
+  }
+  return W;
+}
+
+/** Prim's algorithm over the m nodes of the weight matrix W from node 0: the minimum spanning tree's weight. */
+function spanningTreeMm(W: Float64Array, m: number): number {
+  const inTree = new Uint8Array(m);
+  const key = new Float64Array(m).fill(Infinity);
+  key[0] = 0;
+  let mst = 0;
+  for (let step = 0; step < m; step += 1) {
+    let u = -1;
+    for (let v = 0; v < m; v += 1) if (!inTree[v] && (u < 0 || key[v] < key[u])) u = v;
+    inTree[u] = 1;
+    mst += key[u];
+    const row = u * m;
+    for (let v = 0; v < m; v += 1) if (!inTree[v]) key[v] = Math.min(key[v], W[row + v]);
+  }
+  return mst;
+}
+
+/** Below this many paths left, the nearest-neighbour step scans them all. */
+const NN_SCAN_BELOW = 24;
+
+/**
+ * Nearest neighbour from `start`: each step takes the entry nearest the
+ * tool's position, ties to the lower index, then the forward direction.
+ * The entries sit in a uniform grid (about one per cell), searched ring by
+ * ring outwards from the tool until no nearer cell can hold a nearer entry,
+ * so a step reads a few cells instead of every path; distances are the same
+ * `distanceMm` and the tie rule the same, so the order is the one a full
+ * scan gives.
+ */
 function nearestNeighbour(paths: readonly OrderablePath[], start: Vec2): PathVisit[] {
-  const left = new Set(paths.map((_, i) => i));
+  const n = paths.length;
+  // Candidates: (path, direction) with their entry points; index 2i forward, 2i + 1 reversed.
+  const cx = new Float64Array(2 * n);
+  const cy = new Float64Array(2 * n);
+  let x0 = Infinity;
+  let y0 = Infinity;
+  let x1 = -Infinity;
+  let y1 = -Infinity;
+  for (let i = 0; i < n; i += 1) {
+    for (let r = 0; r < 2; r += 1) {
+      const e = entryOf(paths[i], r === 1);
+      cx[2 * i + r] = e[0];
+      cy[2 * i + r] = e[1];
+      x0 = Math.min(x0, e[0]);
+      y0 = Math.min(y0, e[1]);
+      x1 = Math.max(x1, e[0]);
+      y1 = Math.max(y1, e[1]);
+    }
+  }
+  const side = Math.max(1, Math.ceil(Math.sqrt(n)));
+  const cell = Math.max((x1 - x0) / side, (y1 - y0) / side, 1e-9);
+  const nx = Math.max(1, Math.floor((x1 - x0) / cell) + 1);
+  const ny = Math.max(1, Math.floor((y1 - y0) / cell) + 1);
+  const cellX = (x: number): number => Math.min(nx - 1, Math.max(0, Math.floor((x - x0) / cell)));
+  const cellY = (y: number): number => Math.min(ny - 1, Math.max(0, Math.floor((y - y0) / cell)));
+  // Each cell's candidates, kept in ascending candidate order (so ties resolve as in a full scan).
+  const cells: number[][] = Array.from({ length: nx * ny }, () => []);
+  for (let c = 0; c < 2 * n; c += 1) {
+    if (c % 2 === 1 && paths[(c - 1) / 2].closed) continue;
+    cells[cellY(cy[c]) * nx + cellX(cx[c])].push(c);
+  }
+  const done = new Uint8Array(n);
+  let remaining = n;
   const visits: PathVisit[] = [];
   let at = start;
-  while (left.size > 0) {
-    let best: PathVisit | undefined;
+  while (remaining > 0) {
+    let best = -1;
     let bestD = Infinity;
-    for (const i of left) {
-      for (const reversed of paths[i].closed ? [false] : [false, true]) {
-        const d = distanceMm(at, entryOf(paths[i], reversed));
-        if (d < bestD) {
-          bestD = d;
-          best = { index: i, reversed };
+    const consider = (c: number): void => {
+      const d = distanceMm(at, [cx[c], cy[c]]);
+      if (d < bestD || (d === bestD && c < best)) {
+        bestD = d;
+        best = c;
+      }
+    };
+    if (remaining < NN_SCAN_BELOW) {
+      for (let i = 0; i < n; i += 1) {
+        if (done[i]) continue;
+        consider(2 * i);
+        if (!paths[i].closed) consider(2 * i + 1);
+      }
+    } else {
+      // Rings are counted from the tool's cell (clamped into the grid when the tool stands outside it). A cell
+      // in ring r lies at least (r - 1) cells from the tool along x or y, and every cell at least `outside`.
+      const ax = cellX(at[0]);
+      const ay = cellY(at[1]);
+      const outside = Math.max(x0 - at[0], at[0] - (x0 + nx * cell), y0 - at[1], at[1] - (y0 + ny * cell), 0);
+      const rings = Math.max(ax, nx - 1 - ax, ay, ny - 1 - ay);
+      for (let r = 0; r <= rings; r += 1) {
+        // Stop once ring r cannot hold an entry as near as the best found (with a margin for rounding).
+        if (r >= 1 && Math.max((r - 1) * cell, outside) > bestD * (1 + 1e-9) + 1e-9) break;
+        for (let gy = ay - r; gy <= ay + r; gy += 1) {
+          if (gy < 0 || gy >= ny) continue;
+          const edge = gy === ay - r || gy === ay + r;
+          for (let gx = ax - r; gx <= ax + r; gx += edge ? 1 : 2 * r) {
+            if (gx >= 0 && gx < nx) for (const c of cells[gy * nx + gx]) if (!done[c >> 1]) consider(c);
+            if (r === 0) break;
+          }
         }
       }
     }
-    const chosen = best as PathVisit;
-    visits.push(chosen);
-    left.delete(chosen.index);
-    at = exitOf(paths[chosen.index], chosen.reversed);
+    const index = best >> 1;
+    const reversed = (best & 1) === 1;
+    visits.push({ index, reversed });
+    done[index] = 1;
+    remaining -= 1;
+    at = exitOf(paths[index], reversed);
   }
   return visits;
+}
+
+/** The sequence's entry and exit points by position, and the squared rapid from each exit to the next entry. */
+interface RunEnds {
+  readonly enX: Float64Array;
+  readonly enY: Float64Array;
+  readonly exX: Float64Array;
+  readonly exY: Float64Array;
+  readonly sqLink: Float64Array;
+}
+
+/**
+ * The first k ≥ kFrom at which reversing the run i..k shortens the travel by
+ * more than `eps`, or -1 (the 2-opt scan of `improve`; B = (bx, by) is where
+ * the tool stands before position i). A small function of its own, so that
+ * V8 optimises this hot loop early and the moves never deoptimise it.
+ */
+function firstShorterRun(e: RunEnds, i: number, kFrom: number, bx: number, by: number, eps: number): number {
+  const { enX, enY, exX, exY, sqLink } = e;
+  const n = enX.length;
+  const ix = enX[i];
+  const iy = enY[i];
+  const sqIn = (bx - ix) * (bx - ix) + (by - iy) * (by - iy);
+  for (let k = kFrom; k < n; k += 1) {
+    const hasNext = k + 1 < n;
+    const ax = bx - exX[k];
+    const ay = by - exY[k];
+    const sqA = ax * ax + ay * ay;
+    let sqC = 0;
+    if (hasNext) {
+      const cx = ix - enX[k + 1];
+      const cy = iy - enY[k + 1];
+      sqC = cx * cx + cy * cy;
+    }
+    // Neither new rapid shorter than the one it replaces: no gain (exact on the squared sums, as the root is monotone).
+    if (sqA >= sqIn && (!hasNext || sqC >= sqLink[k])) continue;
+    const oldCost = Math.sqrt(sqIn) + (hasNext ? Math.sqrt(sqLink[k]) : 0);
+    const newCost = Math.sqrt(sqA) + (hasNext ? Math.sqrt(sqC) : 0);
+    if (newCost < oldCost - eps) return k;
+  }
+  return -1;
 }
 
 function improve(paths: readonly OrderablePath[], initial: readonly PathVisit[], start: Vec2, maxRounds: number): PathVisit[] {
@@ -207,23 +350,34 @@ function improve(paths: readonly OrderablePath[], initial: readonly PathVisit[],
     // 2-opt: reverse the run i..k. Paths whose entry and exit differ flip
     // direction, the others keep it; either way the new run enters at exit(k)
     // and leaves at entry(i), and the rapids inside the run keep their lengths.
+    // A move replaces the rapids B→entry(i) and exit(k)→entry(k+1) with
+    // B→exit(k) and entry(i)→entry(k+1); it can only shorten the travel if one
+    // of the new rapids is shorter than the one it replaces. The test is made
+    // first on the squared sums the distances are the roots of (the root is
+    // monotone, so it gives the same answer), and only a candidate that passes
+    // it is costed exactly as before: the same moves in the same order.
+    const sqLink = new Float64Array(n); // squared rapid from position k's exit to k + 1's entry
+    const setLink = (k: number): void => {
+      if (k < 0 || k + 1 >= n) return;
+      const dx = exX[k] - enX[k + 1];
+      const dy = exY[k] - enY[k + 1];
+      sqLink[k] = dx * dx + dy * dy;
+    };
+    for (let k = 0; k + 1 < n; k += 1) setLink(k);
+    const ends: RunEnds = { enX, enY, exX, exY, sqLink };
     for (let i = 0; i < n - 1; i += 1) {
-      for (let k = i + 1; k < n; k += 1) {
-        const bx = i === 0 ? start[0] : exX[i - 1];
-        const by = i === 0 ? start[1] : exY[i - 1];
-        const hasNext = k + 1 < n;
-        const oldCost = d(bx, by, enX[i], enY[i]) + (hasNext ? d(exX[k], exY[k], enX[k + 1], enY[k + 1]) : 0);
-        const newCost = d(bx, by, exX[k], exY[k]) + (hasNext ? d(enX[i], enY[i], enX[k + 1], enY[k + 1]) : 0);
-        if (newCost < oldCost - EPS) {
-          const run = seq.slice(i, k + 1).reverse().map((v): PathVisit => {
-            const p = paths[v.index];
-            const turns = !p.closed && !p.endsAtStart;
-            return turns ? { index: v.index, reversed: !v.reversed } : v;
-          });
-          seq.splice(i, run.length, ...run);
-          for (let j = i; j <= k; j += 1) refresh(j);
-          improved = true;
-        }
+      const bx = i === 0 ? start[0] : exX[i - 1];
+      const by = i === 0 ? start[1] : exY[i - 1];
+      for (let k = firstShorterRun(ends, i, i + 1, bx, by, EPS); k >= 0; k = firstShorterRun(ends, i, k + 1, bx, by, EPS)) {
+        const run = seq.slice(i, k + 1).reverse().map((v): PathVisit => {
+          const p = paths[v.index];
+          const turns = !p.closed && !p.endsAtStart;
+          return turns ? { index: v.index, reversed: !v.reversed } : v;
+        });
+        seq.splice(i, run.length, ...run);
+        for (let j = i; j <= k; j += 1) refresh(j);
+        for (let j = i - 1; j <= k; j += 1) setLink(j);
+        improved = true;
       }
     }
     if (!improved) break;

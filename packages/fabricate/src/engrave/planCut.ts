@@ -242,6 +242,7 @@ export function planCut(parts: readonly PartLoops[], o: PlanCutOptions): CutPlan
       const centre = move([h.cx, h.cy]);
       if (Math.abs(d - s.toolDiameterMm) <= DRILL_MATCH_MM) inner.push({ kind: 'drill', part: part.name, label, centre, diameterMm: d });
       else if (d > s.toolDiameterMm) inner.push({ kind: 'helix', part: part.name, label, centre, diameterMm: d, pathRadiusMm: h.radiusMm - r });
+      // a bug: assertToolFits refuses a tool wider than a hole first (process.kerf)
       else throw new Error(`the ${part.name}'s ${label} is narrower than the ${s.toolDiameterMm} mm tool`);
     });
     const loop = (l: ToolCentreLoop, label: string, tabsWanted: number): CutOperation => {

@@ -1,4 +1,4 @@
-import { assertPositive } from './checks.ts';
+import { assertPositive } from '@umbrafab/geometry';
 import type { Vec2 } from './engraveInput.ts';
 
 /** A tool-centre point `[x, y, z]`, mm; z < 0 is below the stock top. */
@@ -58,7 +58,7 @@ function cumulative(leg: readonly Vec2[]): number[] {
  * @example rampedPasses([[0, 0], [10, 0]], false, [0.1, 0.2], 0.5).path.at(-1) // [10, 0, -0.2]
  */
 export function rampedPasses(points: readonly Vec2[], closed: boolean, depthsMm: readonly number[], slope: number): RampedPasses {
-  assertPositive(slope, 'ramp slope');
+  assertPositive('ramp slope', slope);
   if (points.length < 2 || depthsMm.length === 0) throw new Error(`rampedPasses needs at least 2 points and 1 depth, got ${points.length} and ${depthsMm.length}`);
   const forward: readonly Vec2[] = closed ? [...points, points[0]] : points;
   const backward: readonly Vec2[] = [...forward].reverse();

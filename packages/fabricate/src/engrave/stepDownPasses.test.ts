@@ -17,6 +17,6 @@ describe('stepDownPasses', () => {
   });
 
   it('rejects a zero step', () => {
-    expect(() => stepDownPasses(0.2, 0)).toThrow(/stepDownMm must be > 0.*got 0/);
+    expect(() => stepDownPasses(0.2, 0)).toThrow('stepDownMm: got 0; a number greater than 0 is required');
   });
 });

@@ -45,6 +45,7 @@ export async function toolCentrePaths(part: SheetPart, toolRadiusMm: number, tol
     const grown = section.offset(delta, 'Round', 2, segments);
     try {
       const polys = grown.toPolygons();
+      // not expected from a spec: assertToolFits first refuses a tool wider than any hole, slot or notch (process.kerf)
       if (polys.length !== 1) throw new Error(`the tool-centre path of the ${part.name}'s ${what} has ${polys.length} loops, expected 1 (a tool of radius ${toolRadiusMm} mm does not fit it)`);
       return ccw(polys[0].map((p): Vec2 => [p[0], p[1]])) as Vec2[];
     } finally {

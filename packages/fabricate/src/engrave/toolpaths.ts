@@ -108,6 +108,8 @@ export function buildToolpaths(job: EngraveJob, settings: EngraveSettings, optio
   job.paths.forEach((p, i) => {
     if (toolOf(i) === 'vbit' && (widest < 0 || p.widthMm > job.paths[widest].widthMm)) widest = i;
   });
+  // These three are refused by parseSpec first, naming the spec field
+  // (engrave.tool.*, plate.thickness); here they guard direct calls.
   if (widest >= 0 && job.paths[widest].widthMm > s.vbitMaxWidthMm) {
     const p = job.paths[widest];
     throw new Error(

@@ -19,9 +19,9 @@ describe('vbitDepthMm', () => {
   });
 
   it('rejects bad input, naming the field', () => {
-    expect(() => vbitDepthMm(0.1, 90, 0.2)).toThrow(/widthMm 0.1 must exceed vbitTipMm 0.2/);
-    expect(() => vbitDepthMm(0.5, 180)).toThrow(/vbitAngleDeg .*180/);
-    expect(() => vbitDepthMm(0, 90)).toThrow(/widthMm must be > 0.*got 0/);
-    expect(() => vbitDepthMm(Number.NaN, 90)).toThrow(/widthMm must be a finite number, got NaN/);
+    expect(() => vbitDepthMm(0.1, 90, 0.2)).toThrow('widthMm: got 0.1; allowed: more than vbitTipMm (0.2)');
+    expect(() => vbitDepthMm(0.5, 180)).toThrow('vbitAngleDeg: got 180; allowed: more than 0° and less than 180°');
+    expect(() => vbitDepthMm(0, 90)).toThrow('widthMm: got 0; a number greater than 0 is required');
+    expect(() => vbitDepthMm(Number.NaN, 90)).toThrow('widthMm: got NaN (not a number); a finite number is required');
   });
 });

@@ -1,4 +1,4 @@
-import { assertInRange, assertNonNegative, assertPositive } from './checks.ts';
+import { SpecError, assertNonNegative, assertPositive, assertRange } from '@umbrafab/geometry';
 
 /**
  * Depth at which a V-bit cuts a groove of the given width on the face.
@@ -19,11 +19,11 @@ import { assertInRange, assertNonNegative, assertPositive } from './checks.ts';
  * @example vbitDepthMm(0.5, 90) // 0.25
  */
 export function vbitDepthMm(widthMm: number, angleDeg: number, tipMm = 0): number {
-  assertPositive(widthMm, 'widthMm', 'mm');
-  assertInRange(angleDeg, 'vbitAngleDeg', 0, 180, { hiInclusive: false, unit: 'deg' });
-  assertNonNegative(tipMm, 'vbitTipMm', 'mm');
+  assertPositive('widthMm', widthMm);
+  assertRange('vbitAngleDeg', angleDeg, 0, 180, '°', 'both');
+  assertNonNegative('vbitTipMm', tipMm);
   if (!(widthMm > tipMm)) {
-    throw new Error(`widthMm ${widthMm} must exceed vbitTipMm ${tipMm}: a flat-tipped V-bit cuts at least its tip width`);
+    throw new SpecError('widthMm', widthMm, `allowed: more than vbitTipMm (${tipMm}): a flat-tipped V-bit cuts at least its tip width`);
   }
   const halfAngleRad = (angleDeg * Math.PI) / 360;
   return (widthMm - tipMm) / (2 * Math.tan(halfAngleRad));

@@ -1,5 +1,6 @@
 import { createRequire } from 'node:module';
 import type * as ResvgJs from '@resvg/resvg-js';
+import { assertRange } from '@umbrafab/geometry';
 
 /**
  * The rasteriser (resvg, a native module) loads on the first picture, not
@@ -32,9 +33,7 @@ const PX_PER_IN = 96;
  */
 export function toPng(svg: string, options: Partial<PngOptions> = {}): Uint8Array {
   const o = { ...PNG_DEFAULTS, ...options };
-  if (!(Number.isFinite(o.pxPerMm) && o.pxPerMm > 0 && o.pxPerMm <= 50)) {
-    throw new Error(`pxPerMm = ${o.pxPerMm} is not allowed: it must be a number greater than 0 and at most 50`);
-  }
+  assertRange('pxPerMm', o.pxPerMm, 0, 50, '', 'lo');
   const { Resvg } = createRequire(import.meta.url)('@resvg/resvg-js') as typeof ResvgJs; // sync: a CommonJS load from this file's own dependencies
   const r = new Resvg(svg, resvgOptions(svg, o));
   return new Uint8Array(r.render().asPng());
@@ -46,9 +45,7 @@ export function toPng(svg: string, options: Partial<PngOptions> = {}): Uint8Arra
  */
 export async function toPngAsync(svg: string, options: Partial<PngOptions> = {}): Promise<Uint8Array> {
   const o = { ...PNG_DEFAULTS, ...options };
-  if (!(Number.isFinite(o.pxPerMm) && o.pxPerMm > 0 && o.pxPerMm <= 50)) {
-    throw new Error(`pxPerMm = ${o.pxPerMm} is not allowed: it must be a number greater than 0 and at most 50`);
-  }
+  assertRange('pxPerMm', o.pxPerMm, 0, 50, '', 'lo');
   const { renderAsync } = await loadResvg();
   const img = await renderAsync(svg, resvgOptions(svg, o));
   return new Uint8Array(img.asPng());

@@ -45,6 +45,7 @@ export function tileLayout(contentW: number, contentH: number, paper: PaperName,
     const pw = o === 'portrait' ? a : b;
     const ph = o === 'portrait' ? b : a;
     const window = { x: marginMm, y: marginMm + HEADER_MM, w: pw - 2 * marginMm, h: ph - 2 * marginMm - HEADER_MM - FOOTER_MM };
+    // a bug, not bad input: the schema caps template.margin at 30 mm, which leaves room on both papers
     if (!(window.w > overlapMm + 10 && window.h > overlapMm + 10)) {
       throw new Error(`template.margin = ${marginMm} mm is not allowed: it leaves no room to draw on ${paper} ${o} sheets`);
     }

@@ -1,4 +1,4 @@
-import { SpecError, formatValue } from '../errors.ts';
+import { SpecError, formatValue, isSpecError } from '../errors.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { Mesh, Vec3 } from './mesh.ts';
 import { gnomonSolid, type GnomonPart } from './gnomonSolid.ts';
@@ -28,17 +28,16 @@ const SPEC_FIELD: readonly (readonly [string, string])[] = [
   ['gnomon.thicknessMm', 'gnomon.thickness'],
 ];
 
-/** Re-throw a part builder's Error as a SpecError naming the spec field it came from. */
+/** Re-throw a part builder's SpecError (named by builder option) as a SpecError naming the spec field it came from. */
 function asSpecError(e: unknown, values: Readonly<Record<string, unknown>>): never {
-  if (!(e instanceof Error) || e.name === 'SpecError') throw e;
-  const hit = SPEC_FIELD.find(([opt]) => e.message.startsWith(opt));
+  if (!isSpecError(e)) throw e;
+  const hit = SPEC_FIELD.find(([opt]) => e.field.startsWith(opt));
   if (!hit) throw e;
   const [opt, field] = hit;
-  const cut = e.message.indexOf(' is not allowed: ');
-  const rule = cut >= 0 ? e.message.slice(cut + ' is not allowed: '.length) : e.message;
-  const what = cut >= 0 ? e.message.slice(0, cut) : opt;
+  // the builder's own words without its allowed part: "wedge.holes.count: got 3"
+  const what = e.message.endsWith(`; ${e.allowed}`) ? e.message.slice(0, -`; ${e.allowed}`.length) : e.field;
   const part = opt.startsWith('wedge') ? 'the latitude wedge' : 'the gnomon';
-  throw new SpecError(field, values[field], `allowed: ${rule}`, `got ${formatValue(values[field])}, so ${part} cannot be made (${what})`);
+  throw new SpecError(field, values[field], e.allowed.startsWith('allowed: ') ? e.allowed : `allowed: ${e.allowed}`, `got ${formatValue(values[field])}, so ${part} cannot be made (${what})`);
 }
 
 /**

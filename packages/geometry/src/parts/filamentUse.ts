@@ -1,5 +1,5 @@
 import { materialDensity } from './materials.ts';
-import { assertNonNegative, assertPositive } from './partChecks.ts';
+import { assertNonNegative, assertPositive } from '../guards.ts';
 
 /** Filament diameter most printers take, mm (1.75 mm; 2.85 mm is the other size sold — common practice). */
 export const FILAMENT_DIAMETER_MM = 1.75;
@@ -29,7 +29,7 @@ export interface FilamentUse {
  * @example filamentUse(2405.28, 'pla').lengthMm // ≈ 1000
  */
 export function filamentUse(volumeMm3: number, material: string, diameterMm: number = FILAMENT_DIAMETER_MM): FilamentUse {
-  assertNonNegative('filament.volumeMm3', volumeMm3, 'mm³');
+  assertNonNegative('filament.volumeMm3', volumeMm3);
   assertPositive('filament.diameterMm', diameterMm);
   const area = Math.PI * (diameterMm / 2) ** 2;
   const lengthMm = volumeMm3 / area;

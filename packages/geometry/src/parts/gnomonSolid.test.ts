@@ -66,13 +66,13 @@ describe('gnomonSolid', () => {
   });
 
   it('rejects bad inputs, naming the field and value', () => {
-    expect(() => gnomonSolid({ thicknessMm: 0 })).toThrow(/gnomon\.thicknessMm = 0/);
-    expect(() => gnomonSolid({ heightMm: -1 })).toThrow(/gnomon\.heightMm = -1/);
-    expect(() => gnomonSolid({ plateThicknessMm: 2 })).toThrow(/gnomon\.tabs\[0\]\.depthMm = 3 mm .*plateThicknessMm = 2/);
-    expect(() => gnomonSolid({ tabClearanceMm: 7.5 })).toThrow(/gnomon\.tabClearanceMm = 7\.5/);
+    expect(() => gnomonSolid({ thicknessMm: 0 })).toThrow(/gnomon\.thicknessMm: got 0;/);
+    expect(() => gnomonSolid({ heightMm: -1 })).toThrow(/gnomon\.heightMm: got -1;/);
+    expect(() => gnomonSolid({ plateThicknessMm: 2 })).toThrow(/gnomon\.tabs\[0\]\.depthMm: got 3; allowed: at most plateThicknessMm = 2 mm/);
+    expect(() => gnomonSolid({ tabClearanceMm: 7.5 })).toThrow(/gnomon\.tabClearanceMm: got 7\.5;/);
     expect(() => gnomonSolid({ tabs: [{ centerYMm: 0, lengthMm: 10, depthMm: 3 }, { centerYMm: 8, lengthMm: 10, depthMm: 3 }] })).toThrow(/overlaps/);
-    expect(() => gnomonSolid({ tabs: [{ centerYMm: 58, lengthMm: 10, depthMm: 3 }] })).toThrow(/gnomon\.tabs\[0\] spans/);
-    expect(() => gnomonSolid({ nodus: { kind: 'notch', yMm: 0, sizeMm: 40 } })).toThrow(/gnomon\.nodus\.sizeMm = 40/);
+    expect(() => gnomonSolid({ tabs: [{ centerYMm: 58, lengthMm: 10, depthMm: 3 }] })).toThrow(/gnomon\.tabs\[0\]: spans y = 53…63 mm; allowed: a tab within the fin/);
+    expect(() => gnomonSolid({ nodus: { kind: 'notch', yMm: 0, sizeMm: 40 } })).toThrow(/gnomon\.nodus\.sizeMm: got 40;/);
     expect(() => gnomonSolid({ nodus: { kind: 'notch', yMm: 59, sizeMm: 4 } })).toThrow(/gnomon\.nodus/);
   });
 

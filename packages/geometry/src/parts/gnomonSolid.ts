@@ -2,7 +2,8 @@ import type { Mesh, Vec2 } from './mesh.ts';
 import { extrudeProfileX } from './extrudeProfileX.ts';
 import { finishMesh, newDraft } from './meshDraft.ts';
 import { dropCollinear, shoelaceArea } from './ring2d.ts';
-import { assertFiniteNumber, assertNonNegative, assertPositive } from './partChecks.ts';
+import { assertFinite, assertNonNegative, assertPositive } from '../guards.ts';
+import { SpecError } from '../errors.ts';
 
 /** A locating tab hanging below the face through a slot in the plate. */
 export interface GnomonTab {
@@ -97,39 +98,36 @@ export function gnomonSolid(options: Partial<GnomonOptions> = {}): GnomonPart {
   assertPositive('gnomon.lengthMm', o.lengthMm);
   assertPositive('gnomon.plateThicknessMm', o.plateThicknessMm);
   assertNonNegative('gnomon.tabClearanceMm', o.tabClearanceMm);
-  if (!Array.isArray(o.tabs)) throw new Error(`gnomon.tabs = ${String(o.tabs)} is not allowed: it must be an array of tabs`);
+  if (!Array.isArray(o.tabs)) throw new SpecError('gnomon.tabs', o.tabs, 'allowed: a list of tabs');
 
   const halfL = o.lengthMm / 2;
   const h = o.heightMm;
   const tabs = o.tabs
     .map((tab, i) => {
-      assertFiniteNumber(`gnomon.tabs[${i}].centerYMm`, tab.centerYMm);
+      assertFinite(`gnomon.tabs[${i}].centerYMm`, tab.centerYMm);
       assertPositive(`gnomon.tabs[${i}].lengthMm`, tab.lengthMm);
       assertPositive(`gnomon.tabs[${i}].depthMm`, tab.depthMm);
       if (tab.depthMm > o.plateThicknessMm) {
-        throw new Error(
-          `gnomon.tabs[${i}].depthMm = ${tab.depthMm} mm is not allowed: it must not exceed plateThicknessMm = ${o.plateThicknessMm} mm`,
-        );
+        throw new SpecError(`gnomon.tabs[${i}].depthMm`, tab.depthMm, `allowed: at most plateThicknessMm = ${o.plateThicknessMm} mm`);
       }
       if (2 * o.tabClearanceMm >= tab.lengthMm) {
-        throw new Error(
-          `gnomon.tabClearanceMm = ${o.tabClearanceMm} mm is not allowed: twice it must be less than gnomon.tabs[${i}].lengthMm = ${tab.lengthMm} mm`,
-        );
+        throw new SpecError('gnomon.tabClearanceMm', o.tabClearanceMm, `allowed: less than half of gnomon.tabs[${i}].lengthMm = ${tab.lengthMm} mm`);
       }
       const y0 = tab.centerYMm - tab.lengthMm / 2 + o.tabClearanceMm;
       const y1 = tab.centerYMm + tab.lengthMm / 2 - o.tabClearanceMm;
       if (y0 < -halfL || y1 > halfL) {
-        throw new Error(
-          `gnomon.tabs[${i}] spans y = ${y0}…${y1} mm, which is not allowed: it must lie within the fin, y = ${-halfL}…${halfL} mm`,
-        );
+        throw new SpecError(`gnomon.tabs[${i}]`, tab, `allowed: a tab within the fin, y = ${-halfL}…${halfL} mm`, `spans y = ${y0}…${y1} mm`);
       }
       return { i, y0, y1, depth: tab.depthMm };
     })
     .sort((a, b) => a.y0 - b.y0);
   for (let k = 1; k < tabs.length; k++) {
     if (tabs[k].y0 <= tabs[k - 1].y1) {
-      throw new Error(
-        `gnomon.tabs[${tabs[k].i}] (y from ${tabs[k].y0} mm) is not allowed: it overlaps or touches gnomon.tabs[${tabs[k - 1].i}] (up to ${tabs[k - 1].y1} mm)`,
+      throw new SpecError(
+        `gnomon.tabs[${tabs[k].i}]`,
+        o.tabs[tabs[k].i],
+        `allowed: tabs apart from each other`,
+        `y from ${tabs[k].y0} mm overlaps or touches gnomon.tabs[${tabs[k - 1].i}] (up to ${tabs[k - 1].y1} mm)`,
       );
     }
   }
@@ -144,16 +142,14 @@ export function gnomonSolid(options: Partial<GnomonOptions> = {}): GnomonPart {
   let nodusMm: readonly [number, number, number] | undefined;
   if (o.nodus !== undefined) {
     const nd = o.nodus;
-    if (nd.kind !== 'notch') throw new Error(`gnomon.nodus.kind = ${String(nd.kind)} is not allowed: only 'notch' is supported`);
-    assertFiniteNumber('gnomon.nodus.yMm', nd.yMm);
+    if (nd.kind !== 'notch') throw new SpecError('gnomon.nodus.kind', nd.kind, "allowed: 'notch'");
+    assertFinite('gnomon.nodus.yMm', nd.yMm);
     assertPositive('gnomon.nodus.sizeMm', nd.sizeMm);
     if (nd.yMm - nd.sizeMm / 2 <= -halfL || nd.yMm + nd.sizeMm / 2 >= halfL) {
-      throw new Error(
-        `gnomon.nodus (yMm = ${nd.yMm}, sizeMm = ${nd.sizeMm}) is not allowed: the notch must lie strictly within the style, y = ${-halfL}…${halfL} mm`,
-      );
+      throw new SpecError('gnomon.nodus', nd, `allowed: a notch strictly within the style, y = ${-halfL}…${halfL} mm`, `yMm = ${nd.yMm}, sizeMm = ${nd.sizeMm}`);
     }
     if (nd.sizeMm / 2 >= h) {
-      throw new Error(`gnomon.nodus.sizeMm = ${nd.sizeMm} mm is not allowed: the notch depth sizeMm/2 must be less than heightMm = ${h} mm`);
+      throw new SpecError('gnomon.nodus.sizeMm', nd.sizeMm, `allowed: less than twice heightMm = ${h} mm (the notch is sizeMm/2 deep)`);
     }
     // 90° V-notch: opening sizeMm, apex sizeMm/2 below the style edge.
     outline.push([nd.yMm + nd.sizeMm / 2, h], [nd.yMm, h - nd.sizeMm / 2], [nd.yMm - nd.sizeMm / 2, h]);

@@ -38,7 +38,7 @@ describe('partMass', () => {
     const t = totalMass([partMass('a', 1000, 'pla'), partMass('b', 2000, 'petg')]);
     expect(t.massG).toBeCloseTo(1.24 + 2 * 1.27, 12);
     expect(t.massKg).toBeCloseTo((1.24 + 2.54) / 1000, 12);
-    expect(() => partMass('x', -1, 'pla')).toThrow(/x\.volumeMm3 = -1/);
+    expect(() => partMass('x', -1, 'pla')).toThrow(/x\.volumeMm3: got -1;/);
   });
 });
 
@@ -57,6 +57,6 @@ describe('filamentUse', () => {
     expect(filamentUse(v, 'pla', 2.85).lengthM).toBeLessThan(130);
     expect(filamentUse(v, 'pla').lengthM).toBeGreaterThan(325);
     expect(filamentUse(v, 'pla').lengthM).toBeLessThan(340);
-    expect(() => filamentUse(v, 'pla', 0)).toThrow(/filament\.diameterMm = 0/);
+    expect(() => filamentUse(v, 'pla', 0)).toThrow(/filament\.diameterMm: got 0;/);
   });
 });

@@ -1,5 +1,5 @@
 import { materialDensity } from './materials.ts';
-import { assertNonNegative } from './partChecks.ts';
+import { assertNonNegative } from '../guards.ts';
 
 /** A part's mass from its volume and material. */
 export interface PartMass {
@@ -26,7 +26,7 @@ const MM3_PER_CM3 = 1000;
  * @example partMass('plate', 1e5, 'aluminium').massG // 270
  */
 export function partMass(part: string, volumeMm3: number, material: string): PartMass {
-  assertNonNegative(`${part}.volumeMm3`, volumeMm3, 'mm³');
+  assertNonNegative(`${part}.volumeMm3`, volumeMm3);
   const { densityGPerCm3 } = materialDensity(material);
   return { part, material, volumeMm3, densityGPerCm3, massG: (volumeMm3 / MM3_PER_CM3) * densityGPerCm3 };
 }

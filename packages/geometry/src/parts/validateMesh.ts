@@ -30,7 +30,8 @@ export function validateMesh(mesh: Mesh): Mesh {
     }
     seen.set(key, i);
   });
-  const directed = new Map<string, number>();
+  // Directed edges u→v by the number u·n + v (exact: n² stays far below 2⁵³ for any mesh that fits in memory).
+  const directed = new Map<number, number>();
   mesh.triangles.forEach((t, ti) => {
     if (t.length !== 3 || !t.every((i) => Number.isInteger(i) && i >= 0 && i < n)) {
       throw new Error(`validateMesh: triangles[${ti}] = [${t.join(', ')}] needs three integer indices in 0..${n - 1}`);
@@ -48,7 +49,7 @@ export function validateMesh(mesh: Mesh): Mesh {
       throw new Error(`validateMesh: triangles[${ti}] = [${t.join(', ')}] has zero area (degenerate)`);
     }
     for (const [u, v] of [[i, j], [j, k], [k, i]] as const) {
-      const key = `${u}>${v}`;
+      const key = u * n + v;
       const prior = directed.get(key);
       if (prior !== undefined) {
         throw new Error(`validateMesh: edge ${u}→${v} is used in the same direction by triangles[${prior}] and triangles[${ti}] (inconsistent winding or non-manifold edge)`);
@@ -57,8 +58,9 @@ export function validateMesh(mesh: Mesh): Mesh {
     }
   });
   for (const [key, ti] of directed) {
-    const [u, v] = key.split('>');
-    if (!directed.has(`${v}>${u}`)) {
+    const u = Math.floor(key / n);
+    const v = key - u * n;
+    if (!directed.has(v * n + u)) {
       throw new Error(`validateMesh: edge ${u}→${v} of triangles[${ti}] has no opposite twin ${v}→${u} (open boundary or T-junction)`);
     }
   }

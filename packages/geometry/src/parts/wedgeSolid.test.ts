@@ -156,18 +156,18 @@ describe('wedgeSolid', () => {
   });
 
   it('rejects wedges that cannot be printed, naming the field and value', () => {
-    expect(() => wedgeSolid({ latitudeDeg: 89.5 })).toThrow(/wedge\.latitudeDeg = 89\.5/);
-    expect(() => wedgeSolid({ latitudeDeg: -90 })).toThrow(/wedge\.latitudeDeg = -90/);
-    expect(() => wedgeSolid({ latitudeDeg: Number.NaN })).toThrow(/wedge\.latitudeDeg = NaN/);
-    expect(() => wedgeSolid({ seatWidthMm: 10 })).toThrow(/wedge\.seatWidthMm = 10 mm/);
-    expect(() => wedgeSolid({ seatLengthMm: 0 })).toThrow(/wedge\.seatLengthMm = 0 mm/);
-    expect(() => wedgeSolid({ minBaseMm: 0 })).toThrow(/wedge\.minBaseMm = 0 mm/);
-    expect(() => wedgeSolid({ lipMm: -1 })).toThrow(/wedge\.lipMm = -1 mm/);
-    expect(() => wedgeSolid({ holes: { count: 3 } })).toThrow(/wedge\.holes\.count = 3 .*even/);
-    expect(() => wedgeSolid({ holes: { count: 12 } })).toThrow(/wedge\.holes\.count = 12 .*do not fit/);
+    expect(() => wedgeSolid({ latitudeDeg: 89.5 })).toThrow(/wedge\.latitudeDeg: got 89\.5;/);
+    expect(() => wedgeSolid({ latitudeDeg: -90 })).toThrow(/wedge\.latitudeDeg: got -90;/);
+    expect(() => wedgeSolid({ latitudeDeg: Number.NaN })).toThrow(/wedge\.latitudeDeg: got NaN \(not a number\);/);
+    expect(() => wedgeSolid({ seatWidthMm: 10 })).toThrow(/wedge\.seatWidthMm: got 10;/);
+    expect(() => wedgeSolid({ seatLengthMm: 0 })).toThrow(/wedge\.seatLengthMm: got 0;/);
+    expect(() => wedgeSolid({ minBaseMm: 0 })).toThrow(/wedge\.minBaseMm: got 0;/);
+    expect(() => wedgeSolid({ lipMm: -1 })).toThrow(/wedge\.lipMm: got -1;/);
+    expect(() => wedgeSolid({ holes: { count: 3 } })).toThrow(/wedge\.holes\.count: got 3; allowed: an even number/);
+    expect(() => wedgeSolid({ holes: { count: 12 } })).toThrow(/wedge\.holes\.count: 12 holes of .* do not fit; allowed: /);
     expect(() => wedgeSolid({ minBaseMm: 2.5 })).toThrow(/wedge\.holes\.countersink/);
-    expect(() => wedgeSolid({ holes: { countersink: { diameterMm: 4, angleDeg: 90 } } })).toThrow(/countersink\.diameterMm = 4 mm/);
-    expect(() => wedgeSolid({ arrow: { depthMm: 6 } })).toThrow(/wedge\.arrow\.depthMm = 6 mm/);
+    expect(() => wedgeSolid({ holes: { countersink: { diameterMm: 4, angleDeg: 90 } } })).toThrow(/countersink\.diameterMm: got 4;/);
+    expect(() => wedgeSolid({ arrow: { depthMm: 6 } })).toThrow(/wedge\.arrow\.depthMm: got 6;/);
   });
 });
 

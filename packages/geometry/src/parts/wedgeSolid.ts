@@ -1,7 +1,8 @@
 import type { Mesh, Vec2, Vec3 } from './mesh.ts';
 import { extrudeProfileX } from './extrudeProfileX.ts';
 import { addPlanarFace, addPoint, finishMesh, newDraft, type MeshDraft } from './meshDraft.ts';
-import { assertFiniteNumber, assertInteger, assertNonNegative, assertPositive } from './partChecks.ts';
+import { assertFinite, assertInteger, assertNonNegative, assertPositive } from '../guards.ts';
+import { SpecError } from '../errors.ts';
 import { shoelaceArea } from './ring2d.ts';
 import { cross3, dot3, sub3 } from './vec3.ts';
 
@@ -167,23 +168,21 @@ export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'
     holes: { ...WEDGE_DEFAULTS.holes, ...(options.holes ?? {}) },
     arrow: options.arrow === null ? null : { ...(WEDGE_DEFAULTS.arrow as WedgeArrow), ...(options.arrow ?? {}) },
   };
-  assertFiniteNumber('wedge.latitudeDeg', o.latitudeDeg);
+  assertFinite('wedge.latitudeDeg', o.latitudeDeg);
   const tiltDeg = Math.abs(o.latitudeDeg);
   if (tiltDeg > WEDGE_MAX_TILT_DEG) {
-    throw new Error(
-      `wedge.latitudeDeg = ${o.latitudeDeg} is not allowed: |latitude| must be at most ${WEDGE_MAX_TILT_DEG}° for a printable wedge (the seat would be vertical)`,
-    );
+    throw new SpecError('wedge.latitudeDeg', o.latitudeDeg, `allowed: |latitude| at most ${WEDGE_MAX_TILT_DEG}° for a printable wedge (the seat would be vertical)`);
   }
   for (const field of ['seatWidthMm', 'seatLengthMm'] as const) {
-    assertFiniteNumber(`wedge.${field}`, o[field]);
+    assertFinite(`wedge.${field}`, o[field]);
     if (!(o[field] >= WEDGE_MIN_SEAT_MM)) {
-      throw new Error(`wedge.${field} = ${o[field]} mm is not allowed: the seat must be at least ${WEDGE_MIN_SEAT_MM} mm on each side`);
+      throw new SpecError(`wedge.${field}`, o[field], `allowed: at least ${WEDGE_MIN_SEAT_MM} mm (the seat's smallest side)`);
     }
   }
   for (const field of ['minBaseMm', 'lipMm', 'lipWidthMm', 'wallMm'] as const) {
-    assertFiniteNumber(`wedge.${field}`, o[field]);
+    assertFinite(`wedge.${field}`, o[field]);
     if (!(o[field] >= WEDGE_MIN_WALL_MM)) {
-      throw new Error(`wedge.${field} = ${o[field]} mm is not allowed: it must be at least ${WEDGE_MIN_WALL_MM} mm to print`);
+      throw new SpecError(`wedge.${field}`, o[field], `allowed: at least ${WEDGE_MIN_WALL_MM} mm (thinner does not print)`);
     }
   }
   assertNonNegative('wedge.payloadHeightMm', o.payloadHeightMm);
@@ -200,7 +199,7 @@ export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'
   const holes = o.holes;
   assertInteger('wedge.holes.count', holes.count, 0, 64);
   if (holes.count % 2 !== 0) {
-    throw new Error(`wedge.holes.count = ${holes.count} is not allowed: it must be even (pairs either side of the meridian arrow)`);
+    throw new SpecError('wedge.holes.count', holes.count, 'allowed: an even number (pairs either side of the meridian arrow)');
   }
   assertInteger('wedge.holes.segments', holes.segments, 8, 256);
   let boreR = 0;
@@ -212,22 +211,23 @@ export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'
     topR = boreR;
     if (holes.countersink !== null) {
       const cs = holes.countersink;
-      assertFiniteNumber('wedge.holes.countersink.diameterMm', cs.diameterMm);
+      assertFinite('wedge.holes.countersink.diameterMm', cs.diameterMm);
       if (!(cs.diameterMm > holes.diameterMm)) {
-        throw new Error(
-          `wedge.holes.countersink.diameterMm = ${cs.diameterMm} mm is not allowed: it must exceed wedge.holes.diameterMm = ${holes.diameterMm} mm`,
-        );
+        throw new SpecError('wedge.holes.countersink.diameterMm', cs.diameterMm, `allowed: more than wedge.holes.diameterMm = ${holes.diameterMm} mm`);
       }
-      assertFiniteNumber('wedge.holes.countersink.angleDeg', cs.angleDeg);
+      assertFinite('wedge.holes.countersink.angleDeg', cs.angleDeg);
       if (!(cs.angleDeg >= 60 && cs.angleDeg <= 120)) {
-        throw new Error(`wedge.holes.countersink.angleDeg = ${cs.angleDeg} is not allowed: it must be from 60 to 120 degrees`);
+        throw new SpecError('wedge.holes.countersink.angleDeg', cs.angleDeg, 'allowed: 60° to 120°');
       }
       topR = cs.diameterMm / 2;
       // Cone depth from the radii and half the included angle.
       csDepth = (topR - boreR) / Math.tan((cs.angleDeg * Math.PI) / 360);
       if (!(csDepth < base - WEDGE_MIN_WALL_MM)) {
-        throw new Error(
-          `wedge.holes.countersink (depth ${csDepth.toFixed(3)} mm) is not allowed: it must leave at least ${WEDGE_MIN_WALL_MM} mm of straight bore in minBaseMm = ${base} mm`,
+        throw new SpecError(
+          'wedge.holes.countersink',
+          cs,
+          `allowed: a countersink leaving at least ${WEDGE_MIN_WALL_MM} mm of straight bore in minBaseMm = ${base} mm`,
+          `its depth ${csDepth.toFixed(3)} mm is too deep`,
         );
       }
     }
@@ -236,13 +236,13 @@ export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'
   if (arrow !== null) {
     for (const f of ['lengthMm', 'shaftWidthMm', 'headWidthMm', 'headLengthMm', 'depthMm'] as const) assertPositive(`wedge.arrow.${f}`, arrow[f]);
     if (!(arrow.headLengthMm < arrow.lengthMm)) {
-      throw new Error(`wedge.arrow.headLengthMm = ${arrow.headLengthMm} mm is not allowed: it must be less than wedge.arrow.lengthMm = ${arrow.lengthMm} mm`);
+      throw new SpecError('wedge.arrow.headLengthMm', arrow.headLengthMm, `allowed: less than wedge.arrow.lengthMm = ${arrow.lengthMm} mm`);
     }
     if (!(arrow.shaftWidthMm < arrow.headWidthMm)) {
-      throw new Error(`wedge.arrow.shaftWidthMm = ${arrow.shaftWidthMm} mm is not allowed: it must be less than wedge.arrow.headWidthMm = ${arrow.headWidthMm} mm`);
+      throw new SpecError('wedge.arrow.shaftWidthMm', arrow.shaftWidthMm, `allowed: less than wedge.arrow.headWidthMm = ${arrow.headWidthMm} mm`);
     }
     if (!(arrow.depthMm <= base - WEDGE_MIN_WALL_MM)) {
-      throw new Error(`wedge.arrow.depthMm = ${arrow.depthMm} mm is not allowed: it must leave at least ${WEDGE_MIN_WALL_MM} mm of the ${base} mm toe`);
+      throw new SpecError('wedge.arrow.depthMm', arrow.depthMm, `allowed: at most ${base - WEDGE_MIN_WALL_MM} mm (leaving ${WEDGE_MIN_WALL_MM} mm of the ${base} mm toe)`);
     }
   }
 
@@ -279,8 +279,11 @@ export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'
     const xOuter = W / 2 - o.wallMm - rv;
     const step = perSide > 1 ? (xOuter - xInner) / (perSide - 1) : 0;
     if (xOuter < xInner || (perSide > 1 && step < 2 * rv + o.wallMm)) {
-      throw new Error(
-        `wedge.holes.count = ${holes.count} is not allowed: ${holes.count} holes of ${(2 * topR).toFixed(2)} mm do not fit across seatWidthMm = ${W} mm with wallMm = ${o.wallMm} mm`,
+      throw new SpecError(
+        'wedge.holes.count',
+        holes.count,
+        `allowed: as many holes as fit across seatWidthMm = ${W} mm with wallMm = ${o.wallMm} mm`,
+        `${holes.count} holes of ${(2 * topR).toFixed(2)} mm do not fit`,
       );
     }
     for (let j = 0; j < perSide; j++) {

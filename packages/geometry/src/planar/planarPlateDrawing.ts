@@ -1,4 +1,5 @@
-import { plateOutline, type DrawnLine, type DrawnText, type PlateDrawing } from '../plate/plateDrawing.ts';
+import { faceToPlate } from '../plate/faceToPlate.ts';
+import { assemblePlateDrawing, type DrawnLine, type PlateDrawing } from '../plate/plateDrawing.ts';
 import { clipPolyline } from '../polar/clipPolyline.ts';
 import type { Path, Vec2 } from '../types.ts';
 import type { PlanarLayout } from './layoutPlanar.ts';
@@ -15,10 +16,8 @@ import type { PlanarLayout } from './layoutPlanar.ts';
  */
 export function planarPlateDrawing(layout: PlanarLayout): PlateDrawing {
   const { plate, gnomon } = layout;
-  const dx = plate.substyleX;
-  const dy = plate.faceOriginY;
-  const move = (p: Vec2): Vec2 => [p[0] + dx, p[1] + dy];
-  const path = (pts: readonly Vec2[], closed = false): Path => ({ kind: 'path', points: pts.map(move), closed });
+  const to = faceToPlate(plate);
+  const { dx, dy, path } = to;
 
   const lines: DrawnLine[] = layout.marks.filter((m) => !m.underGnomon).map((m) => ({
     label: `${m.label} ${m.edge}`,
@@ -29,18 +28,13 @@ export function planarPlateDrawing(layout: PlanarLayout): PlateDrawing {
   for (const c of layout.curves) {
     c.paths.forEach((p, i) => lines.push({ label: `${c.label}${c.paths.length > 1 ? ` ${i + 1}` : ''}`, kind: 'curve', widthMm: c.widthMm, path: path(p) }));
   }
-  const text: DrawnText[] = [...layout.numerals, ...layout.title].map((b) => ({
-    role: b.role,
-    text: b.text,
-    strokeWidthMm: b.strokeWidthMm,
-    strokes: b.strokes.map((s) => path(s.points)),
-  }));
+  const text = to.text([...layout.numerals, ...layout.title]);
   const t2 = gnomon.thicknessMm / 2;
   const reference: { label: string; path: Path }[] = [
     { label: 'substyle', path: path([[0, -dy], [0, plate.lengthMm - dy]]) },
     gnomon.kind === 'rod'
-      ? { label: 'rod footprint', path: path([[-t2, -t2], [t2, -t2], [t2, t2], [-t2, t2]], true) }
-      : { label: 'gnomon footprint', path: path([[-t2, gnomon.y0Mm], [t2, gnomon.y0Mm], [t2, gnomon.y1Mm], [-t2, gnomon.y1Mm]], true) },
+      ? { label: 'rod footprint', path: to.footprint(gnomon.thicknessMm, -t2, t2) }
+      : { label: 'gnomon footprint', path: to.footprint(gnomon.thicknessMm, gnomon.y0Mm, gnomon.y1Mm) },
   ];
   if (layout.faceType === 'vertical' && Math.abs(layout.plateTurnDeg) > 1e-9) {
     const a = (layout.plateTurnDeg * Math.PI) / 180;
@@ -50,16 +44,5 @@ export function planarPlateDrawing(layout: PlanarLayout): PlateDrawing {
     const box = { xMinMm: -dx, xMaxMm: plate.widthMm - dx, yMinMm: -dy, yMaxMm: plate.lengthMm - dy };
     for (const piece of clipPolyline([[-u[0] * r, -u[1] * r], [u[0] * r, u[1] * r]], box)) reference.push({ label: 'plumb line', path: path(piece) });
   }
-  return {
-    widthMm: plate.widthMm,
-    lengthMm: plate.lengthMm,
-    substyleX: dx,
-    faceOriginY: dy,
-    outline: plateOutline(plate),
-    holes: plate.holes,
-    slots: plate.slots,
-    lines,
-    text,
-    reference,
-  };
+  return assemblePlateDrawing(plate, { lines, text, reference });
 }

@@ -1,5 +1,6 @@
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { Circle, MarkKind, Path, RoundedRect, Vec2 } from '../types.ts';
+import { faceToPlate } from './faceToPlate.ts';
 
 /** An engraved line (a mark or a curve) as a centre-line in plate coordinates. */
 export interface DrawnLine {
@@ -40,6 +41,39 @@ export function plateOutline(plate: { readonly widthMm: number; readonly lengthM
   return { kind: 'rect', cx: plate.widthMm / 2, cy: plate.lengthMm / 2, widthMm: plate.widthMm, heightMm: plate.lengthMm, cornerRadiusMm: plate.cornerRadiusMm };
 }
 
+/** The plate and its face origin, as both layouts hold them. */
+export interface DrawnPlate {
+  readonly widthMm: number;
+  readonly lengthMm: number;
+  readonly cornerRadiusMm: number;
+  readonly substyleX: number;
+  readonly faceOriginY: number;
+  readonly holes: readonly Circle[];
+  readonly slots: readonly RoundedRect[];
+}
+
+/**
+ * A plate drawing from its plate and its parts already in plate coordinates:
+ * the one assembly behind `plateDrawing` (polar) and `planarPlateDrawing`.
+ */
+export function assemblePlateDrawing(
+  plate: DrawnPlate,
+  parts: { readonly lines: readonly DrawnLine[]; readonly text: readonly DrawnText[]; readonly reference: PlateDrawing['reference'] },
+): PlateDrawing {
+  return {
+    widthMm: plate.widthMm,
+    lengthMm: plate.lengthMm,
+    substyleX: plate.substyleX,
+    faceOriginY: plate.faceOriginY,
+    outline: plateOutline(plate),
+    holes: plate.holes,
+    slots: plate.slots,
+    lines: parts.lines,
+    text: parts.text,
+    reference: parts.reference,
+  };
+}
+
 /**
  * The plate drawing of a layout: face coordinates moved to plate coordinates
  * (x + substyleX, y + faceOriginY).
@@ -47,11 +81,8 @@ export function plateOutline(plate: { readonly widthMm: number; readonly lengthM
  */
 export function plateDrawing(layout: DialLayout, extraLines: readonly DrawnLine[] = [], extraText: readonly DrawnText[] = []): PlateDrawing {
   const { plate, gnomon } = layout;
-  const dx = plate.substyleX;
-  const dy = plate.faceOriginY;
-  const move = (p: Vec2): Vec2 => [p[0] + dx, p[1] + dy];
-  const movePath = (p: Path): Path => ({ kind: 'path', points: p.points.map(move), closed: p.closed });
-  const seg = (a: Vec2, b: Vec2): Path => ({ kind: 'path', points: [move(a), move(b)], closed: false });
+  const to = faceToPlate(plate);
+  const seg = (a: Vec2, b: Vec2): Path => to.path([a, b]);
 
   const lines: DrawnLine[] = layout.marks.filter((m) => !m.underGnomon).map((m) => ({
     label: `${m.label} ${m.style}`,
@@ -59,35 +90,18 @@ export function plateDrawing(layout: DialLayout, extraLines: readonly DrawnLine[
     widthMm: m.widthMm,
     path: seg([m.xMm, m.y0Mm], [m.xMm, m.y1Mm]),
   }));
-  const text: DrawnText[] = [...layout.numerals, ...layout.title].map((b) => ({
-    role: b.role,
-    text: b.text,
-    strokeWidthMm: b.strokeWidthMm,
-    strokes: b.strokes.map(movePath),
-  }));
 
   const t2 = gnomon.thicknessMm / 2;
   const h = gnomon.heightMm;
   const checkY = layout.marks.length ? Math.min(...layout.marks.map((m) => m.y0Mm)) : 0;
   const east = layout.hemisphere === 'north' ? 1 : -1;
   const reference = [
-    { label: 'substyle', path: seg([0, 0 - dy], [0, plate.lengthMm - dy]) },
-    { label: 'gnomon footprint', path: { kind: 'path' as const, closed: true, points: [move([-t2, gnomon.y0Mm]), move([t2, gnomon.y0Mm]), move([t2, gnomon.y1Mm]), move([-t2, gnomon.y1Mm])] } },
+    { label: 'substyle', path: seg([0, 0 - to.dy], [0, plate.lengthMm - to.dy]) },
+    { label: 'gnomon footprint', path: to.footprint(gnomon.thicknessMm, gnomon.y0Mm, gnomon.y1Mm) },
     // The 45° check (common practice): at |H| = 45° the line lies one gnomon height from its style edge.
     { label: '45 deg check west', path: seg([-east * t2, checkY], [-east * (t2 + h), checkY]) },
     { label: '45 deg check east', path: seg([east * t2, checkY], [east * (t2 + h), checkY]) },
   ];
-
-  return {
-    widthMm: plate.widthMm,
-    lengthMm: plate.lengthMm,
-    substyleX: dx,
-    faceOriginY: dy,
-    outline: plateOutline(plate),
-    holes: plate.holes,
-    slots: plate.slots,
-    lines: [...lines, ...extraLines],
-    text: [...text, ...extraText],
-    reference,
-  };
+  const text = to.text([...layout.numerals, ...layout.title]);
+  return assemblePlateDrawing(plate, { lines: [...lines, ...extraLines], text: [...text, ...extraText], reference });
 }

@@ -43,6 +43,7 @@ export function relievedSlot(slot: RoundedRect, toolRadiusMm: number, toleranceM
   const h = slot.heightMm;
   const short = Math.min(w, h);
   if (!(toolRadiusMm > 0) || slot.cornerRadiusMm >= rho) return { path: roundedRectPath(slot, toleranceMm), relief: 'none' };
+  // a bug, not bad input: a tool too wide for a slot is refused first (fabricate's assertToolFits, on process.kerf)
   if (2 * toolRadiusMm > short) throw new Error(`relievedSlot: a tool of ${2 * toolRadiusMm} mm does not fit the ${short} mm slot`);
   const x0 = slot.cx - w / 2;
   const x1 = slot.cx + w / 2;
