@@ -14,7 +14,7 @@ import {
   dialGnomon,
   dialWedge,
   gnomonOnPlate,
-  mapMesh,
+  gnomonLaidFlat,
   meshBounds,
   meshVolumeMm3,
   partsPlan,
@@ -274,11 +274,8 @@ export const partsOutputs: Producer<PartsSections> = async ({ spec, layout, draw
   const latText = `${Math.abs(lat).toFixed(2)} deg ${lat >= 0 ? 'N' : 'S'}`;
 
   if (plan.files.includes('gnomon.stl')) {
-    const tab = plan.tabDepthMm;
-    const t2 = gnomon.thicknessMm / 2;
     const halfL = (g.y1Mm - g.y0Mm) / 2;
-    // (x, y, z) -> (y, z, x) is a rotation (cyclic permutation), so the winding stays outward.
-    const flat = validateMesh(mapMesh(gnomon.mesh, ([x, y, z]) => [y + halfL, z + tab, x + t2]));
+    const flat = validateMesh(gnomonLaidFlat(gnomon.mesh, halfL, plan.tabDepthMm, gnomon.thicknessMm));
     const fb = meshBounds(flat);
     if (!fitsBed(fb.max[0] - fb.min[0], fb.max[1] - fb.min[1], fb.max[2] - fb.min[2], plan.print.bed)) {
       throw new SpecError(

@@ -2,6 +2,7 @@ export type { Mesh, Triangle, Vec3 } from './mesh.ts';
 export { meshVolumeMm3 } from './meshVolumeMm3.ts';
 export { meshBounds, type MeshBounds } from './meshBounds.ts';
 export { validateMesh } from './validateMesh.ts';
+export { gnomonLaidFlat } from './gnomonLaidFlat.ts';
 export { triangulatePolygon } from './triangulatePolygon.ts';
 export { gnomonSolid, GNOMON_DEFAULTS, type GnomonOptions, type GnomonPart, type GnomonTab, type GnomonNotch } from './gnomonSolid.ts';
 export {
