@@ -73,6 +73,28 @@ describe('umbrafab batch', () => {
     expect(r.out).toMatch(/one plate serves every latitude from 30°N to 50°N/);
   });
 
+  it("writes each latitude's files with build's bytes for that latitude's spec (engraving programs, stand, sheet, install)", async () => {
+    const out = mkdtempSync(join(tmpdir(), 'umbrafab-batch-'));
+    const lats = [32, 41];
+    const r = await runCli(['batch', DEMO, '--latitudes', lats.join(','), '--out', out, '--no-progress']);
+    expect(r.code).toBe(0);
+    const raw = parseYaml(readFileSync(DEMO, 'utf8'));
+    for (const lat of lats) {
+      // As batch reads it: the latitude replaced, pictures left to build; the shared plate titled with the range.
+      const spec = parseSpec({ ...raw, site: { ...raw.site, latitude: lat }, pictures: { ...(raw.pictures ?? {}), write: false } });
+      const built = await buildFiles(spec, buildContext(spec, { latitudeRangeDeg: [32, 41] }));
+      const names = ['engrave.ngc', 'engrave-laser.gcode', 'stand.stl', 'stand.dxf', 'sheet.dxf', 'install.md'];
+      for (const name of names) {
+        const mine = built.files.find((f) => f.name === name);
+        expect(mine, name).toBeDefined();
+        const file = name.replace(/\.(\w+)$/, `-N${lat}.$1`);
+        expect(Buffer.from(mine!.bytes).equals(readFileSync(join(out, file))), file).toBe(true);
+      }
+      // The program header names this latitude.
+      expect(readFileSync(join(out, `engrave-N${lat}.ngc`), 'utf8')).toMatch(new RegExp(`latitude: ${lat}\\b`));
+    }
+  });
+
   it('makes one plate per latitude when the hemispheres differ', async () => {
     const out = mkdtempSync(join(tmpdir(), 'umbrafab-batch-'));
     const r = await runCli(['batch', DEMO, '--latitudes', '35,-35', '--out', out, '--no-progress']);

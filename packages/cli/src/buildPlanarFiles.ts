@@ -5,6 +5,10 @@ import {
   planarGnomonSolid,
   planarInstallSheet,
   planarPlateDrawing,
+  standSolid,
+  wallMount,
+  WALL_ANCHOR_HOLE_MM,
+  meshVolumeMm3,
   validateMesh,
   plateSheetPart,
   finSheetPart,
@@ -63,6 +67,8 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   files.push({ name: 'gnomon.stl', bytes: toStl(flat, { header: stlHeader([`umbrafab ${part.kind} for a ${layout.faceType} face, t=${part.thicknessMm} mm, style ${layout.gnomon.styleHeightDeg.toFixed(2)} deg`, spec.name]) }) });
   const finCut = finPart ? await cutPartFiles({ spec, drawing }, finPart) : undefined;
   if (finCut) files.push(...finCut.files);
+  const mount = await wallMountFiles(spec, layout, drawing);
+  files.push(...mount.files);
   files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout))) });
 
   const names = [...files.map((f) => f.name), 'report.json'];
@@ -92,6 +98,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
     },
     gnomon: { ...layout.gnomon, profileAreaMm2: part.profileAreaMm2, belowFaceMm: part.belowFaceMm },
     ...(finCut ? { parts: { gnomonDxf: finCut.report } } : {}),
+    ...(mount.report ? { mount: mount.report } : {}),
     time: layout.time,
     engraving: engraving.report,
     notes: layout.notes,
@@ -99,4 +106,43 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   };
   files.push({ name: 'report.json', bytes: utf8(toReportJson(report)) });
   return { layout, drawing, files, report };
+}
+
+/**
+ * A wall face's mounting plate (`wallMount`): mount.dxf for sheet work
+ * (the nominal part through the same cut-file writer as plate.dxf, after
+ * the tool-fit check) and mount.stl (flat, +z up, min corner at the
+ * origin); its report section lists the fixings, anchors and fasteners.
+ * Nothing for faces that do not hang on a wall.
+ */
+async function wallMountFiles(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing): Promise<{ files: OutputFile[]; report?: Record<string, unknown> }> {
+  const m = wallMount(layout);
+  if (!m) return { files: [] };
+  const files: OutputFile[] = [];
+  let cut: Record<string, unknown> | undefined;
+  if (spec.process.method !== 'print') {
+    assertToolFits([m.part], spec.process.kerf);
+    const c = await cutPartFiles({ spec, drawing }, m.part);
+    files.push(...c.files);
+    cut = { ...c.report };
+  }
+  const t = m.part.thicknessMm;
+  const mesh = await standSolid({ parts: [m.part], instances: [{ id: 'mount', part: 'mount', placement: { origin: [0, 0, t / 2], e1: [1, 0, 0], e2: [0, 1, 0], normal: [0, 0, 1] } }] });
+  files.push({ name: 'mount.stl', bytes: toStl(mesh, { header: stlHeader([`umbrafab wall mount for a ${layout.faceType} face, t=${t} mm, ${m.anchors.length} anchor holes`, spec.name]) }) });
+  const b = meshBounds(mesh);
+  const [W, L] = [m.part.outer.points[2][0], m.part.outer.points[2][1]];
+  return {
+    files,
+    report: {
+      widthMm: W,
+      lengthMm: L,
+      thicknessMm: t,
+      material: m.part.material,
+      plateAtMm: m.plateAtMm,
+      fixings: m.fixings,
+      anchors: m.anchors.map(([x, y], i) => ({ index: i + 1, xMm: x, yMm: y, diameterMm: WALL_ANCHOR_HOLE_MM })),
+      fasteners: m.fasteners,
+      files: { ...(cut ? { dxf: cut } : {}), stl: { volumeMm3: meshVolumeMm3(mesh), facets: mesh.triangles.length, bbox: { minMm: b.min, maxMm: b.max } } },
+    },
+  };
 }

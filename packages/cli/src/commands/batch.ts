@@ -1,6 +1,7 @@
+import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { DialLayout } from '@umbrafab/geometry';
+import type { DialLayout, PlateDrawing } from '@umbrafab/geometry';
 import { utf8 } from '../outputs/outputTypes.ts';
 import type { Report } from '../outputs/report.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
@@ -38,7 +39,7 @@ export const batchCommand: CommandModule = {
       .option('progress', { type: 'boolean', default: true, describe: `show a progress bar on stderr (from ${PROGRESS_FROM} latitudes on)` }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
-    const { WEDGE_MAX_TILT_DEG, buildContext, buildFiles, cliProgress, GENERATOR, parseSpec, readRawSpec, toReportJson, writeFilesAtomic } = await import('./batchDeps.ts');
+    const { WEDGE_MAX_TILT_DEG, buildContext, buildFiles, cliProgress, GENERATOR, layoutDial, parseSpec, readRawSpec, toReportJson, writeFilesAtomic } = await import('./batchDeps.ts');
     const latitudes = batchLatitudes(args.latitudes, args['latitudes-file'], WEDGE_MAX_TILT_DEG);
     const raw = readRawSpec(args.spec) as Record<string, unknown>;
     const outDir: string = args.out ?? `out/${specBaseName(args.spec)}-batch`;
@@ -51,7 +52,7 @@ export const batchCommand: CommandModule = {
     const specs = latitudes.map((lat) => parseSpec({ ...raw, site: { ...site, latitude: lat }, pictures: { ...pictures, write: false } }));
 
     // Latitudes whose faces are the same (hour lines, numerals, plate, gnomon) share one plate, titled with their range.
-    const keys = specs.map((spec) => faceKey(buildContext(spec).layout));
+    const keys = specs.map((spec) => faceKey(layoutDial(spec)));
     const groupOf = (i: number) => latitudes.filter((_, j) => keys[j] === keys[i]);
 
     const bar =
@@ -63,11 +64,18 @@ export const batchCommand: CommandModule = {
         : null;
     bar?.start(latitudes.length, 0, { lat: '' });
     const builds: { lat: number; files: readonly OutputFile[]; report: Report; plateLengthMm: number }[] = [];
+    // Latitudes whose plate drawings are the same get the very same drawing object, so that the work the producers
+    // do once per drawing (the engraving's toolpaths, the etched outlines, the template: perDrawing) is done once.
+    const drawings = new Map<string, PlateDrawing>();
     try {
       for (const [i, spec] of specs.entries()) {
         const group = groupOf(i);
         const range = group.length > 1 ? ([Math.min(...group), Math.max(...group)] as const) : undefined;
-        const result = await buildFiles(spec, buildContext(spec, range ? { latitudeRangeDeg: range } : {}));
+        const ctx = buildContext(spec, range ? { latitudeRangeDeg: range } : {});
+        const drawingKey = JSON.stringify(ctx.drawing);
+        const drawing = drawings.get(drawingKey) ?? ctx.drawing;
+        drawings.set(drawingKey, drawing);
+        const result = await buildFiles(spec, { ...ctx, drawing });
         builds.push({ lat: latitudes[i], files: result.files, report: result.report, plateLengthMm: result.layout.plate.lengthMm });
         bar?.increment(1, { lat: latitudeTag(latitudes[i]) });
       }
@@ -80,16 +88,16 @@ export const batchCommand: CommandModule = {
     const written = new Set<string>();
     const perLat = latitudes.map(() => new Map<string, string>());
     const names = [...new Set(builds.flatMap((b) => b.files.map((f) => f.name)))];
+    const membersOf = builds.map((_, i) => builds.map((_, j) => j).filter((j) => keys[j] === keys[i]));
     for (const name of names) {
-      const bytesAt = (i: number) => builds[i].files.find((f) => f.name === name)?.bytes;
-      const all = builds.map((_, i) => bytesAt(i));
-      const same = (a?: Uint8Array, b?: Uint8Array) => a !== undefined && b !== undefined && sameBytes(a, b);
+      const all = builds.map((b) => b.files.find((f) => f.name === name)?.bytes);
+      const ids = contentIds(all);
       for (const [i, bytes] of all.entries()) {
         if (!bytes) continue;
-        const members = builds.map((_, j) => j).filter((j) => keys[j] === keys[i]);
+        const members = membersOf[i];
         let fileName: string;
-        if (all.every((b) => same(b, bytes))) fileName = name;
-        else if (members.length > 1 && members.every((j) => same(all[j], bytes)) && members.length < builds.length) fileName = tagged(name, rangeTag(members.map((j) => latitudes[j])));
+        if (ids.every((id) => id === ids[i])) fileName = name;
+        else if (members.length > 1 && members.every((j) => ids[j] === ids[i]) && members.length < builds.length) fileName = tagged(name, rangeTag(members.map((j) => latitudes[j])));
         else fileName = tagged(name, latitudeTag(latitudes[i]));
         perLat[i].set(name, fileName);
         if (!written.has(fileName)) {
@@ -213,8 +221,21 @@ function faceKey(layout: DialLayout): string {
   return JSON.stringify({ hemisphere: layout.hemisphere, marks: layout.marks, numerals: layout.numerals, plate: layout.plate, gnomon: layout.gnomon, time: layout.time });
 }
 
-function sameBytes(a: Uint8Array, b: Uint8Array): boolean {
-  return a.length === b.length && a.every((v, i) => v === b[i]);
+/**
+ * For each file, the index of the first file with the same bytes (-1 for a
+ * missing one): files compared by a SHA-256 digest, then byte for byte.
+ */
+function contentIds(all: readonly (Uint8Array | undefined)[]): number[] {
+  const firstByDigest = new Map<string, number[]>();
+  return all.map((bytes, i) => {
+    if (!bytes) return -1;
+    const digest = createHash('sha256').update(bytes).digest('hex');
+    const seen = firstByDigest.get(digest) ?? [];
+    const match = seen.find((j) => Buffer.from(all[j]!.buffer, all[j]!.byteOffset, all[j]!.byteLength).equals(bytes));
+    if (match !== undefined) return match;
+    firstByDigest.set(digest, [...seen, i]);
+    return i;
+  });
 }
 
 function round(v: number, d: number): number {

@@ -16,7 +16,7 @@ export const checkCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick; the DXF reader only with --plate.
-    const { checkDial, checkPlanar, checkTableText, countMarks, faceOrientationOf, layoutDial, markCountText, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, readRawSpec, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
+    const { checkDial, checkPlanar, checkTableText, countMarks, faceOrientationOf, layoutDial, markCountText, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, planarMarksFromPlate, readRawSpec, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
     if (args.out !== undefined) assertOutFolder(String(args.out));
     // The spec as written, normalised once (with --year in place of calendar.year): the same path as build.
     const raw = readRawSpec(args.spec) as Record<string, unknown>;
@@ -29,9 +29,19 @@ export const checkCommand: CommandModule = {
     } else spec = parseSpec(raw);
     if (faceOrientationOf(spec)) {
       // Horizontal, wall, meridian and equatorial faces: the planar check on their own gnomon.
-      if (args.plate !== undefined) throw new UsageError('--plate: reading marks back from a DXF is for the polar plate only; check a planar face from its spec');
-      const planar = checkPlanar(layoutPlanar(spec));
-      io.out(planarCheckText(planar));
+      const planarLayout = layoutPlanar(spec);
+      let planar;
+      if (args.plate !== undefined) {
+        // The marks read back from the drawing, checked against the shadow of the spec's own gnomon.
+        const { readPlateDxf } = await import('../readPlateDxf.ts');
+        const found = planarMarksFromPlate(planarLayout, readPlateDxf(String(args.plate)).lines);
+        planar = checkPlanar(planarLayout, { marks: found.marks });
+        io.out(planarCheckText(planar));
+        if (found.unmatched.length) io.out(`note: ${found.unmatched.length} mark line(s) in ${args.plate} match no hour line of the spec (date lines among them; first at face x ${found.unmatched[0][0].toFixed(2)} mm, y ${found.unmatched[0][1].toFixed(2)} mm); they are not checked`);
+      } else {
+        planar = checkPlanar(planarLayout);
+        io.out(planarCheckText(planar));
+      }
       if (args.out !== undefined) {
         const dir = String(args.out);
         writeFilesAtomic(dir, [{ name: 'check.json', bytes: utf8(toReportJson(planar)) }], Boolean(args.force));

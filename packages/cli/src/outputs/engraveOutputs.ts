@@ -1,11 +1,14 @@
-import { engraveFromSpec, type EngravingReport } from '@umbrafab/fabricate';
+import { engravingPlanKey, planEngraving, writeEngraving, type EngravingReport } from '@umbrafab/fabricate';
 import { utf8, type Producer } from './outputTypes.ts';
+import { perDrawing } from './perDrawing.ts';
 
 /**
  * The engraving programs of `umbrafab build` (engrave.ngc for a router or
  * mill, engrave-laser.gcode for a laser engraver, as spec `engrave.programs`
  * chooses) and the report's `engraving` section (depths, passes, time
  * estimate, rapid travel before and after ordering with its lower bound).
+ * The toolpaths are planned once per drawing and engraving settings
+ * (perDrawing); each spec writes only its own header over them.
  */
 /** The report.json section of the engraving programs. */
 export interface EngraveSections {
@@ -13,7 +16,8 @@ export interface EngraveSections {
 }
 
 export const engraveOutputs: Producer<EngraveSections> = async ({ spec, drawing }) => {
-  const r = await engraveFromSpec(spec, drawing);
+  const plan = await perDrawing(drawing, `engrave ${engravingPlanKey(spec)}`, () => planEngraving(spec, drawing));
+  const r = writeEngraving(plan, spec);
   return {
     files: r.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })),
     report: { engraving: r.report },

@@ -1,6 +1,7 @@
 import { defaultPictureDate, sunForPicture, viewAssembly } from '@umbrafab/geometry';
 import { fitPixelBudget, svgHeightMm, svgWidthMm, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM, MAX_PICTURE_PIXELS } from '@umbrafab/fabricate';
 import { previewSvgText } from './plateOutputs.ts';
+import { perDrawing } from './perDrawing.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import { utf8, type BuildContext, type Producer } from './outputTypes.ts';
 
@@ -151,7 +152,9 @@ async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[];
 async function templateOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: TemplateSection }> {
   const { spec, layout, drawing } = ctx;
   const tOpts = { paper: spec.template.paper, orientation: spec.template.orientation, overlapMm: spec.template.overlap, marginMm: spec.template.margin };
-  const pdf = await toTemplatePdf({ drawing, marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name }, tOpts);
+  const input = { marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name };
+  // Once per drawing and input (every latitude of a batch that shares the plate gets the same template).
+  const pdf = await perDrawing(drawing, `template ${JSON.stringify([input, tOpts])}`, () => toTemplatePdf({ drawing, ...input }, tOpts));
   const tiles = templateTiles(drawing, tOpts);
   return {
     files: [{ name: 'template.pdf', bytes: pdf }],

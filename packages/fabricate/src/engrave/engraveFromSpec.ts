@@ -10,8 +10,8 @@ import { parkPoint } from './millProgram.ts';
 import { polylineLengthMm } from './polylineLength.ts';
 import { specSummaryLines } from './specSummaryLines.ts';
 import { laserFillPasses, type LaserFill } from './laserFill.ts';
-import { planLaser, toLaserGcode } from './toLaserGcode.ts';
-import { planNgc, toNgc } from './toNgc.ts';
+import { planLaser, toLaserGcode, type LaserPlan } from './toLaserGcode.ts';
+import { planNgc, toNgc, type NgcPlan } from './toNgc.ts';
 
 /**
  * The engraving programs of one spec and their figures for report.json
@@ -122,70 +122,142 @@ export function engraveTitleLines(spec: DialSpec): readonly string[] {
   return ['to remake: umbrafab build on a spec with these fields [normalised, defaults filled in]', ...specSummaryLines(spec)];
 }
 
-function ngcProgram(job: EngraveJob, s: EngraveSettings, spec: DialSpec): { text: string; report: NgcReport } {
-  checkMillJob(job, s, spec);
-  const plan = planNgc(job, s);
-  const text = toNgc(job, s, {}, plan);
+function ngcReport(job: EngraveJob, s: EngraveSettings, plan: NgcPlan): NgcReport {
   const cuts = plan.toolpaths.cuts;
   const e: TimeEstimate = plan.estimate;
   const usesFlat = cuts.some((c) => c.tool === 'flat');
   return {
-    text,
-    report: {
-      file: ENGRAVE_FILE_NAMES.ngc,
-      vbitDepthMmMax: cuts.filter((c) => c.tool === 'vbit').reduce((m, c) => Math.max(m, c.depthPassesMm[c.depthPassesMm.length - 1]), 0),
-      depthLimitMm: plan.toolpaths.depthLimitMm,
-      passes: cuts.reduce((m, c) => Math.max(m, c.depthPassesMm.length), 0),
-      cuts: cuts.length,
-      timeEstimateS: e.totalS,
-      timeBreakdownS: { cutting: e.cuttingS, plunge: e.plungeS, rapid: e.rapidS, retract: e.retractS, dwell: e.dwellS },
-      rapidTravelMm: travel(plan.toolpaths.rapidTravelMm),
-      cuttingLengthMm: cuts.reduce((sum, c) => sum + polylineLengthMm(c.points, c.closed), 0),
-      feedLengthMm: e.cuttingMm,
-      tool: {
-        vbitAngleDeg: s.vbitAngleDeg,
-        vbitTipMm: s.vbitTipMm,
-        vbitMaxWidthMm: s.vbitMaxWidthMm,
-        ...(usesFlat ? { flatEndMillMm: s.flatEndMillMm, flatDepthMm: s.flatDepthMm } : {}),
-      },
-      spindleRpm: s.spindleRpm,
-      feedMmPerMin: s.feedMmPerMin,
-      plungeMmPerMin: s.plungeMmPerMin,
-      stepDownMm: s.stepDownMm,
-      safeZMm: s.safeZMm,
-      clearanceZMm: s.clearanceZMm,
-      entryZMm: s.entryZMm,
-      rampAngleDeg: (Math.atan(rampSlope(s)) * 180) / Math.PI,
-      spindleDwellS: s.spindleDwellS,
-      parkMm: parkPoint(s, job.stock.lengthMm),
+    file: ENGRAVE_FILE_NAMES.ngc,
+    vbitDepthMmMax: cuts.filter((c) => c.tool === 'vbit').reduce((m, c) => Math.max(m, c.depthPassesMm[c.depthPassesMm.length - 1]), 0),
+    depthLimitMm: plan.toolpaths.depthLimitMm,
+    passes: cuts.reduce((m, c) => Math.max(m, c.depthPassesMm.length), 0),
+    cuts: cuts.length,
+    timeEstimateS: e.totalS,
+    timeBreakdownS: { cutting: e.cuttingS, plunge: e.plungeS, rapid: e.rapidS, retract: e.retractS, dwell: e.dwellS },
+    rapidTravelMm: travel(plan.toolpaths.rapidTravelMm),
+    cuttingLengthMm: cuts.reduce((sum, c) => sum + polylineLengthMm(c.points, c.closed), 0),
+    feedLengthMm: e.cuttingMm,
+    tool: {
+      vbitAngleDeg: s.vbitAngleDeg,
+      vbitTipMm: s.vbitTipMm,
+      vbitMaxWidthMm: s.vbitMaxWidthMm,
+      ...(usesFlat ? { flatEndMillMm: s.flatEndMillMm, flatDepthMm: s.flatDepthMm } : {}),
     },
+    spindleRpm: s.spindleRpm,
+    feedMmPerMin: s.feedMmPerMin,
+    plungeMmPerMin: s.plungeMmPerMin,
+    stepDownMm: s.stepDownMm,
+    safeZMm: s.safeZMm,
+    clearanceZMm: s.clearanceZMm,
+    entryZMm: s.entryZMm,
+    rampAngleDeg: (Math.atan(rampSlope(s)) * 180) / Math.PI,
+    spindleDwellS: s.spindleDwellS,
+    parkMm: parkPoint(s, job.stock.lengthMm),
   };
 }
 
-function laserProgram(job: EngraveJob, s: EngraveSettings, fill: LaserFill | undefined): { text: string; report: LaserReport } {
-  const plan = planLaser(job, s, {}, fill);
-  const text = toLaserGcode(job, s, {}, plan);
+function laserReport(s: EngraveSettings, plan: LaserPlan, fill: LaserFill | undefined): LaserReport {
   const e = plan.estimate;
   return {
-    text,
-    report: {
-      file: ENGRAVE_FILE_NAMES.laser,
-      passes: 1,
-      mode: fill ? 'fill' : 'score',
-      ...(fill
-        ? { fill: { beamMm: fill.beamMm, intervalMm: fill.intervalMm, regions: fill.regions, rings: fill.rings, scoredLines: fill.scored, filledAreaMm2: fill.filledAreaMm2 } }
-        : {}),
-      strokes: plan.strokes.length,
-      timeEstimateS: e.totalS,
-      timeBreakdownS: { burning: e.cuttingS, travel: e.rapidS + e.retractS },
-      rapidTravelMm: travel(plan.rapidTravelMm),
-      cuttingLengthMm: e.cuttingMm,
-      powerPct: s.laserPowerPct,
-      powerS: plan.powerS,
-      maxS: s.laserMaxS,
-      speedMmPerMin: s.laserSpeedMmPerMin,
-    },
+    file: ENGRAVE_FILE_NAMES.laser,
+    passes: 1,
+    mode: fill ? 'fill' : 'score',
+    ...(fill
+      ? { fill: { beamMm: fill.beamMm, intervalMm: fill.intervalMm, regions: fill.regions, rings: fill.rings, scoredLines: fill.scored, filledAreaMm2: fill.filledAreaMm2 } }
+      : {}),
+    strokes: plan.strokes.length,
+    timeEstimateS: e.totalS,
+    timeBreakdownS: { burning: e.cuttingS, travel: e.rapidS + e.retractS },
+    rapidTravelMm: travel(plan.rapidTravelMm),
+    cuttingLengthMm: e.cuttingMm,
+    powerPct: s.laserPowerPct,
+    powerS: plan.powerS,
+    maxS: s.laserMaxS,
+    speedMmPerMin: s.laserSpeedMmPerMin,
   };
+}
+
+/**
+ * A spec's engraving up to its header: the checked job (no title), the
+ * planned programs (ordered toolpaths, laser fill) and the report section.
+ * Everything the programs hold but their header comments, so specs that
+ * share a drawing and an engravingPlanKey share one plan (umbrafab batch).
+ */
+export interface EngravingPlan {
+  /** absent when the spec asks for no program */
+  readonly settings?: EngraveSettings;
+  /** the job with an empty title; absent when the spec asks for no program */
+  readonly job?: EngraveJob;
+  readonly ngc?: NgcPlan;
+  readonly laser?: LaserPlan;
+  readonly report: EngravingReport;
+}
+
+/** What planEngraving reads of a spec (besides the drawing): specs with the same key get the same plan. */
+export function engravingPlanKey(spec: DialSpec): string {
+  const { engrave, process, plate, cutFiles } = spec;
+  return JSON.stringify({ engrave, method: process.method, thickness: plate.thickness, material: plate.material, chordTolerance: cutFiles.chordTolerance });
+}
+
+/**
+ * Plan the engraving programs a spec asks for (engrave.programs, see
+ * engraveProgramsFor) from its plate drawing: checks, toolpaths, fill,
+ * figures; writeEngraving adds the header and writes the text.
+ *
+ * @throws SpecError as engraveFromSpec
+ */
+export async function planEngraving(spec: DialSpec, drawing: PlateDrawing): Promise<EngravingPlan> {
+  const programs = engraveProgramsFor(spec.engrave.programs, spec.process.method);
+  if (programs.length === 0) return { report: { programs } };
+  const settings = engraveSettingsFromSpec(spec);
+  const job = engraveJobFromDrawing(drawing, { thicknessMm: spec.plate.thickness, material: spec.plate.material }, []);
+  let ngc: NgcPlan | undefined;
+  let laser: LaserPlan | undefined;
+  let ngcFigures: NgcReport | undefined;
+  let laserFigures: LaserReport | undefined;
+  for (const program of programs) {
+    if (program === 'ngc') {
+      checkMillJob(job, settings, spec);
+      ngc = planNgc(job, settings);
+      ngcFigures = ngcReport(job, settings, ngc);
+    } else {
+      const fill =
+        spec.engrave.laserFill === 'fill'
+          ? await laserFillPasses(job, {
+              beamMm: spec.engrave.laserBeamMm,
+              intervalMm: spec.engrave.laserFillIntervalMm ?? spec.engrave.laserBeamMm,
+              chordToleranceMm: spec.cutFiles.chordTolerance,
+              holes: drawing.holes,
+              slots: drawing.slots,
+            })
+          : undefined;
+      laser = planLaser(job, settings, {}, fill);
+      laserFigures = laserReport(settings, laser, fill);
+    }
+  }
+  const geometryLengthMm = job.paths.reduce((sum, p) => sum + polylineLengthMm(p.points, p.closed), 0);
+  const drawnMm =
+    drawing.lines.reduce((sum, l) => sum + polylineLengthMm(l.path.points, l.path.closed), 0) +
+    drawing.text.reduce((sum, t) => sum + t.strokes.reduce((s2, p) => s2 + polylineLengthMm(p.points, p.closed), 0), 0);
+  const overThroughCutsMm = Math.max(0, drawnMm - geometryLengthMm);
+  const report: EngravingReport = { programs, preset: settings.material, geometryLengthMm, overThroughCutsMm, ngc: ngcFigures, laser: laserFigures };
+  return { settings, job, ngc, laser, report };
+}
+
+/**
+ * The program texts of a plan under a spec's header (engraveTitleLines):
+ * only the header is written anew, the body text is the plan's.
+ */
+export function writeEngraving(plan: EngravingPlan, spec: DialSpec): SpecEngraving {
+  const { settings } = plan;
+  if (!plan.job || !settings) return { files: [], report: plan.report };
+  const job: EngraveJob = { ...plan.job, title: engraveTitleLines(spec) };
+  const files: { name: string; text: string }[] = [];
+  for (const program of plan.report.programs) {
+    if (program === 'ngc' && plan.ngc) files.push({ name: ENGRAVE_FILE_NAMES.ngc, text: toNgc(job, settings, {}, plan.ngc) });
+    if (program === 'laser' && plan.laser) files.push({ name: ENGRAVE_FILE_NAMES.laser, text: toLaserGcode(job, settings, {}, plan.laser) });
+  }
+  return { files, report: plan.report, job };
 }
 
 /**
@@ -201,38 +273,5 @@ function laserProgram(job: EngraveJob, s: EngraveSettings, fill: LaserFill | und
  * @example (await engraveFromSpec(spec, plateDrawing(layoutDial(spec)))).files.map((f) => f.name)
  */
 export async function engraveFromSpec(spec: DialSpec, drawing: PlateDrawing): Promise<SpecEngraving> {
-  const programs = engraveProgramsFor(spec.engrave.programs, spec.process.method);
-  if (programs.length === 0) return { files: [], report: { programs } };
-  const settings = engraveSettingsFromSpec(spec);
-  const job = engraveJobFromDrawing(drawing, { thicknessMm: spec.plate.thickness, material: spec.plate.material }, engraveTitleLines(spec));
-  const files: { name: string; text: string }[] = [];
-  let ngc: NgcReport | undefined;
-  let laser: LaserReport | undefined;
-  for (const program of programs) {
-    if (program === 'ngc') {
-      const r = ngcProgram(job, settings, spec);
-      files.push({ name: ENGRAVE_FILE_NAMES.ngc, text: r.text });
-      ngc = r.report;
-    } else {
-      const fill =
-        spec.engrave.laserFill === 'fill'
-          ? await laserFillPasses(job, {
-              beamMm: spec.engrave.laserBeamMm,
-              intervalMm: spec.engrave.laserFillIntervalMm ?? spec.engrave.laserBeamMm,
-              chordToleranceMm: spec.cutFiles.chordTolerance,
-              holes: drawing.holes,
-              slots: drawing.slots,
-            })
-          : undefined;
-      const r = laserProgram(job, settings, fill);
-      files.push({ name: ENGRAVE_FILE_NAMES.laser, text: r.text });
-      laser = r.report;
-    }
-  }
-  const geometryLengthMm = job.paths.reduce((sum, p) => sum + polylineLengthMm(p.points, p.closed), 0);
-  const drawnMm =
-    drawing.lines.reduce((sum, l) => sum + polylineLengthMm(l.path.points, l.path.closed), 0) +
-    drawing.text.reduce((sum, t) => sum + t.strokes.reduce((s2, p) => s2 + polylineLengthMm(p.points, p.closed), 0), 0);
-  const overThroughCutsMm = Math.max(0, drawnMm - geometryLengthMm);
-  return { files, report: { programs, preset: settings.material, geometryLengthMm, overThroughCutsMm, ngc, laser }, job };
+  return writeEngraving(await planEngraving(spec, drawing), spec);
 }

@@ -115,3 +115,25 @@ export function serializeGcode(records: readonly GcodeRecord[], decimals: number
   if (options.percent) lines.push('%');
   return `${lines.join('\n')}\n`;
 }
+
+/** Serialised program bodies, by record list and decimals (a batch writes one body under many headers). */
+const bodyTexts = new WeakMap<readonly GcodeRecord[], Map<number, string>>();
+
+/**
+ * serializeGcode([...header, ...body]) with the body's text kept: the same
+ * body array under another header is not serialised again. Byte for byte the
+ * same as serializeGcode: a header of comments only sets no modal state (the
+ * F word of the body's first feed is written either way); any other header
+ * goes through serializeGcode whole.
+ *
+ * @example serializeProgram([{ kind: 'comment', text: 'job' }], plan.body, 3, { percent: true })
+ */
+export function serializeProgram(header: readonly GcodeRecord[], body: readonly GcodeRecord[], decimals: number, options: SerializeOptions = {}): string {
+  if (header.length === 0 || body.length === 0 || header.some((r) => r.kind !== 'comment')) return serializeGcode([...header, ...body], decimals, options);
+  let byDecimals = bodyTexts.get(body);
+  if (!byDecimals) bodyTexts.set(body, (byDecimals = new Map()));
+  let bodyText = byDecimals.get(decimals);
+  if (bodyText === undefined) byDecimals.set(decimals, (bodyText = serializeGcode(body, decimals)));
+  const percent = options.percent ? '%\n' : '';
+  return `${percent}${serializeGcode(header, decimals)}${bodyText}${percent}`;
+}

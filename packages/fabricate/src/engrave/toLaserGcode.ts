@@ -2,7 +2,7 @@ import type { EngraveJob } from './engraveInput.ts';
 import { validateEngraveJob } from './engraveInput.ts';
 import { estimateTime, type TimeEstimate } from './estimateTime.ts';
 import { formatNumber } from './formatNumber.ts';
-import { serializeGcode, type GcodeRecord } from './gcodeRecords.ts';
+import { serializeProgram, type GcodeRecord } from './gcodeRecords.ts';
 import type { EngraveSettings } from './materialPresets.ts';
 import type { LaserFill, LaserPass } from './laserFill.ts';
 import { orderPaths } from './orderPaths.ts';
@@ -95,5 +95,5 @@ export function toLaserGcode(job: EngraveJob, settings: EngraveSettings, options
     },
     ...figureComments({ rapidTravelMm: plan.rapidTravelMm, estimate: plan.estimate, title: job.title, process: 'laser' }),
   ];
-  return serializeGcode([...header, ...plan.body], o.decimals);
+  return serializeProgram(header, plan.body, o.decimals);
 }

@@ -1,7 +1,7 @@
 import type { EngraveJob } from './engraveInput.ts';
 import { estimateTime, type TimeEstimate } from './estimateTime.ts';
 import { formatNumber } from './formatNumber.ts';
-import { serializeGcode, type GcodeRecord } from './gcodeRecords.ts';
+import { serializeProgram, type GcodeRecord } from './gcodeRecords.ts';
 import { rampFeedMmPerMin, rampSlope, type EngraveSettings } from './materialPresets.ts';
 import { enterAndCut, machineComments, millEnd, millStart, spindleOff, spindleOn } from './millProgram.ts';
 import { figureComments, safetyComments, stockComments } from './headerComments.ts';
@@ -130,5 +130,5 @@ export function toNgc(job: EngraveJob, settings: EngraveSettings, options: Gcode
     },
     ...figureComments({ rapidTravelMm: plan.toolpaths.rapidTravelMm, estimate: plan.estimate, title: job.title, process: 'mill' }),
   ];
-  return serializeGcode([...header, ...plan.body], o.decimals, { percent: true });
+  return serializeProgram(header, plan.body, o.decimals, { percent: true });
 }

@@ -18,3 +18,4 @@ export * from './planarPlateDrawing.ts';
 export * from './planarGnomonSolid.ts';
 export * from './planarInstallSheet.ts';
 export * from './wallDeclinationFromShadow.ts';
+export * from './wallMount.ts';

@@ -1,5 +1,6 @@
 import { INSTALL_CAUTIONS } from '../install/installSheet.ts';
 import type { PlanarLayout } from './layoutPlanar.ts';
+import { wallMount } from './wallMount.ts';
 
 /** The installation sheet of a planar face: plain data, every length mm, angle degrees. */
 export interface PlanarInstallSheet {
@@ -51,7 +52,7 @@ export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
         Math.abs(layout.plateTurnDeg) > 1e-9
           ? `The substyle is not plumb: mark it through the root at ${f2(Math.abs(layout.plateTurnDeg))}° from the plumb line, turned ${layout.plateTurnDeg > 0 ? 'clockwise' : 'anticlockwise'} seen from in front (set a bevel gauge or a digital level on the drawn line). The plate's long edges follow the substyle; its 'plumb line' reference line must lie on your pencil line.`
           : `The substyle is plumb: the plate's long edges stand vertical; check them with a level.`,
-        `Hold the plate on the marks, drill the fixings through its holes (wall plugs and stainless screws sized for the wall and the plate's weight), and fix it.`,
+        ...mountSteps(layout, `Hold the plate on the marks, drill the fixings through its holes (wall plugs and stainless screws sized for the wall and the plate's weight), and fix it.`),
         `Fit the fin in its slots, square to the face: its style makes ${f2(psi)}° with the face and points at the celestial ${pole} pole.`,
       );
       break;
@@ -60,7 +61,8 @@ export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
       steps.push(
         `The face looks due ${spec.face!.facing}: set it plumb (check both edges with a level) in the vertical plane of the true meridian.`,
         `The substyle (the plate's long axis) must rise toward the ${pole} at ${f2(Math.abs(lat))}° from the horizontal (the site's |latitude|): mark a level line through the plate's centre, then the substyle at that angle with a bevel gauge.`,
-        `Fix the plate through its holes, then fit the fin: its style runs parallel to the face, ${f1(layout.gnomon.heightMm)} mm above it.`,
+        ...mountSteps(layout, `Fix the plate through its holes.`),
+        `Fit the fin: its style runs parallel to the face, ${f1(layout.gnomon.heightMm)} mm above it.`,
       );
       break;
     case 'equatorial':
@@ -87,4 +89,23 @@ export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
     leftOut: layout.leftOut.map((l) => `${l.label}: ${l.reason}`),
     cautions: INSTALL_CAUTIONS,
   };
+}
+
+/**
+ * Fixing a wall face through its mounting plate (`wallMount`, mount.dxf /
+ * mount.stl), or `direct` when the face has none: the mount's plumb line,
+ * level line and substyle (reference layer) laid on the pencil marks, the
+ * mount anchored through its rim, the plate screwed to its tapped holes.
+ */
+function mountSteps(layout: PlanarLayout, direct: string): string[] {
+  const m = wallMount(layout);
+  if (!m) return [direct];
+  const [x, y] = m.plateAtMm;
+  const [dial, wall] = m.fasteners;
+  return [
+    `Drill the mount's ${m.fixings.length} dial holes Ø ${m.fixings[0].mountHoleMm.toFixed(1)} mm (as cut) and tap them ${dial.size}; the dial plate sits on its drawn outline, its lower-left corner ${f1(x)} mm in from the mount's left edge and ${f1(y)} mm up from its lower edge, so its holes fall on the tapped ones.`,
+    `With the plumb line (plumb bob) and a level line (spirit level) through the root's point pencilled on the wall, hold the mount with its 'plumb line' and 'level line' reference lines on the pencil marks (transfer them to the mount's edges with a square first), check its 'plumb line' with the level once more, and mark the ${m.anchors.length} anchor holes through its rim.`,
+    `Drill the wall and fix the mount through its ${wall.count} anchor holes: wall plugs and stainless screws with washers (timber: coach screws), ${wall.lengthMm} mm long as a first figure; the plug maker's data and the wall rule.`,
+    `Screw the dial plate to the mount with ${dial.count} ${dial.size} × ${dial.lengthMm} mm stainless pan-head screws.`,
+  ];
 }

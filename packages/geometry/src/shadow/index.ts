@@ -7,3 +7,4 @@ export * from './drawnMarks.ts';
 export * from './marksFromPlate.ts';
 export * from './checkDial.ts';
 export * from './checkPlanar.ts';
+export * from './planarMarksFromPlate.ts';

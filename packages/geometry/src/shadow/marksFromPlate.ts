@@ -91,7 +91,7 @@ export function marksFromPlate(layout: DialLayout, lines: readonly PlateLine[]):
 }
 
 /** The centre-line of a mark line, ordered by y: a score polyline's extreme points, an etch outline's short-side middles. */
-function centreLine(line: PlateLine): readonly [Vec2, Vec2] | null {
+export function centreLine(line: PlateLine): readonly [Vec2, Vec2] | null {
   const pts = line.points;
   if (pts.length < 2) return null;
   if (line.layer === MARK_LAYERS.etch) {

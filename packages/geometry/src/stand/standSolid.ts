@@ -18,7 +18,7 @@ import type { FlatStand } from './standTypes.ts';
  *
  * @example (await standSolid(flatStand(layout))).triangles.length
  */
-export async function standSolid(stand: FlatStand): Promise<Mesh> {
+export async function standSolid(stand: Pick<FlatStand, 'parts' | 'instances'>): Promise<Mesh> {
   const wasm = await manifoldEngine();
   const { CrossSection } = wasm;
   const live: { delete(): void }[] = [];
