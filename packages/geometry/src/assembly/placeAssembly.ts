@@ -9,6 +9,7 @@ import type { FaceFrame, Facet, PlacedPart } from './assemblyTypes.ts';
 import { flatStand, type SizedStand } from '../stand/flatStand.ts';
 import { placePoint } from '../stand/placeStandPart.ts';
 import { standFacets } from './standFacets.ts';
+import { roundedRectPolygon } from '../outline/roundedRectPolygon.ts';
 
 /** The dial as it stands: wedge on level ground, plate on the wedge's seat, gnomon in the plate's slots. */
 export interface Assembly {
@@ -28,7 +29,7 @@ export interface Assembly {
 }
 
 /** Segments per quarter circle of the plate's rounded corners in the picture. */
-const CORNER_SEGMENTS = 6;
+export const ASSEMBLY_CORNER_SEGMENTS = 6;
 
 /**
  * Place the three parts of a dial in the world frame (X east, Y north, Z up,
@@ -67,7 +68,10 @@ export function placeAssembly(layout: DialLayout): Assembly {
   const onFace = (p: Vec3): Vec3 => faceToWorld(face, p);
 
   // Plate: the rounded outline as a prism from z = −t to the face (z = 0).
-  const faceOutline = roundedRectOutline(-plate.substyleX, -plate.faceOriginY, plate.widthMm, plate.lengthMm, plate.cornerRadiusMm);
+  const faceOutline = roundedRectPolygon(
+    { kind: 'rect', cx: -plate.substyleX + plate.widthMm / 2, cy: -plate.faceOriginY + plate.lengthMm / 2, widthMm: plate.widthMm, heightMm: plate.lengthMm, cornerRadiusMm: plate.cornerRadiusMm },
+    ASSEMBLY_CORNER_SEGMENTS,
+  );
   const plateFacets = prismFacets(faceOutline, -t, 0).map((f) => ({ points: f.points.map(onFace), normal: rotate(face, f.normal) }));
   const gnomonFacets = meshFacets(gnomonOnPlate(fin, plan), onFace);
   const turn = (d: Vec3): Vec3 => [sign * d[0], sign * d[1], d[2]];
@@ -131,21 +135,6 @@ function meshFacets(mesh: Mesh, move: (p: Vec3) => Vec3): Facet[] {
     const pts = [mesh.positions[a], mesh.positions[b], mesh.positions[c]].map(move);
     return { points: pts, normal: normalize3(cross3(sub3(pts[1], pts[0]), sub3(pts[2], pts[0]))) };
   });
-}
-
-/** A CCW rounded rectangle from its lower-left corner, corners as CORNER_SEGMENTS-gons. */
-export function roundedRectOutline(x0: number, y0: number, w: number, h: number, r: number): Vec2[] {
-  const rr = Math.min(r, w / 2, h / 2);
-  if (rr <= 0) return [[x0, y0], [x0 + w, y0], [x0 + w, y0 + h], [x0, y0 + h]];
-  const centres: Vec2[] = [[x0 + w - rr, y0 + rr], [x0 + w - rr, y0 + h - rr], [x0 + rr, y0 + h - rr], [x0 + rr, y0 + rr]];
-  const out: Vec2[] = [];
-  centres.forEach(([cx, cy], k) => {
-    for (let s = 0; s <= CORNER_SEGMENTS; s++) {
-      const a = (-Math.PI / 2) + (k * Math.PI) / 2 + (s * Math.PI) / 2 / CORNER_SEGMENTS;
-      out.push([cx + rr * Math.cos(a), cy + rr * Math.sin(a)]);
-    }
-  });
-  return out;
 }
 
 /** Faces of a prism over a CCW outline from z0 to z1 (face frame), with outward normals. */

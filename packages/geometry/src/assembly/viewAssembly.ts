@@ -8,7 +8,8 @@ import type { AssemblyView, Facet, PictureItem } from './assemblyTypes.ts';
 import { shoelaceArea } from '../parts/ring2d.ts';
 import { clipPolygonAbovePlane, clipPolygonConvex } from './clipPolygon.ts';
 import { gnomonShadowOnFace, type FaceShadow } from './gnomonShadowOnFace.ts';
-import { faceToWorld, placeAssembly, roundedRectOutline, worldToFaceDirection, type Assembly } from './placeAssembly.ts';
+import { ASSEMBLY_CORNER_SEGMENTS, faceToWorld, placeAssembly, worldToFaceDirection, type Assembly } from './placeAssembly.ts';
+import { roundedRectPolygon } from '../outline/roundedRectPolygon.ts';
 import type { PictureSun } from './sunForPicture.ts';
 
 /** Options of `viewAssembly`. */
@@ -175,7 +176,7 @@ function faceEngraving(layout: DialLayout, drawing: PlateDrawing, assembly: Asse
     out.push({ kind: 'engraving', role: 'hole', label: 'hole', polygon: poly });
   }
   for (const r of drawing.slots) {
-    const poly = roundedRectOutline(r.cx - r.widthMm / 2, r.cy - r.heightMm / 2, r.widthMm, r.heightMm, r.cornerRadiusMm).map(([x, y]) => onFace(x, y));
+    const poly = roundedRectPolygon(r, ASSEMBLY_CORNER_SEGMENTS).map(([x, y]) => onFace(x, y));
     out.push({ kind: 'engraving', role: 'slot', label: 'slot', polygon: poly });
   }
   for (const l of drawing.lines) {

@@ -1,13 +1,12 @@
 import type { CrossSection, Manifold, ManifoldToplevel } from 'manifold-3d';
 import type { PlateDrawing } from '../plate/plateDrawing.ts';
-import type { RoundedRect, Vec2 } from '../types.ts';
+import type { Vec2 } from '../types.ts';
 import { circlePolygon, widenPolyline } from './widenPolyline.ts';
+import { roundedRectPolygon } from '../outline/roundedRectPolygon.ts';
 import type { Keep } from './manifoldScope.ts';
 
 /** Sides of each mounting-hole polygon (circumscribing the nominal circle). */
 const HOLE_SEGMENTS = 32;
-/** Corner-arc segments per quarter turn of the plate outline and the slots. */
-const CORNER_SEGMENTS = 8;
 /** How far the groove cutters reach above the face, mm (so no coplanar cut). */
 const CUTTER_OVERSHOOT_MM = 1;
 /** Outline simplification tolerance for the groove section, mm (5 µm, far below print resolution). */
@@ -16,25 +15,6 @@ const SIMPLIFY_MM = 0.005;
 /** Polygons in the mutable tuple form manifold-3d's CrossSection takes. */
 export function contours(polys: readonly (readonly Vec2[])[]): [number, number][][] {
   return polys.map((poly) => poly.map(([x, y]): [number, number] => [x, y]));
-}
-
-/** A rounded rectangle as a counter-clockwise polygon (corner arcs as chords). */
-export function roundedRectPolygon(r: RoundedRect): Vec2[] {
-  const x0 = r.cx - r.widthMm / 2;
-  const x1 = r.cx + r.widthMm / 2;
-  const y0 = r.cy - r.heightMm / 2;
-  const y1 = r.cy + r.heightMm / 2;
-  const c = Math.min(r.cornerRadiusMm, r.widthMm / 2, r.heightMm / 2);
-  if (c <= 0) return [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];
-  const out: Vec2[] = [];
-  const corners: [number, number, number][] = [[x1 - c, y0 + c, -90], [x1 - c, y1 - c, 0], [x0 + c, y1 - c, 90], [x0 + c, y0 + c, 180]];
-  for (const [cx, cy, start] of corners) {
-    for (let k = 0; k <= CORNER_SEGMENTS; k++) {
-      const t = ((start + (90 * k) / CORNER_SEGMENTS) * Math.PI) / 180;
-      out.push([cx + c * Math.cos(t), cy + c * Math.sin(t)]);
-    }
-  }
-  return out;
 }
 
 /** The grooved plate and the 2D sections it was made from (all owned by the caller's `keep`). */
