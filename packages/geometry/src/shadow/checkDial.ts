@@ -10,8 +10,9 @@ import { shadowOnLine } from './castShadow.ts';
 import { dialFrame, toDialFrame, type DialFrame } from './dialFrame.ts';
 import { drawnMarksFromLayout, type DrawnMark } from './drawnMarks.ts';
 import { gnomonForLayout } from './gnomonForLayout.ts';
+import { checkSampling } from './checkSampling.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
-import { instantAtHourAngle, sunOnDay, sunTrack, type RefractionModel, type SunSample } from '../sun/sunTrack.ts';
+import { instantAtHourAngle, sunOnDay, type RefractionModel, type SunSample } from '../sun/sunTrack.ts';
 import { KM_PER_AU } from 'astronomy-engine';
 
 /**
@@ -163,27 +164,17 @@ export interface CheckResult {
  */
 export function checkDial(layout: DialLayout, options: CheckOptions = {}): CheckResult {
   const spec = layout.spec;
+  const { toleranceMm, stepMinutes, everyDays, refraction, year, track } = checkSampling(spec, options);
   const c = spec.check;
-  const toleranceMm = options.toleranceMm ?? c.tolerance;
-  const stepMinutes = options.stepMinutes ?? c.sampling.stepMinutes;
-  const everyDays = options.everyDays ?? c.sampling.everyDays;
-  const refraction = options.refraction ?? c.refraction;
   const tiltErrorDeg = options.tiltErrorDeg ?? c.tiltError;
   const azimuthErrorDeg = options.azimuthErrorDeg ?? c.azimuthError;
-  const year = options.year ?? spec.calendar.year;
-  if (!(toleranceMm > 0)) throw new SpecError('check.tolerance', toleranceMm, 'allowed: a number greater than 0 mm');
-  if (!(stepMinutes >= 0.25 && stepMinutes <= 60)) throw new SpecError('check.sampling.stepMinutes', stepMinutes, 'allowed: a number from 0.25 to 60 min');
   const drawn = options.drawn ?? drawnMarksFromLayout(layout);
   if (drawn.length === 0) throw new SpecError('marks', 0, 'allowed: at least one mark to check');
 
-  const track = sunTrack({ latitudeDeg: spec.site.latitude, longitudeDeg: spec.site.longitude, timezone: spec.site.timezone, year, everyDays, refraction });
   const part = gnomonForLayout(layout);
   // The hour lines read the straight style at full height; a nodus notch's
   // flanks (lower, sloping) are left out: they are meant to mark the date.
-  const found = styleEdges(part.mesh);
-  const h = Math.max(...[...found.minusX, ...found.plusX].flatMap((e) => [e[0][2], e[1][2]]));
-  const atTop = (e: Edge3) => Math.abs(e[0][2] - h) < 1e-9 && Math.abs(e[1][2] - h) < 1e-9;
-  const edges = { minusX: found.minusX.filter(atTop), plusX: found.plusX.filter(atTop) };
+  const { h, edges } = topStyleEdges(part.mesh);
   const lat = spec.site.latitude;
   const frame = dialFrame({ latitudeDeg: lat, tiltErrorDeg, azimuthErrorDeg });
   const frameTilt = dialFrame({ latitudeDeg: lat, tiltErrorDeg: tiltErrorDeg + 1, azimuthErrorDeg });
@@ -377,4 +368,12 @@ function seedFromSweep(sweepH: Float64Array, H: number, t0: number, stepMs: numb
   }
   const f = (H - sweepH[lo]) / (sweepH[hi] - sweepH[lo] || 1);
   return t0 + (lo + f) * stepMs;
+}
+
+/** The style edges at the gnomon's full height (a nodus notch's lower flanks left out) and that height, mm. */
+function topStyleEdges(mesh: Parameters<typeof styleEdges>[0]): { h: number; edges: { minusX: readonly Edge3[]; plusX: readonly Edge3[] } } {
+  const found = styleEdges(mesh);
+  const h = Math.max(...[...found.minusX, ...found.plusX].flatMap((e) => [e[0][2], e[1][2]]));
+  const atTop = (e: Edge3) => Math.abs(e[0][2] - h) < 1e-9 && Math.abs(e[1][2] - h) < 1e-9;
+  return { h, edges: { minusX: found.minusX.filter(atTop), plusX: found.plusX.filter(atTop) } };
 }

@@ -11,6 +11,7 @@ import type { PlanarLayout, PlanarMark } from '../planar/layoutPlanar.ts';
 import { planarGnomonSolid } from '../planar/planarGnomonSolid.ts';
 import type { FinEdge } from '../planar/planarTypes.ts';
 import { sunDirectionEnu } from '../planar/sunDirectionEnu.ts';
+import { checkSampling } from './checkSampling.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
 
 /** Rate of the hour angle, rad per second of time (one turn per solar day, as the polar check). */
@@ -104,17 +105,11 @@ export interface PlanarCheckResult {
  */
 export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = {}): PlanarCheckResult {
   const spec = layout.spec;
-  const c = spec.check;
-  const toleranceMm = options.toleranceMm ?? c.tolerance;
-  const stepMinutes = options.stepMinutes ?? c.sampling.stepMinutes;
-  const everyDays = options.everyDays ?? c.sampling.everyDays;
-  const refraction = options.refraction ?? c.refraction;
-  const year = options.year ?? spec.calendar.year;
+  const { toleranceMm, stepMinutes, everyDays, refraction, year, track } = checkSampling(spec, options);
   const drawn = options.marks ?? layout.marks.filter((m) => !m.underGnomon);
   if (drawn.length === 0) throw new SpecError('marks', 0, 'allowed: at least one mark to check');
   const face = layout.face;
   const frame = (v: Vec3): Vec3 => [dot3(v, face.right), dot3(v, face.up), dot3(v, face.normal)];
-  const track = sunTrack({ latitudeDeg: spec.site.latitude, longitudeDeg: spec.site.longitude, timezone: spec.site.timezone, year, everyDays, refraction });
   const part = planarGnomonSolid(layout);
   const found = styleEdges(part.mesh, { fromRoot: true });
   const finSideSign = Math.sign(dot3(face.fin, face.right)) || 1;
