@@ -1,4 +1,3 @@
-import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
@@ -7,6 +6,7 @@ import { parse } from 'yaml';
 import { parseSpec } from '@umbrafab/geometry';
 import { buildAnyFiles } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
+import { sheetCheck } from './helpers/sheetCheck.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');
 const FIXTURES = ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial', 'equatorial-lower'];
@@ -40,14 +40,7 @@ describe('sheet.dxf of every planar face: plate, sheet fin and wall mount nested
       for (const p of sheet.pieces) expect(texts.some((t) => (t.text ?? '').startsWith(`${p.part} `))).toBe(true);
       expect(texts.every((e) => e.layer === 'REFERENCE_NO_CUT')).toBe(true);
       // Source: shapely (Debian python3-shapely): the parts' cut regions read back from sheet.dxf.
-      const out = JSON.parse(execFileSync('/usr/bin/python3', [join(ROOT, 'test/helpers/sheet_check.py'), file, String(sheet.widthMm), String(sheet.lengthMm)], { encoding: 'utf8' })) as {
-        parts: number;
-        valid: boolean;
-        maxOverlapMm2: number;
-        minDistanceMm: number;
-        outsideMm2: number;
-        edgeMm: number;
-      };
+      const out = sheetCheck(file, sheet.widthMm, sheet.lengthMm);
       console.log(`${name} ${sheet.file}: ${out.parts} parts (${own.join(', ')}) on ${sheet.widthMm.toFixed(1)} x ${sheet.lengthMm.toFixed(1)} mm, closest ${out.minDistanceMm?.toFixed(3) ?? '-'} mm apart (gap ${sheet.gapMm} mm), ${out.edgeMm.toFixed(3)} mm from the edge`);
       expect(out.parts).toBe(sheet.pieces.length);
       expect(out.valid).toBe(true);
