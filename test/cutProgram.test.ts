@@ -1,12 +1,11 @@
-import { execFileSync } from 'node:child_process';
 import { join, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { layoutDial, parseSpec, plateDrawing, sheetParts, SpecError, timeFaceExtras, type SheetPart } from '@umbrafab/geometry';
+import { layoutDial, parseSpec, plateDrawing, sheetParts, SpecError, timeFaceExtras } from '@umbrafab/geometry';
 import { buildFiles, readSpecFile } from '@umbrafab/cli';
 import { cutFromSpec } from '@umbrafab/fabricate';
 import { expectClose } from './helpers/closeTo.ts';
-import { canonTimes, checkMillStartEnd, feedRuns, motions, runRs274, xyLength, type CanonMotion } from './helpers/rs274.ts';
+import { canonTimes, checkMillStartEnd, feedRuns, motions, runRs274, xyLength } from './helpers/rs274.ts';
+import { shapelyCheck } from './helpers/cutCheck.ts';
 
 // Outside validators: Debian's linuxcnc-uspace `rs274 -g` (the standalone
 // RS274NGC interpreter) reads cut.ngc, and every check below reads its
@@ -33,32 +32,6 @@ function merge(a: Json, b: Json): Json {
   const out: Json = { ...a };
   for (const [k, v] of Object.entries(b)) out[k] = v && typeof v === 'object' && !Array.isArray(v) && typeof a[k] === 'object' ? merge(a[k], v) : v;
   return out;
-}
-
-interface RunCheck {
-  readonly part: string;
-  readonly side: 'inside' | 'outside';
-  readonly distMin: number | null;
-  readonly distMax: number | null;
-  readonly inPart: number;
-  readonly area: number;
-  readonly points: number;
-}
-
-function shapelyCheck(parts: readonly { part: SheetPart; originMm: readonly [number, number] }[], runs: readonly CanonMotion[][], finalZ: number): RunCheck[] {
-  const script = fileURLToPath(new URL('./helpers/cut_check.py', import.meta.url));
-  const move = (o: readonly [number, number]) => (p: readonly [number, number]) => [p[0] + o[0], p[1] + o[1]];
-  const input = {
-    finalZ,
-    parts: parts.map(({ part, originMm }) => ({
-      name: part.name,
-      outer: part.outer.points.map(move(originMm)),
-      inner: part.inner.map((f) => (f.kind === 'circle' ? { cx: f.cx + originMm[0], cy: f.cy + originMm[1], r: f.radiusMm } : f.points.map(move(originMm)))),
-    })),
-    // Every run without its last move (the lead-out into the waste, or out to a hole's centre).
-    runs: runs.map((run) => [[run[0].from.x, run[0].from.y, run[0].from.z], ...run.slice(0, run.length > 1 ? -1 : undefined).map((m) => [m.to.x, m.to.y, m.to.z])]),
-  };
-  return JSON.parse(execFileSync('/usr/bin/python3', [script], { input: JSON.stringify(input), encoding: 'utf8', maxBuffer: 256 * 1024 * 1024 })) as RunCheck[];
 }
 
 describe.each(CASES)('cut.ngc: $name', ({ file, patch }) => {

@@ -1,14 +1,15 @@
-import { finSheetPart, wallMount, type DialSpec, type PlanarGnomonPart, type PlanarLayout, type PlateDrawing, type SheetPart } from '@umbrafab/geometry';
-import { CALIBRATION_BAR_MM, partsTemplateTiles, toPartsTemplatePdf, type PlanarTemplateGuide, type TemplatePart } from '@umbrafab/fabricate';
+import { finSheetPart, plateSheetPart, wallMount, type DialSpec, type PlanarGnomonPart, type PlanarLayout, type PlateDrawing, type SheetPart } from '@umbrafab/geometry';
+import { CALIBRATION_BAR_MM, cutFromParts, partsTemplateTiles, toPartsTemplatePdf, writesCutProgram, type CutProgram, type CuttingReport, type PlanarTemplateGuide, type TemplatePart } from '@umbrafab/fabricate';
+import { utf8 } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import type { TemplateSection } from './picturesOutputs.ts';
 import { sheetFiles, type SheetSections } from './sheetOutputs.ts';
 
-/** The outputs a planar face shares with the polar plate beyond its own cut files: template.pdf and sheet.dxf. */
+/** The outputs a planar face shares with the polar plate beyond its own cut files: template.pdf, sheet.dxf and cut.ngc. */
 export interface PlanarExtras {
   readonly files: readonly OutputFile[];
   /** report.json sections, each present when its file is written */
-  readonly report: { readonly template?: PlanarTemplateSection } & SheetSections;
+  readonly report: { readonly template?: PlanarTemplateSection; readonly cutting?: CuttingReport & { readonly otherStock: readonly string[] } } & SheetSections;
   /** what install.md says about template.pdf (absent when it is not written) */
   readonly templateGuide?: PlanarTemplateGuide;
 }
@@ -32,11 +33,29 @@ export async function planarExtraOutputs(spec: DialSpec, layout: PlanarLayout, d
   const template = await planarTemplate(spec, layout, drawing, gnomon);
   const mount = wallMount(layout)?.part;
   const sheet = spec.process.method === 'print' ? undefined : await sheetFiles(spec, layout.plate.thicknessMm, [...cutParts, ...(mount ? [mount] : [])]);
+  const cut = await planarCutProgram(spec, layout, drawing, gnomon, [...cutParts, ...(mount ? [mount] : [])]);
   return {
-    files: [...(sheet?.files ?? []), ...(template?.files ?? [])],
-    report: { ...(sheet?.report ?? {}), ...(template ? { template: template.report } : {}) },
+    files: [...(sheet?.files ?? []), ...(cut ? [{ name: cut.file.name, bytes: utf8(cut.file.text) }] : []), ...(template?.files ?? [])],
+    report: { ...(sheet?.report ?? {}), ...(cut ? { cutting: cut.report } : {}), ...(template ? { template: template.report } : {}) },
     ...(template ? { templateGuide: template.guide } : {}),
   };
+}
+
+/**
+ * cut.ngc of a planar face for a router job with engrave.cut.write
+ * (`cutFromParts`, the polar writer): the parts of the plate's stock and
+ * thickness (plate, sheet fin, wall mount), the plate at the work origin;
+ * a part of other stock (a fin thicker than the plate) is listed in
+ * `otherStock`, cut separately. Null when no cut.ngc is written.
+ */
+async function planarCutProgram(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing, gnomon: PlanarGnomonPart, parts: readonly SheetPart[]): Promise<{ file: CutProgram['file']; report: CutProgram['report'] & { readonly otherStock: readonly string[] } } | null> {
+  if (!writesCutProgram(spec)) return null;
+  const same = (p: SheetPart) => p.material === spec.plate.material && Math.abs(p.thicknessMm - layout.plate.thicknessMm) < 1e-9;
+  const o = { material: spec.plate.material, reliefToolRadiusMm: 0, chordToleranceMm: spec.cutFiles.chordTolerance };
+  // The same parts before their inside-corner relief, for the tool-fit check.
+  const bare = parts.map((p) => (p.name === 'plate' ? plateSheetPart(drawing, { ...o, thicknessMm: p.thicknessMm }) : p.name === 'gnomon' ? finSheetPart(gnomon.profile, { ...o, thicknessMm: p.thicknessMm }) : p));
+  const r = await cutFromParts(spec, bare.filter(same), parts.filter(same));
+  return { file: r.file, report: { ...r.report, otherStock: parts.filter((p) => !same(p)).map((p) => p.name) } };
 }
 
 /**

@@ -89,19 +89,35 @@ function bounds(part: SheetPart): { min: [number, number]; max: [number, number]
  * @returns the file and the report's `cutting` section, or null when the build writes no cut.ngc
  * @throws SpecError naming process.kerf, the feature and both sizes when the tool does not fit
  */
-export async function cutFromSpec(spec: DialSpec, layout: DialLayout, drawing: PlateDrawing): Promise<{ readonly file: { readonly name: string; readonly text: string }; readonly report: CuttingReport } | null> {
+export async function cutFromSpec(spec: DialSpec, layout: DialLayout, drawing: PlateDrawing): Promise<CutProgram | null> {
   if (!writesCutProgram(spec)) return null;
+  return cutFromParts(spec, sheetParts(layout, drawing, { reliefToolRadiusMm: 0 }), sheetParts(layout, drawing));
+}
+
+/** cut.ngc and the report's `cutting` section. */
+export interface CutProgram {
+  readonly file: { readonly name: string; readonly text: string };
+  readonly report: CuttingReport;
+}
+
+/**
+ * cut.ngc from a job's flat parts, any face type (`cutFromSpec` for the
+ * polar plate; the other planar faces pass their plate, sheet fin and wall
+ * mount): `bareParts` before the inside-corner relief for the tool-fit
+ * check, `reliefParts` as cut, the plate first (at the work origin).
+ */
+export async function cutFromParts(spec: DialSpec, bareParts: readonly SheetPart[], reliefParts: readonly SheetPart[]): Promise<CutProgram> {
   const s = cutSettingsFromSpec(spec);
   const machine = engraveSettingsFromSpec(spec);
   const tol = spec.cutFiles.chordTolerance;
   // The fit check reads the parts before relief; holes the tool's own size are drilled, so they pass.
-  const bare = sheetParts(layout, drawing, { reliefToolRadiusMm: 0 }).map((p) => ({
+  const bare = bareParts.map((p) => ({
     ...p,
     inner: p.inner.filter((f) => !(f.kind === 'circle' && Math.abs(2 * f.radiusMm - s.toolDiameterMm) <= DRILL_MATCH_MM)),
   }));
   assertToolFits(bare, s.toolDiameterMm, 'process.kerf');
   // A part the job needs several of (quantity) is cut that many times, copies named part-1, part-2, …
-  const parts = sheetParts(layout, drawing).flatMap((p) => {
+  const parts = reliefParts.flatMap((p) => {
     const n = p.quantity ?? 1;
     return n === 1 ? [p] : Array.from({ length: n }, (_, k) => ({ ...p, name: `${p.name}-${k + 1}` }));
   });
