@@ -31,7 +31,16 @@ export { piecesDrawing } from './cut/piecesDrawing.ts';
 export { toInstallMd } from './install/toInstallMd.ts';
 export { escapeMarkdownText } from './install/markdownText.ts';
 
-export { toTemplatePdf, templateTiles, CALIBRATION_BAR_MM, CALIBRATION_BAR_RGB } from './template/toTemplatePdf.ts';
+export {
+  toTemplatePdf,
+  templateTiles,
+  toPartsTemplatePdf,
+  partsTemplateTiles,
+  CALIBRATION_BAR_MM,
+  CALIBRATION_BAR_RGB,
+  PRINT_AT_FULL_SIZE,
+  type TemplatePart,
+} from './template/toTemplatePdf.ts';
 
 export { toPng, toPngAsync, svgWidthMm, svgHeightMm } from './pictures/toPng.ts';
 export { toAssemblySvg } from './pictures/toAssemblySvg.ts';
@@ -42,7 +51,7 @@ export { toCheckSvg } from './check/toCheckSvg.ts';
 export { checkTableText } from './check/checkTableText.ts';
 export { planarCheckText } from './check/planarCheckText.ts';
 
-export { toPlanarInstallMd } from './install/toPlanarInstallMd.ts';
+export { toPlanarInstallMd, type PlanarTemplateGuide } from './install/toPlanarInstallMd.ts';
 
 export { assertToolFits } from './process/assertToolFits.ts';
 

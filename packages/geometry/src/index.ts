@@ -92,7 +92,7 @@ export { sheetPartAreaMm2 } from './stand/sheetPartAreaMm2.ts';
 
 export { faceOrientationOf, layoutPlanar, type PlanarLayout } from './planar/layoutPlanar.ts';
 export { planarPlateDrawing } from './planar/planarPlateDrawing.ts';
-export { planarGnomonSolid } from './planar/planarGnomonSolid.ts';
+export { planarGnomonSolid, type PlanarGnomonPart } from './planar/planarGnomonSolid.ts';
 export { planarInstallSheet, type PlanarInstallSheet } from './planar/planarInstallSheet.ts';
 export { wallDeclinationFromShadow, type ShadowReading } from './planar/wallDeclinationFromShadow.ts';
 export { wallMount, WALL_MOUNT_RIM_MM, WALL_ANCHOR_HOLE_MM } from './planar/wallMount.ts';
