@@ -1,7 +1,7 @@
 import { copyFileSync, existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import type { Page } from 'playwright-core';
+import type { Page, Route } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { startServer, type RunningServer } from '@umbrafab/cli';
 import { CHROMIUM, launchChromium } from './browserChromium.ts';
@@ -122,6 +122,31 @@ describe.skipIf(SKIP_BROWSER)('the dial page in a real browser (Debian chromium,
     expect(await number(page, 'gnomon')).toBe('40 mm × 3 mm');
     const mark15After = await page.locator('#face svg #lines path:has(title:text-is("15:00 east"))').getAttribute('d');
     expect(mark15After).not.toBe(mark15Before);
+    expect(problems).toEqual([]);
+  });
+
+  it('aborts a view request that a newer edit took over, and shows the newer one', async () => {
+    // The first edit's /api/view is held in the browser until the second edit has started its own.
+    const aborted: string[] = [];
+    page.on('requestfailed', (r) => aborted.push(`${new URL(r.url()).pathname} ${r.failure()?.errorText}`));
+    let held: Route | null = null;
+    let release = () => {};
+    const released = new Promise<void>((ok) => (release = ok));
+    await page.route('**/api/view', async (route) => {
+      if (held) return route.continue();
+      held = route;
+      await released;
+      await route.continue().catch(() => {}); // the page has given it up
+    });
+    const n = await redraws(page);
+    await page.locator('#f-site-latitude').fill('41');
+    await expect.poll(() => held !== null, { timeout: 30_000 }).toBe(true);
+    await page.locator('#f-site-latitude').fill('42');
+    await expect.poll(() => aborted.filter((a) => a.startsWith('/api/view ')), { timeout: 30_000 }).toEqual(['/api/view net::ERR_ABORTED']);
+    release();
+    await redrawn(page, n);
+    expect(await number(page, 'tilt')).toBe('42°');
+    expect(await page.locator('#face svg #text').innerHTML()).toContain('42.000N');
     expect(problems).toEqual([]);
   });
 
