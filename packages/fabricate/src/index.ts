@@ -15,7 +15,7 @@ export { vbitDepthMm } from './engrave/vbitDepth.ts';
 export { engraveSettingsFromSpec } from './engrave/engraveSettingsFromSpec.ts';
 export { engravingPlanKey, planEngraving, writeEngraving, engraveFromSpec, type EngravingReport } from './engrave/engraveFromSpec.ts';
 export { clipToPlate } from './engrave/clipToPlate.ts';
-export { cutFromSpec, type CuttingReport } from './engrave/cutFromSpec.ts';
+export { cutFromParts, cutFromSpec, writesCutProgram, type CutProgram, type CuttingReport } from './engrave/cutFromSpec.ts';
 
 export { toStl } from './stl/toStl.ts';
 export { stlHeader } from './stl/stlHeader.ts';
