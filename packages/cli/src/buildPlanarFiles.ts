@@ -19,6 +19,7 @@ import {
 } from '@umbrafab/geometry';
 import { assertToolFits, engraveFromSpec, stlHeader, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
 import { cutPartFiles } from './outputs/cutParts.ts';
+import { planarStandFiles } from './outputs/planarStandOutputs.ts';
 import { utf8 } from './outputs/outputTypes.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
@@ -69,6 +70,8 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   if (finCut) files.push(...finCut.files);
   const mount = await wallMountFiles(spec, layout, drawing);
   files.push(...mount.files);
+  const stand = await planarStandFiles(spec, layout);
+  files.push(...stand.files);
   files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout))) });
 
   const names = [...files.map((f) => f.name), 'report.json'];
@@ -99,6 +102,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
     gnomon: { ...layout.gnomon, profileAreaMm2: part.profileAreaMm2, belowFaceMm: part.belowFaceMm },
     ...(finCut ? { parts: { gnomonDxf: finCut.report } } : {}),
     ...(mount.report ? { mount: mount.report } : {}),
+    ...(stand.report ? { stand: stand.report } : {}),
     time: layout.time,
     engraving: engraving.report,
     notes: layout.notes,

@@ -19,3 +19,5 @@ export * from './planarGnomonSolid.ts';
 export * from './planarInstallSheet.ts';
 export * from './wallDeclinationFromShadow.ts';
 export * from './wallMount.ts';
+export * from './equatorialStand.ts';
+export * from './equatorialStandSteps.ts';

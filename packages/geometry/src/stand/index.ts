@@ -10,3 +10,5 @@ export * from './standSheetParts.ts';
 export * from './fastenerTable.ts';
 export * from './pieceRows.ts';
 export * from './sheetPartAreaMm2.ts';
+export * from './standJoinery.ts';
+export * from './standUnionSolid.ts';
