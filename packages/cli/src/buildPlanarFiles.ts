@@ -21,6 +21,7 @@ import { assertToolFits, engraveFromSpec, stlHeader, toPlanarInstallMd, toPng, t
 import { cutPartFiles } from './outputs/cutParts.ts';
 import { planarStandFiles } from './outputs/planarStandOutputs.ts';
 import { utf8 } from './outputs/outputTypes.ts';
+import { planarExtraOutputs } from './outputs/planarExtras.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
 /** What a planar build produces, in memory (the same shape as the polar `BuildResult`). */
@@ -72,7 +73,9 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   files.push(...mount.files);
   const stand = await planarStandFiles(spec, layout);
   files.push(...stand.files);
-  files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout))) });
+  const extras = await planarExtraOutputs(spec, layout, drawing, part);
+  files.push(...extras.files);
+  files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout), extras.templateGuide)) });
 
   const names = [...files.map((f) => f.name), 'report.json'];
   const report = {
@@ -103,6 +106,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
     ...(finCut ? { parts: { gnomonDxf: finCut.report } } : {}),
     ...(mount.report ? { mount: mount.report } : {}),
     ...(stand.report ? { stand: stand.report } : {}),
+    ...extras.report,
     time: layout.time,
     engraving: engraving.report,
     notes: layout.notes,
