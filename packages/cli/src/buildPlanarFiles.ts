@@ -73,7 +73,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   files.push(...mount.files);
   const stand = await planarStandFiles(spec, layout);
   files.push(...stand.files);
-  const extras = await planarExtraOutputs(spec, layout, drawing, part);
+  const extras = await planarExtraOutputs(spec, layout, drawing, part, [platePart, ...(finPart ? [finPart] : [])]);
   files.push(...extras.files);
   files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout), extras.templateGuide)) });
 
