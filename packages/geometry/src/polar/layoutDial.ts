@@ -12,6 +12,8 @@ import { castingEdge, eastToFaceX, markOffsetEastMm } from './markOffset.ts';
 import { numeralText } from './numeralText.ts';
 import { penumbraMarkWidths } from './penumbraWidths.ts';
 import { summerNumerals } from './summerNumerals.ts';
+import { markKindAt } from './markKind.ts';
+import { lineHourAngleDeg } from '../planar/lineHourAngle.ts';
 
 /** Gap between the end of the marks (or gnomon) and the numerals, and between bands, mm. */
 const BAND_GAP_MM = 3;
@@ -220,7 +222,7 @@ function markTimes(spec: DialSpec, shiftDeg: number): MarkTime[] {
   const maxH = spec.hours.maxHourAngle;
   const out: MarkTime[] = [];
   for (let m = from; m <= to; m += step) {
-    const H = roundDeg(15 * (m / 60 - 12) + shiftDeg);
+    const H = lineHourAngleDeg(m, shiftDeg);
     if (Math.abs(H) > maxH) {
       const field = m < 12 * 60 ? 'hours.from' : 'hours.to';
       const why =
@@ -229,26 +231,20 @@ function markTimes(spec: DialSpec, shiftDeg: number): MarkTime[] {
           : `its line would lie ${Math.abs(Math.tan(H * DEG)).toFixed(2)} gnomon heights from the style, beyond hours.maxHourAngle ${maxH}°`;
       throw new SpecError(field, field === 'hours.from' ? spec.hours.from : spec.hours.to, `allowed: the widest range that fits is ${widestRange(spec, shiftDeg, (Hd) => Math.abs(Hd) <= maxH)}`, `${formatClock(m)} (hour angle ${H.toFixed(1)}°) cannot be shown: ${why}`);
     }
-    out.push({ minutes: m, kind: m % 60 === 0 ? 'hour' : m % 30 === 0 ? 'half' : 'quarter', hourAngleDeg: H });
+    out.push({ minutes: m, kind: markKindAt(m), hourAngleDeg: H });
   }
   return out;
-}
-
-/** Round an angle to 1e-9° so that 15°·(T−12) is exactly 0 at noon and byte-stable. */
-function roundDeg(d: number): number {
-  const r = Math.round(d * 1e9) / 1e9;
-  return r === 0 ? 0 : r;
 }
 
 /** "07:00–17:00": the widest run of grid times around noon whose hour angle passes `ok`. */
 function widestRange(spec: DialSpec, shiftDeg: number, ok: (hourAngleDeg: number) => boolean): string {
   const step = spec.hours.step;
   const noon = Math.round((12 * 60 - (shiftDeg / 15) * 60) / step) * step;
-  if (!ok(roundDeg(15 * (noon / 60 - 12) + shiftDeg))) return 'none (no mark fits)';
+  if (!ok(lineHourAngleDeg(noon, shiftDeg))) return 'none (no mark fits)';
   let lo = noon;
-  while (lo - step >= 0 && ok(roundDeg(15 * ((lo - step) / 60 - 12) + shiftDeg))) lo -= step;
+  while (lo - step >= 0 && ok(lineHourAngleDeg(lo - step, shiftDeg))) lo -= step;
   let hi = noon;
-  while (hi + step < 24 * 60 && ok(roundDeg(15 * ((hi + step) / 60 - 12) + shiftDeg))) hi += step;
+  while (hi + step < 24 * 60 && ok(lineHourAngleDeg(hi + step, shiftDeg))) hi += step;
   return `${formatClock(lo)}–${formatClock(hi)}`;
 }
 
