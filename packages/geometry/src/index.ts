@@ -100,4 +100,3 @@ export { wallMount, WALL_MOUNT_RIM_MM, WALL_ANCHOR_HOLE_MM } from './planar/wall
 export { equatorialStand, equatorialStandApplies, type EquatorialStand } from './planar/equatorialStand.ts';
 export { standUnionSolid, PRINT_FUSE_MM } from './stand/standUnionSolid.ts';
 export { placePoint } from './stand/placeStandPart.ts';
-export { planarFaceVector, planarShadowOnFace } from './shadow/planarShadowOnFace.ts';
