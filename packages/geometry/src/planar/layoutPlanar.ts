@@ -170,11 +170,14 @@ export function layoutPlanar(spec: DialSpec): PlanarLayout {
   const t = spec.gnomon.thickness;
   const model: PlanarGnomon = { thicknessMm: t, heightMm: h };
   if (!parallel && !equatorial && psiDeg < MIN_STYLE_HEIGHT_DEG) {
+    const why = `the style would stand ${psiDeg.toFixed(2)}° from this face, so its fin would be ${(1 / Math.tan(face.styleHeightRad)).toFixed(0)} times as long as it is high`;
+    // A level face's style rises at the latitude itself: only the site can change it.
+    if (faceType === 'horizontal') throw new SpecError('site.latitude', spec.site.latitude, `allowed: for a horizontal face, a latitude at least ${MIN_STYLE_HEIGHT_DEG}° from the equator (its style rises at |latitude|), or exactly 0`, why);
     throw new SpecError(
       faceType === 'vertical' ? 'face.wallDeclination' : 'face.type',
       faceType === 'vertical' ? spec.face?.wallDeclination : faceType,
       `allowed: a face whose style height is at least ${MIN_STYLE_HEIGHT_DEG}° (a wall within about ${(90 - MIN_STYLE_HEIGHT_DEG / Math.cos(spec.site.latitude * DEG)).toFixed(0)}° of the equator-ward horizon), or face.type meridian for a wall facing due east or west`,
-      `the style would stand ${psiDeg.toFixed(2)}° from this face, so its fin would be ${(1 / Math.tan(face.styleHeightRad)).toFixed(0)} times as long as it is high`,
+      why,
     );
   }
   const time = timeLayout(spec);
