@@ -71,6 +71,7 @@ export { gnomonForLayout } from './shadow/gnomonForLayout.ts';
 export { styleEdges } from './shadow/styleEdges.ts';
 export { shadowOnLine } from './shadow/castShadow.ts';
 export { shadowOnFace } from './shadow/shadowOnFace.ts';
+export { planarFaceVector, planarShadowOnFace } from './shadow/planarShadowOnFace.ts';
 export { marksFromPlate, type PlateLine } from './shadow/marksFromPlate.ts';
 export { checkDial, isFaceLit, type MarkCheck, type CheckResult } from './shadow/checkDial.ts';
 export { checkPlanar, type PlanarCheckResult } from './shadow/checkPlanar.ts';
