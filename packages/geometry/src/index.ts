@@ -76,7 +76,6 @@ export { marksFromPlate, type PlateLine } from './shadow/marksFromPlate.ts';
 export { checkDial, isFaceLit, type MarkCheck, type CheckResult } from './shadow/checkDial.ts';
 export { checkPlanar, type PlanarCheckResult } from './shadow/checkPlanar.ts';
 export { planarMarksFromPlate } from './shadow/planarMarksFromPlate.ts';
-export { planarFaceVector, planarShadowOnFace } from './shadow/planarShadowOnFace.ts';
 
 export type { AssemblyPartName, PictureItem } from './assembly/assemblyTypes.ts';
 export { placeAssembly, faceToWorld } from './assembly/placeAssembly.ts';
