@@ -20,6 +20,7 @@ import {
 import { assertToolFits, engraveFromSpec, stlHeader, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
 import { cutPartFiles } from './outputs/cutParts.ts';
 import { utf8 } from './outputs/outputTypes.ts';
+import type { PlanarReport, WallMountSection } from './outputs/planarReport.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
 /** What a planar build produces, in memory (the same shape as the polar `BuildResult`). */
@@ -27,7 +28,7 @@ export interface PlanarBuildResult {
   readonly layout: PlanarLayout;
   readonly drawing: PlateDrawing;
   readonly files: readonly OutputFile[];
-  readonly report: Record<string, unknown>;
+  readonly report: PlanarReport;
 }
 
 /**
@@ -72,7 +73,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout))) });
 
   const names = [...files.map((f) => f.name), 'report.json'];
-  const report = {
+  const report: PlanarReport = {
     generator,
     spec,
     face: {
@@ -90,6 +91,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
       widthMm: layout.plate.widthMm,
       lengthMm: layout.plate.lengthMm,
       thicknessMm: layout.plate.thicknessMm,
+      cornerRadiusMm: layout.plate.cornerRadiusMm,
       substyleX: layout.plate.substyleX,
       faceOriginY: layout.plate.faceOriginY,
       holes: layout.plate.holes.map((c) => ({ xMm: c.cx, yMm: c.cy, diameterMm: 2 * c.radiusMm })),
@@ -115,11 +117,11 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
  * origin); its report section lists the fixings, anchors and fasteners.
  * Nothing for faces that do not hang on a wall.
  */
-async function wallMountFiles(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing): Promise<{ files: OutputFile[]; report?: Record<string, unknown> }> {
+async function wallMountFiles(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing): Promise<{ files: OutputFile[]; report?: WallMountSection }> {
   const m = wallMount(layout);
   if (!m) return { files: [] };
   const files: OutputFile[] = [];
-  let cut: Record<string, unknown> | undefined;
+  let cut: WallMountSection['files']['dxf'];
   if (spec.process.method !== 'print') {
     assertToolFits([m.part], spec.process.kerf);
     const c = await cutPartFiles({ spec, drawing }, m.part);

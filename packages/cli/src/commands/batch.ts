@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { DialLayout, PlateDrawing } from '@umbrafab/geometry';
 import { utf8 } from '../outputs/outputTypes.ts';
-import type { Report } from '../outputs/report.ts';
+import type { PolarReport } from '../outputs/report.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import { assertOutFolder, specBaseName } from './build.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
@@ -63,7 +63,7 @@ export const batchCommand: CommandModule = {
           )
         : null;
     bar?.start(latitudes.length, 0, { lat: '' });
-    const builds: { lat: number; files: readonly OutputFile[]; report: Report; plateLengthMm: number }[] = [];
+    const builds: { lat: number; files: readonly OutputFile[]; report: PolarReport; plateLengthMm: number }[] = [];
     // Latitudes whose plate drawings are the same get the very same drawing object, so that the work the producers
     // do once per drawing (the engraving's toolpaths, the etched outlines, the template: perDrawing) is done once.
     const drawings = new Map<string, PlateDrawing>();
