@@ -9,7 +9,7 @@ import type { FaceFrame, Facet, PlacedPart } from './assemblyTypes.ts';
 import { flatStand, type SizedStand } from '../stand/flatStand.ts';
 import { placePoint } from '../stand/placeStandPart.ts';
 import { standFacets } from './standFacets.ts';
-import { roundedRectPolygon } from '../outline/roundedRectPolygon.ts';
+import { roundedRectPolygon } from '../outline/roundedRect.ts';
 
 /** The dial as it stands: wedge on level ground, plate on the wedge's seat, gnomon in the plate's slots. */
 export interface Assembly {

@@ -9,7 +9,7 @@ import { shoelaceArea } from '../parts/ring2d.ts';
 import { clipPolygonAbovePlane, clipPolygonConvex } from './clipPolygon.ts';
 import { gnomonShadowOnFace, type FaceShadow } from './gnomonShadowOnFace.ts';
 import { ASSEMBLY_CORNER_SEGMENTS, faceToWorld, placeAssembly, worldToFaceDirection, type Assembly } from './placeAssembly.ts';
-import { roundedRectPolygon } from '../outline/roundedRectPolygon.ts';
+import { roundedRectPolygon } from '../outline/roundedRect.ts';
 import type { PictureSun } from './sunForPicture.ts';
 
 /** Options of `viewAssembly`. */

@@ -2,7 +2,7 @@ import type { CrossSection, Manifold, ManifoldToplevel } from 'manifold-3d';
 import type { PlateDrawing } from '../plate/plateDrawing.ts';
 import type { Vec2 } from '../types.ts';
 import { circlePolygon, widenPolyline } from './widenPolyline.ts';
-import { roundedRectPolygon } from '../outline/roundedRectPolygon.ts';
+import { roundedRectPolygon } from '../outline/roundedRect.ts';
 import type { Keep } from './manifoldScope.ts';
 
 /** Sides of each mounting-hole polygon (circumscribing the nominal circle). */

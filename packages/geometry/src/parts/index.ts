@@ -39,7 +39,7 @@ export { partMass, totalMass, type PartMass } from './partMass.ts';
 export { filamentUse, FILAMENT_DIAMETER_MM, type FilamentUse } from './filamentUse.ts';
 export { plateSolid, type PlatePart } from './plateSolid.ts';
 export { groovedPlate, type GroovedPlate } from './groovedPlate.ts';
-export { roundedRectPolygon } from '../outline/roundedRectPolygon.ts';
+export { roundedRectPolygon } from '../outline/roundedRect.ts';
 export { HEAT_SET_INSERTS, INSERT_POCKET_EXTRA_MM, insertForHole, type HeatSetInsert } from './heatSetInsert.ts';
 export { seatPockets, type SeatPocket } from './seatPockets.ts';
 export { wedgeShell, WEDGE_SHELL_DEFAULTS, type WedgeShellOptions, type WedgeShellPart, type SolidBand } from './wedgeShell.ts';

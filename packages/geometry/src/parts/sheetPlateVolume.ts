@@ -1,11 +1,5 @@
 import type { PlateDrawing } from '../plate/plateDrawing.ts';
-import type { RoundedRect } from '../types.ts';
-
-/** Area of a rounded rectangle, mm²: w·h − (4 − π)·r² (each corner loses a square less a quarter disc). */
-function roundedRectArea(r: RoundedRect): number {
-  const c = Math.min(r.cornerRadiusMm, r.widthMm / 2, r.heightMm / 2);
-  return r.widthMm * r.heightMm - (4 - Math.PI) * c * c;
-}
+import { roundedRectArea } from '../outline/roundedRect.ts';
 
 /**
  * Volume of a plate cut from sheet, mm³: the nominal outline (true arcs)

@@ -1,7 +1,8 @@
 import { SpecError } from '../errors.ts';
 import type { Path, RoundedRect, Vec2 } from '../types.ts';
 import { arcPoints, CHORD_TOLERANCE_MM } from './arcPoints.ts';
-import { dropRepeats, roundedRectPath } from './roundedRectPath.ts';
+import { dropRepeats } from '../outline/dropRepeats.ts';
+import { roundedRectPath } from '../outline/roundedRect.ts';
 
 /**
  * How much larger than the tool a relief's radius is, mm: the tool then

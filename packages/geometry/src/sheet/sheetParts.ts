@@ -5,7 +5,7 @@ import { dialGnomon } from '../parts/dialParts.ts';
 import type { Circle, Path, Vec2 } from '../types.ts';
 import { CHORD_TOLERANCE_MM } from './arcPoints.ts';
 import { relievedSlot, relieveTabRoots, type SlotRelief } from './cornerRelief.ts';
-import { roundedRectPath } from './roundedRectPath.ts';
+import { roundedRectPath } from '../outline/roundedRect.ts';
 import type { SheetPart } from './sheetPart.ts';
 import { standParts } from '../stand/standSheetParts.ts';
 
