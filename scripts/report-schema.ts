@@ -43,8 +43,9 @@ export function reportSchemaText(): string {
   // First walk: which named object types occur more than once (the polar and planar reports share the spec, cut sections, …).
   const uses = new Map<ts.Type, number>();
   toSchema({ checker, uses }, type, new Set(), 'report');
-  const walk: Walk = { checker, shared: new Map(), defs: {} };
-  for (const [t, n] of uses) if (n > 1) walk.shared.set(t, defName(checker, t, walk.shared));
+  const shared = new Map<ts.Type, string>();
+  for (const [t, n] of uses) if (n > 1) shared.set(t, defName(checker, t, shared));
+  const walk = { checker, shared, defs: {} as Record<string, Schema> };
   const root = toSchema(walk, type, new Set(), 'report');
   const schema: Schema = {
     $schema: 'https://json-schema.org/draft/2020-12/schema',
