@@ -20,6 +20,7 @@ import {
 import { assertToolFits, engraveFromSpec, stlHeader, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
 import { cutPartFiles } from './outputs/cutParts.ts';
 import { utf8 } from './outputs/outputTypes.ts';
+import { planarExtraOutputs } from './outputs/planarExtras.ts';
 import type { PlanarReport, WallMountSection } from './outputs/planarReport.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
@@ -70,7 +71,9 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   if (finCut) files.push(...finCut.files);
   const mount = await wallMountFiles(spec, layout, drawing);
   files.push(...mount.files);
-  files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout))) });
+  const extras = await planarExtraOutputs(spec, layout, drawing, part);
+  files.push(...extras.files);
+  files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout), extras.templateGuide)) });
 
   const names = [...files.map((f) => f.name), 'report.json'];
   const report: PlanarReport = {
@@ -101,6 +104,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
     gnomon: { ...layout.gnomon, profileAreaMm2: part.profileAreaMm2, belowFaceMm: part.belowFaceMm },
     ...(finCut ? { parts: { gnomonDxf: finCut.report } } : {}),
     ...(mount.report ? { mount: mount.report } : {}),
+    ...extras.report,
     time: layout.time,
     engraving: engraving.report,
     notes: layout.notes,

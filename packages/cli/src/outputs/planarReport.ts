@@ -2,6 +2,7 @@ import type { FaceType, FastenerRow, FinEdge, Hemisphere, LeftOutHour, MarkKind,
 import type { EngravingReport } from '@umbrafab/fabricate';
 import type { CutFileSection } from './cutParts.ts';
 import type { MeshFigures } from './partsOutputs.ts';
+import type { PlanarExtras } from './planarExtras.ts';
 import type { PlateSection } from './plateOutputs.ts';
 import type { ReportHead, ReportTail } from './report.ts';
 
@@ -9,11 +10,12 @@ import type { ReportHead, ReportTail } from './report.ts';
  * report.json of a horizontal, wall, meridian or equatorial face
  * (buildPlanarFiles, docs/design.md §8): the normalised spec, the face and
  * its marks, the curves, the plate and its gnomon, the wall mount, how the
- * dial reads, the engraving, the notes and the files. Face coordinates: mm
+ * dial reads, the engraving, the sections of the outputs it shares with the
+ * polar plate (`PlanarExtras`: template.pdf, …), the notes and the files. Face coordinates: mm
  * from the face origin, x right in the face drawing, y along the substyle
  * (plate x = substyleX + x, plate y = faceOriginY + y).
  */
-export type PlanarReport = ReportHead & PlanarSections & ReportTail;
+export type PlanarReport = ReportHead & PlanarSections & PlanarExtras['report'] & ReportTail;
 
 /** The sections only a planar face's report has, and its own forms of plate, marks and gnomon. */
 export interface PlanarSections {

@@ -1,5 +1,5 @@
 import type PDFDocument from 'pdfkit';
-import type { Mark, Path, PlateDrawing, RoundedRect, Vec2 } from '@umbrafab/geometry';
+import type { Circle, Mark, Path, PlateDrawing, RoundedRect, SheetPart, Vec2 } from '@umbrafab/geometry';
 import { roundTo } from '../process/roundTo.ts';
 import { BORDER_MM, FOOTER_MM, PT_PER_MM, tileLayout, type PaperName, type TileLayout } from './templatePages.ts';
 
@@ -85,58 +85,96 @@ export async function toTemplatePdf(input: TemplateInput, options: Partial<Templ
   const o = { ...TEMPLATE_DEFAULTS, ...options };
   const d = input.drawing;
   const tiles = templateTiles(d, o);
-  const { default: PDFKit } = await import('pdfkit'); // the PDF writer loads only when a template is written
-  const doc = new PDFKit({
-    autoFirstPage: false,
-    size: [tiles.pageWidthMm * PT_PER_MM, tiles.pageHeightMm * PT_PER_MM],
-    margins: { top: 0, bottom: 0, left: 0, right: 0 },
-    info: { Title: `${input.title} - 1:1 template`, Creator: 'umbrafab', Producer: 'umbrafab (pdfkit)', CreationDate: FIXED_DATE },
-    compress: true,
-  });
-  const chunks: Uint8Array[] = [];
-  doc.on('data', (c: Uint8Array) => chunks.push(c));
-  const done = new Promise<void>((resolve, reject) => {
-    doc.on('end', () => resolve());
-    doc.on('error', reject);
-  });
-
   const rows = markOffsetRows(input.marks, input.gnomonThicknessMm, d.faceOriginY);
-  const rowsPerSheet = Math.max(5, Math.floor((tiles.window.h - 30) / 4.6));
+  const rowsPerSheet = tableRowsPerSheet(tiles);
   const tablePages = Math.max(1, Math.ceil(rows.length / rowsPerSheet));
-  const drawingPages = tiles.columns * tiles.rows;
-  const totalPages = drawingPages + tablePages + 1;
-  let page = 0;
-  const newSheet = (heading: string) => {
-    doc.addPage();
-    page += 1;
-    doc.save();
-    doc.scale(PT_PER_MM);
-    sheetFrame(doc, tiles, o.marginMm, `${input.title} - ${heading}`, `sheet ${page} of ${totalPages}`);
-  };
-
-  for (let r = 0; r < tiles.rows; r++) {
-    for (let c = 0; c < tiles.columns; c++) {
-      const where = drawingPages > 1 ? `plate at 1:1, column ${c + 1} of ${tiles.columns}, row ${r + 1} of ${tiles.rows} (glue the overlaps so the crosses coincide)` : 'plate at 1:1';
-      newSheet(where);
-      drawTile(doc, d, tiles, c, r);
-      doc.restore();
-    }
-  }
+  const sheets: Sheet[] = [...tileSheets(d, tiles, 'plate')];
   for (let p = 0; p < tablePages; p++) {
-    newSheet(`offsets of the lines from the style edge${tablePages > 1 ? ` (${p + 1}/${tablePages})` : ''}`);
-    offsetTable(doc, tiles, rows.slice(p * rowsPerSheet, (p + 1) * rowsPerSheet), input, p === tablePages - 1);
-    doc.restore();
+    sheets.push({
+      heading: `offsets of the lines from the style edge${tablePages > 1 ? ` (${p + 1}/${tablePages})` : ''}`,
+      draw: (doc) => offsetTable(doc, tiles, rows.slice(p * rowsPerSheet, (p + 1) * rowsPerSheet), input, p === tablePages - 1),
+    });
   }
-  newSheet('45° check triangle at 1:1');
-  checkTriangle(doc, tiles, input.gnomonHeightMm, input.gnomonThicknessMm);
-  doc.restore();
-  doc.end();
-  await done;
-  const total = chunks.reduce((s, c) => s + c.length, 0);
-  const out = new Uint8Array(total);
-  let off = 0;
-  for (const c of chunks) (out.set(c, off), (off += c.length));
-  return out;
+  sheets.push({ heading: '45° check triangle at 1:1', draw: (doc) => checkTriangle(doc, tiles, input.gnomonHeightMm, input.gnomonThicknessMm) });
+  return renderSheets(input.title, tiles, o.marginMm, sheets);
+}
+
+/** A further flat part on the template (a gnomon fin, a wall mount), drawn at 1:1 on its own sheets. */
+export interface TemplatePart {
+  /** what the sheet's heading calls it, e.g. 'gnomon fin' */
+  readonly label: string;
+  /** the part at nominal size in its own frame (SheetPart) */
+  readonly part: SheetPart;
+}
+
+/** What the template of a face with further flat parts shows: the plate, a table of the line ends, then each part. */
+export interface PartsTemplateInput {
+  readonly drawing: PlateDrawing;
+  /** dial name, printed in the heading */
+  readonly title: string;
+  /** lines printed above the table of line ends (the face, the style root, the gnomon) */
+  readonly intro: readonly string[];
+  readonly parts: readonly TemplatePart[];
+}
+
+/**
+ * template.pdf for a face whose lines are not parallel (horizontal, wall,
+ * meridian, equatorial): the plate tiled at 1:1 as `toTemplatePdf` draws it
+ * (outline, lines at true width, numerals, drill marks, slots, dashed
+ * reference lines, alignment crosses in the overlaps), a table of every
+ * straight line's two ends and the holes and slots from the plate's
+ * lower-left corner, then every further part (`parts`: the gnomon fin's
+ * profile, a wall mount) at 1:1, each tiled the same way on sheets of the
+ * plate's paper and orientation, its holes as drill marks and its
+ * reference lines dashed. Every sheet carries PRINT_AT_FULL_SIZE and the
+ * 100 mm calibration bar. Byte-stable.
+ *
+ * @example await toPartsTemplatePdf({ drawing, title: 'Demo', intro: [], parts: [{ label: 'gnomon fin', part: fin }] })
+ */
+export async function toPartsTemplatePdf(input: PartsTemplateInput, options: Partial<TemplateOptions> = {}): Promise<Uint8Array> {
+  const o = { ...TEMPLATE_DEFAULTS, ...options };
+  const d = input.drawing;
+  const layout = partsTemplateTiles(input, o);
+  const tiles = layout.plate;
+  const rows = lineEndRows(d);
+  const rowsPerSheet = tableRowsPerSheet(tiles);
+  const tablePages = Math.max(1, Math.ceil(rows.length / rowsPerSheet));
+  const sheets: Sheet[] = [...tileSheets(d, tiles, 'plate')];
+  for (let p = 0; p < tablePages; p++) {
+    sheets.push({
+      heading: `ends of the lines, from the plate's lower-left corner${tablePages > 1 ? ` (${p + 1}/${tablePages})` : ''}`,
+      draw: (doc) => lineEndTable(doc, tiles, rows.slice(p * rowsPerSheet, (p + 1) * rowsPerSheet), input, p === tablePages - 1),
+    });
+  }
+  input.parts.forEach((tp, i) => sheets.push(...tileSheets(partShape(tp.part), layout.parts[i], tp.label)));
+  return renderSheets(input.title, tiles, o.marginMm, sheets);
+}
+
+/** The sheet tilings of `toPartsTemplatePdf`: the plate's, and each part's on the same paper and orientation (exported for reports and tests). */
+export function partsTemplateTiles(input: Pick<PartsTemplateInput, 'drawing' | 'parts'>, options: Partial<TemplateOptions> = {}): { readonly plate: TileLayout; readonly parts: readonly TileLayout[]; readonly pages: number } {
+  const o = { ...TEMPLATE_DEFAULTS, ...options };
+  const plate = templateTiles(input.drawing, o);
+  const parts = input.parts.map((tp) => {
+    const s = partShape(tp.part);
+    return tileLayout(s.widthMm + 2 * BORDER_MM, s.lengthMm + 2 * BORDER_MM, o.paper, plate.orientation, o.overlapMm, o.marginMm);
+  });
+  const tablePages = Math.max(1, Math.ceil(lineEndRows(input.drawing).length / tableRowsPerSheet(plate)));
+  const pages = plate.columns * plate.rows + tablePages + parts.reduce((n, t) => n + t.columns * t.rows, 0);
+  return { plate, parts, pages };
+}
+
+/** One straight line of a plate drawing with its two ends, plate coordinates (mm from the lower-left corner). */
+export interface LineEndRow {
+  readonly label: string;
+  readonly kind: string;
+  readonly fromMm: Vec2;
+  readonly toMm: Vec2;
+}
+
+/** Every straight line of a drawing (two points; curves left out) with its ends rounded to 0.1 mm. */
+export function lineEndRows(drawing: PlateDrawing): LineEndRow[] {
+  const r = ([x, y]: Vec2): Vec2 => [roundTo(x, 1), roundTo(y, 1)];
+  return drawing.lines.filter((l) => l.kind !== 'curve' && l.path.points.length === 2).map((l) => ({ label: l.label, kind: l.kind, fromMm: r(l.path.points[0]), toMm: r(l.path.points[1]) }));
 }
 
 /** The sheet tiling used for a drawing (exported for reports and tests). */
@@ -146,6 +184,96 @@ export function templateTiles(drawing: PlateDrawing, options: Partial<TemplateOp
 }
 
 type Doc = InstanceType<typeof PDFDocument>;
+
+/** One sheet of a template: its heading and what is drawn on it (in mm, inside the sheet frame). */
+interface Sheet {
+  readonly heading: string;
+  readonly draw: (doc: Doc) => void;
+}
+
+/** What one tiled drawing shows (the plate, or a further flat part) in its own frame: mm, origin at the lower-left corner of its extent. */
+interface TiledShape {
+  readonly widthMm: number;
+  readonly lengthMm: number;
+  readonly outline: RoundedRect | Path;
+  readonly holes: readonly Circle[];
+  readonly slots: readonly RoundedRect[];
+  /** inner cut-outs drawn as outlines (a part's joints and windows) */
+  readonly cutouts?: readonly Path[];
+  readonly lines: PlateDrawing['lines'];
+  readonly text: PlateDrawing['text'];
+  readonly reference: PlateDrawing['reference'];
+}
+
+/** A flat part as a tiled shape: moved so its outline's lower-left corner is the origin. */
+function partShape(part: SheetPart): TiledShape {
+  const xs = part.outer.points.map((p) => p[0]);
+  const ys = part.outer.points.map((p) => p[1]);
+  const [x0, y0] = [Math.min(...xs), Math.min(...ys)];
+  const move = (p: Path): Path => ({ ...p, points: p.points.map(([x, y]): Vec2 => [x - x0, y - y0]) });
+  return {
+    widthMm: Math.max(...xs) - x0,
+    lengthMm: Math.max(...ys) - y0,
+    outline: move(part.outer),
+    holes: part.inner.filter((f): f is Circle => f.kind === 'circle').map((c) => ({ ...c, cx: c.cx - x0, cy: c.cy - y0 })),
+    slots: [],
+    cutouts: part.inner.filter((f): f is Path => f.kind === 'path').map(move),
+    lines: (part.lines ?? []).map((l) => ({ ...l, path: move(l.path) })),
+    text: (part.text ?? []).map((t) => ({ ...t, strokes: t.strokes.map(move) })),
+    reference: (part.reference ?? []).map((r) => ({ ...r, path: move(r.path) })),
+  };
+}
+
+/** The drawing sheets of one shape: one per tile, headed '<label> at 1:1' and, when tiled, its column and row. */
+function tileSheets(shape: TiledShape, tiles: TileLayout, label: string): Sheet[] {
+  const sheets: Sheet[] = [];
+  const n = tiles.columns * tiles.rows;
+  for (let r = 0; r < tiles.rows; r++) {
+    for (let c = 0; c < tiles.columns; c++) {
+      const heading = n > 1 ? `${label} at 1:1, column ${c + 1} of ${tiles.columns}, row ${r + 1} of ${tiles.rows} (glue the overlaps so the crosses coincide)` : `${label} at 1:1`;
+      sheets.push({ heading, draw: (doc) => drawTile(doc, shape, tiles, c, r) });
+    }
+  }
+  return sheets;
+}
+
+/** Rows of a table that fit one sheet's window. */
+function tableRowsPerSheet(tiles: TileLayout): number {
+  return Math.max(5, Math.floor((tiles.window.h - 30) / 4.6));
+}
+
+/** Lay out the sheets in one PDF (every sheet the size of `tiles`'s page), each with its frame and 'sheet n of N'. */
+async function renderSheets(title: string, tiles: TileLayout, marginMm: number, sheets: readonly Sheet[]): Promise<Uint8Array> {
+  const { default: PDFKit } = await import('pdfkit'); // the PDF writer loads only when a template is written
+  const doc = new PDFKit({
+    autoFirstPage: false,
+    size: [tiles.pageWidthMm * PT_PER_MM, tiles.pageHeightMm * PT_PER_MM],
+    margins: { top: 0, bottom: 0, left: 0, right: 0 },
+    info: { Title: `${title} - 1:1 template`, Creator: 'umbrafab', Producer: 'umbrafab (pdfkit)', CreationDate: FIXED_DATE },
+    compress: true,
+  });
+  const chunks: Uint8Array[] = [];
+  doc.on('data', (c: Uint8Array) => chunks.push(c));
+  const done = new Promise<void>((resolve, reject) => {
+    doc.on('end', () => resolve());
+    doc.on('error', reject);
+  });
+  sheets.forEach((sheet, i) => {
+    doc.addPage();
+    doc.save();
+    doc.scale(PT_PER_MM);
+    sheetFrame(doc, tiles, marginMm, `${title} - ${sheet.heading}`, `sheet ${i + 1} of ${sheets.length}`);
+    sheet.draw(doc);
+    doc.restore();
+  });
+  doc.end();
+  await done;
+  const total = chunks.reduce((s, c) => s + c.length, 0);
+  const out = new Uint8Array(total);
+  let off = 0;
+  for (const c of chunks) (out.set(c, off), (off += c.length));
+  return out;
+}
 
 /** Heading, the full-size instruction, the calibration bar and the sheet number. */
 function sheetFrame(doc: Doc, t: TileLayout, margin: number, heading: string, pageText: string): void {
@@ -163,7 +291,7 @@ function sheetFrame(doc: Doc, t: TileLayout, margin: number, heading: string, pa
 }
 
 /** One tile of the plate drawing, clipped to the sheet's window. */
-function drawTile(doc: Doc, d: PlateDrawing, t: TileLayout, c: number, r: number): void {
+function drawTile(doc: Doc, d: TiledShape, t: TileLayout, c: number, r: number): void {
   const w = t.window;
   // Plate (x right, y up, mm) → sheet (mm, y down).
   const X = (x: number) => w.x + (x + BORDER_MM - t.colStartMm[c]);
@@ -176,7 +304,8 @@ function drawTile(doc: Doc, d: PlateDrawing, t: TileLayout, c: number, r: number
   doc.rect(w.x, w.y, w.w, w.h).clip();
   // Outline.
   doc.lineWidth(0.3).strokeColor(INK);
-  roundRectPath(doc, d.outline, X, Y);
+  if (d.outline.kind === 'rect') roundRectPath(doc, d.outline, X, Y);
+  else pathOf(d.outline);
   doc.stroke();
   // Reference lines, dashed.
   doc.lineWidth(0.15).strokeColor(GREY).dash(1.5, { space: 1 });
@@ -224,6 +353,11 @@ function drawTile(doc: Doc, d: PlateDrawing, t: TileLayout, c: number, r: number
     roundRectPath(doc, s, X, Y);
     doc.stroke();
     doc.moveTo(X(s.cx - s.widthMm), Y(s.cy)).lineTo(X(s.cx + s.widthMm), Y(s.cy)).stroke();
+  }
+  // A part's other cut-outs: their outlines.
+  for (const p of d.cutouts ?? []) {
+    pathOf(p);
+    doc.stroke();
   }
   // Alignment crosses in every overlap (drawn in plate position, so both neighbours carry them).
   doc.lineWidth(0.15).strokeColor(INK);
@@ -274,19 +408,47 @@ function offsetTable(doc: Doc, t: TileLayout, rows: readonly MarkOffsetRow[], in
     doc.lineWidth(0.1).strokeColor('#c0c0c0').moveTo(w.x, y + 3.6).lineTo(w.x + 150, y + 3.6).stroke();
     y += 4.6;
   }
-  if (!withHoles) return;
+  if (withHoles) holesList(doc, w.x, y, d);
+}
+
+/** The heading 'Holes and slots' and one line for each, below `y`. */
+function holesList(doc: Doc, x: number, y: number, d: PlateDrawing): void {
   y += 4;
-  doc.font('Helvetica-Bold').text('Holes and slots (centres from the plate\'s lower-left corner), mm', w.x, y, { lineBreak: false });
+  doc.font('Helvetica-Bold').text('Holes and slots (centres from the plate\'s lower-left corner), mm', x, y, { lineBreak: false });
   doc.font('Helvetica');
   y += 4.6;
   d.holes.forEach((h, i) => {
-    doc.text(`hole ${i + 1}: drill ${fmt(2 * h.radiusMm)} at x ${fmt(h.cx, 2)}, y ${fmt(h.cy, 2)}`, w.x, y, { lineBreak: false });
+    doc.text(`hole ${i + 1}: drill ${fmt(2 * h.radiusMm)} at x ${fmt(h.cx, 2)}, y ${fmt(h.cy, 2)}`, x, y, { lineBreak: false });
     y += 4.4;
   });
   d.slots.forEach((s, i) => {
-    doc.text(`slot ${i + 1}: ${fmt(s.widthMm, 2)} x ${fmt(s.heightMm, 2)} centred at x ${fmt(s.cx, 2)}, y ${fmt(s.cy, 2)}`, w.x, y, { lineBreak: false });
+    doc.text(`slot ${i + 1}: ${fmt(s.widthMm, 2)} x ${fmt(s.heightMm, 2)} centred at x ${fmt(s.cx, 2)}, y ${fmt(s.cy, 2)}`, x, y, { lineBreak: false });
     y += 4.4;
   });
+}
+
+function lineEndTable(doc: Doc, t: TileLayout, rows: readonly LineEndRow[], input: PartsTemplateInput, withHoles: boolean): void {
+  const w = t.window;
+  let y = w.y;
+  doc.fillColor(INK).font('Helvetica').fontSize(3);
+  const intro = [
+    ...input.intro,
+    'Ends of every straight line, mm from the plate\'s lower-left corner: x to the right, y up the plate as drawn on the plate sheets.',
+  ];
+  for (const l of intro) (doc.text(l, w.x, y, { lineBreak: false }), (y += 4.4));
+  y += 2;
+  const cols = [0, 26, 46, 86];
+  doc.font('Helvetica-Bold');
+  ['line', 'kind', 'from (x, y)', 'to (x, y)'].forEach((h, i) => doc.text(h, w.x + cols[i], y, { lineBreak: false }));
+  doc.font('Helvetica');
+  y += 4.6;
+  const xy = (p: Vec2) => `${fmt(p[0], 1)}, ${fmt(p[1], 1)}`;
+  for (const r of rows) {
+    [r.label, r.kind, xy(r.fromMm), xy(r.toMm)].forEach((cell, i) => doc.text(cell, w.x + cols[i], y, { lineBreak: false }));
+    doc.lineWidth(0.1).strokeColor('#c0c0c0').moveTo(w.x, y + 3.6).lineTo(w.x + 130, y + 3.6).stroke();
+    y += 4.6;
+  }
+  if (withHoles) holesList(doc, w.x, y, input.drawing);
 }
 
 /** A right triangle with two legs of the gnomon height: its hypotenuse makes 45° with both. */

@@ -1,25 +1,11 @@
-import { SpecError } from '../errors.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { Vec2 } from '../types.ts';
 import type { DrawnMark } from './drawnMarks.ts';
-import { CUT_LAYER_NAMES } from '../plate/cutLayerNames.ts';
+import { faceSegments } from './faceSegments.ts';
+import { nearestPairs, type CandidatePair } from './nearestPairs.ts';
+import { MARK_LAYERS, MATCH_RADIUS_MM, noLineFor, type PlateLine } from './plateLine.ts';
 
-/** A polyline read from a plate drawing (DXF), plate coordinates (origin at the plate's lower-left corner), mm. */
-export interface PlateLine {
-  readonly layer: string;
-  readonly points: readonly Vec2[];
-  readonly closed: boolean;
-}
-
-/**
- * Layers that carry the marks in plate.dxf: score centre-lines, the
- * centre-lines kept beside etch outlines, or (drawings of earlier versions)
- * one closed 4-corner etch outline per mark.
- */
-export const MARK_LAYERS = { score: CUT_LAYER_NAMES.score, centres: CUT_LAYER_NAMES.markCentres, etch: CUT_LAYER_NAMES.etch } as const;
-
-/** Farthest a drawn line may sit from its mark's layout position and still be taken for it, mm. */
-export const MATCH_RADIUS_MM = 5;
+export { MARK_LAYERS, MATCH_RADIUS_MM, type PlateLine } from './plateLine.ts';
 
 /** What `marksFromPlate` found. */
 export interface PlateMarks {
@@ -45,16 +31,9 @@ export interface PlateMarks {
  */
 export function marksFromPlate(layout: DialLayout, lines: readonly PlateLine[]): PlateMarks {
   const ox = layout.plate.substyleX;
-  const oy = layout.plate.faceOriginY;
-  // A drawing with centre-lines (scored, or kept beside its etch outlines) is read by its centre-lines alone.
-  const hasCentres = lines.some((l) => l.layer === MARK_LAYERS.centres || l.layer === MARK_LAYERS.score);
-  const segs = lines
-    .filter((l) => l.layer === MARK_LAYERS.score || l.layer === MARK_LAYERS.centres || (!hasCentres && l.layer === MARK_LAYERS.etch && l.closed))
-    .map((l) => centreLine(l))
-    .filter((s): s is readonly [Vec2, Vec2] => s !== null)
-    .map(([a, b]) => [[a[0] - ox, a[1] - oy] as Vec2, [b[0] - ox, b[1] - oy] as Vec2] as const);
+  const segs = faceSegments(lines, layout.plate, centreLine);
   const mid = (a: Vec2, b: Vec2): Vec2 => [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
-  const pairs: { i: number; j: number; d: number }[] = [];
+  const pairs: CandidatePair[] = [];
   // Lines under the fin (the noon band) are not drawn, so they are not looked for.
   const engraved = layout.marks.filter((m) => !m.underGnomon);
   engraved.forEach((m, i) => {
@@ -65,23 +44,11 @@ export function marksFromPlate(layout: DialLayout, lines: readonly PlateLine[]):
       if (d <= MATCH_RADIUS_MM) pairs.push({ i, j, d });
     });
   });
-  pairs.sort((p, q) => p.d - q.d || p.i - q.i || p.j - q.j);
-  const markOf = new Map<number, number>();
-  const usedLine = new Set<number>();
-  for (const p of pairs) {
-    if (markOf.has(p.i) || usedLine.has(p.j)) continue;
-    markOf.set(p.i, p.j);
-    usedLine.add(p.j);
-  }
+  const { chosen, usedLines: usedLine } = nearestPairs(pairs);
   const drawn: DrawnMark[] = engraved.map((m, i) => {
-    const j = markOf.get(i);
+    const j = chosen.get(i)?.j;
     if (j === undefined) {
-      throw new SpecError(
-        '--plate',
-        `${m.label} ${m.style}`,
-        `allowed: a drawing with a line on ${MARK_LAYERS.score}, ${MARK_LAYERS.centres} or ${MARK_LAYERS.etch} within ${MATCH_RADIUS_MM} mm of every mark of this spec`,
-        `mark ${m.label} ${m.style} (face x ${m.xMm.toFixed(3)} mm, plate x ${(m.xMm + ox).toFixed(3)} mm) has no line in the drawing`,
-      );
+      throw noLineFor(`${m.label} ${m.style}`, `mark ${m.label} ${m.style} (face x ${m.xMm.toFixed(3)} mm, plate x ${(m.xMm + ox).toFixed(3)} mm) has no line in the drawing`);
     }
     const [a, b] = segs[j];
     return { mark: m, a, b };

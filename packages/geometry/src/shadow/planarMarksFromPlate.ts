@@ -1,7 +1,9 @@
-import { SpecError } from '../errors.ts';
 import type { PlanarLayout, PlanarMark } from '../planar/layoutPlanar.ts';
 import type { Vec2 } from '../types.ts';
-import { centreLine, MARK_LAYERS, MATCH_RADIUS_MM, type PlateLine } from './marksFromPlate.ts';
+import { faceSegments } from './faceSegments.ts';
+import { centreLine } from './marksFromPlate.ts';
+import { nearestPairs } from './nearestPairs.ts';
+import { MARK_LAYERS, MATCH_RADIUS_MM, noLineFor, type PlateLine } from './plateLine.ts';
 
 /** What `planarMarksFromPlate` found. */
 export interface PlanarPlateMarks {
@@ -26,14 +28,7 @@ export interface PlanarPlateMarks {
  * @example planarMarksFromPlate(layoutPlanar(spec), readPlateDxf('plate.dxf').lines).marks
  */
 export function planarMarksFromPlate(layout: PlanarLayout, lines: readonly PlateLine[]): PlanarPlateMarks {
-  const ox = layout.plate.substyleX;
-  const oy = layout.plate.faceOriginY;
-  const hasCentres = lines.some((l) => l.layer === MARK_LAYERS.centres || l.layer === MARK_LAYERS.score);
-  const segs = lines
-    .filter((l) => l.layer === MARK_LAYERS.score || l.layer === MARK_LAYERS.centres || (!hasCentres && l.layer === MARK_LAYERS.etch && l.closed))
-    .map((l) => (l.layer === MARK_LAYERS.etch ? centreLine(l) : ends(l.points)))
-    .filter((s): s is readonly [Vec2, Vec2] => s !== null)
-    .map(([a, b]) => [[a[0] - ox, a[1] - oy] as Vec2, [b[0] - ox, b[1] - oy] as Vec2] as const);
+  const segs = faceSegments(lines, layout.plate, (l) => (l.layer === MARK_LAYERS.etch ? centreLine(l) : ends(l.points)));
   const dist = (p: Vec2, q: Vec2) => Math.hypot(p[0] - q[0], p[1] - q[1]);
   const mid = (a: Vec2, b: Vec2): Vec2 => [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
   const engraved = layout.marks.filter((m) => !m.underGnomon);
@@ -46,23 +41,11 @@ export function planarMarksFromPlate(layout: PlanarLayout, lines: readonly Plate
       if (d <= MATCH_RADIUS_MM) pairs.push({ i, j, d, flip: swapped < same });
     });
   });
-  pairs.sort((p, q) => p.d - q.d || p.i - q.i || p.j - q.j);
-  const chosen = new Map<number, { j: number; flip: boolean }>();
-  const usedLine = new Set<number>();
-  for (const p of pairs) {
-    if (chosen.has(p.i) || usedLine.has(p.j)) continue;
-    chosen.set(p.i, { j: p.j, flip: p.flip });
-    usedLine.add(p.j);
-  }
+  const { chosen, usedLines: usedLine } = nearestPairs(pairs);
   const marks = engraved.map((m, i): PlanarMark => {
     const c = chosen.get(i);
     if (c === undefined) {
-      throw new SpecError(
-        '--plate',
-        `${m.label} ${m.edge}`,
-        `allowed: a drawing with a line on ${MARK_LAYERS.score}, ${MARK_LAYERS.centres} or ${MARK_LAYERS.etch} within ${MATCH_RADIUS_MM} mm of every mark of this spec`,
-        `line ${m.label} ${m.edge} (face x ${m.a[0].toFixed(3)} .. ${m.b[0].toFixed(3)} mm, y ${m.a[1].toFixed(3)} .. ${m.b[1].toFixed(3)} mm) has no line in the drawing`,
-      );
+      throw noLineFor(`${m.label} ${m.edge}`, `line ${m.label} ${m.edge} (face x ${m.a[0].toFixed(3)} .. ${m.b[0].toFixed(3)} mm, y ${m.a[1].toFixed(3)} .. ${m.b[1].toFixed(3)} mm) has no line in the drawing`);
     }
     const [a, b] = segs[c.j];
     return c.flip ? { ...m, a: b, b: a } : { ...m, a, b };
