@@ -21,7 +21,7 @@ try {
   const problems: string[] = [];
   page.on('pageerror', (e) => problems.push(String(e)));
   page.on('console', (m) => m.type() === 'error' && problems.push(m.text()));
-  await page.goto(server.url);
+  await page.goto(`${server.url}?probe`);
   await page.waitForFunction(() => (window as any).umbrafab?.ready === true, null, { timeout: 60_000 });
   // The download list of the spec on show (the full build runs in the server's worker).
   await page.waitForFunction(() => document.body.dataset.files !== undefined && document.body.dataset.files === document.body.dataset.view, null, { timeout: 60_000 });

@@ -1,8 +1,8 @@
 import { copyFileSync, existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page, Route } from 'playwright-core';
+import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { startServer, type RunningServer } from '@umbrafab/cli';
 import { CHROMIUM, launchChromium } from './browserChromium.ts';
 import { runCli } from './helpers/runCli.ts';
@@ -25,46 +25,71 @@ async function redrawn(page: Page, before: number): Promise<any> {
 const redraws = (page: Page) => page.evaluate(() => Number(document.body.dataset.redraws ?? 0));
 const number = (page: Page, key: string) => page.locator(`#numbers dd[data-key="${key}"]`).innerText();
 
-// In CI (CI set, as .ci/run installs chromium) a missing browser is a failure, not a silent skip.
-const HAVE_CHROMIUM = existsSync(CHROMIUM);
-describe('the browser tests can run', () => {
-  it.runIf(!HAVE_CHROMIUM)(`finds ${CHROMIUM} (Debian chromium: apt-get install chromium)`, () => {
-    if (process.env.CI) throw new Error(`${CHROMIUM} is missing: the browser tests need Debian's chromium (.ci/run installs it)`);
-    console.warn(`browser tests skipped: ${CHROMIUM} is missing (they fail instead when CI is set)`);
+// The browser tests need Debian's chromium (.ci/run and scripts/ensure-validators.sh install it): a missing one
+// fails them. UMBRAFAB_SKIP_BROWSER=1 opts out on a machine without it; they are then skipped, and say so.
+const SKIP_BROWSER = process.env.UMBRAFAB_SKIP_BROWSER === '1';
+if (SKIP_BROWSER) console.warn(`browser tests skipped: UMBRAFAB_SKIP_BROWSER=1 (chromium ${existsSync(CHROMIUM) ? 'is' : 'is not'} at ${CHROMIUM})`);
+describe.skipIf(SKIP_BROWSER)('the browser tests can run', () => {
+  it(`finds ${CHROMIUM} (Debian chromium)`, () => {
+    expect(existsSync(CHROMIUM), `${CHROMIUM} is missing: the browser tests need Debian's chromium (apt-get install chromium; scripts/ensure-validators.sh installs it as root), or set UMBRAFAB_SKIP_BROWSER=1 to skip them`).toBe(true);
   });
 });
 
-describe.skipIf(!HAVE_CHROMIUM)('the dial page in a real browser (Debian chromium, playwright-core)', () => {
-  let dir: string;
-  let specFile: string;
-  let server: RunningServer;
+/** A dial page opened in its own browser tab, with the problems it reports. */
+interface OpenPage {
+  readonly page: Page;
+  readonly problems: string[];
+}
+
+/** Open the page of `server` in a new tab with the tests' probe (`/?probe`), wait until it has drawn its first views. */
+async function openPage(browser: Awaited<ReturnType<typeof launchChromium>>, server: RunningServer): Promise<OpenPage> {
+  const page = await browser.context.newPage();
+  const problems: string[] = [];
+  page.on('pageerror', (e) => problems.push(String(e)));
+  // A 422 answer is the page asking about a bad field on purpose (the bad-field test); anything else is a problem.
+  page.on('console', (m) => m.type() === 'error' && !/status of 422/.test(m.text()) && problems.push(m.text()));
+  const t0 = Date.now();
+  await page.goto(`${server.url}?probe`);
+  await page.waitForFunction(() => (window as any).umbrafab?.ready === true, null, { timeout: 60_000 });
+  const probe = await page.evaluate(() => ({ ...(window as any).umbrafab }));
+  const nav = await page.evaluate(() => (performance as any).getEntriesByType('navigation')[0]?.toJSON());
+  console.log(
+    `page load: ${Date.now() - t0} ms from goto to ready (in-page: ${Math.round(probe.loadMs)} ms from script start to the first drawn views; DOMContentLoaded ${Math.round(nav?.domContentLoadedEventEnd ?? NaN)} ms); WebGL ${probe.webgl}, ${probe.triangles} triangles`,
+  );
+  return { page, problems };
+}
+
+/** A fresh copy of `spec` in a folder of its own and a server on it. */
+async function serveCopy(spec: string): Promise<{ dir: string; specFile: string; server: RunningServer }> {
+  const dir = mkdtempSync(join(tmpdir(), 'umbrafab-page-'));
+  const specFile = join(dir, 'dial.yaml');
+  copyFileSync(spec, specFile);
+  return { dir, specFile, server: await startServer({ specPath: specFile, port: 0, log: () => {} }) };
+}
+
+// Each case opens its own tab (and the one that saves, its own spec file and server): the cases run in any order.
+describe.skipIf(SKIP_BROWSER)('the dial page in a real browser (Debian chromium, playwright-core)', () => {
+  let shared: Awaited<ReturnType<typeof serveCopy>>;
   let browser: Awaited<ReturnType<typeof launchChromium>>;
   let page: Page;
-  const problems: string[] = [];
+  let problems: string[];
 
   beforeAll(async () => {
-    dir = mkdtempSync(join(tmpdir(), 'umbrafab-page-'));
-    specFile = join(dir, 'dial.yaml');
-    copyFileSync(SOLAR, specFile);
-    server = await startServer({ specPath: specFile, port: 0, log: () => {} });
+    shared = await serveCopy(SOLAR);
     browser = await launchChromium({ width: 1440, height: 900 });
-    page = await browser.context.newPage();
-    page.on('pageerror', (e) => problems.push(String(e)));
-    // A 422 answer is the page asking about a bad field on purpose (the bad-field test); anything else is a problem.
-    page.on('console', (m) => m.type() === 'error' && !/status of 422/.test(m.text()) && problems.push(m.text()));
-    const t0 = Date.now();
-    await page.goto(server.url);
-    await page.waitForFunction(() => (window as any).umbrafab?.ready === true, null, { timeout: 60_000 });
-    const probe = await page.evaluate(() => ({ ...(window as any).umbrafab }));
-    const nav = await page.evaluate(() => (performance as any).getEntriesByType('navigation')[0]?.toJSON());
-    console.log(
-      `page load: ${Date.now() - t0} ms from goto to ready (in-page: ${Math.round(probe.loadMs)} ms from script start to the first drawn views; DOMContentLoaded ${Math.round(nav?.domContentLoadedEventEnd ?? NaN)} ms); WebGL ${probe.webgl}, ${probe.triangles} triangles`,
-    );
   });
 
   afterAll(async () => {
     await browser?.close();
-    await server?.close();
+    await shared?.server.close();
+  });
+
+  beforeEach(async () => {
+    ({ page, problems } = await openPage(browser, shared.server));
+  });
+
+  afterEach(async () => {
+    await page?.close();
   });
 
   it('loads with the form, the face, the 3D assembly and the numbers, without errors', async () => {
@@ -97,6 +122,31 @@ describe.skipIf(!HAVE_CHROMIUM)('the dial page in a real browser (Debian chromiu
     expect(await number(page, 'gnomon')).toBe('40 mm × 3 mm');
     const mark15After = await page.locator('#face svg #lines path:has(title:text-is("15:00 east"))').getAttribute('d');
     expect(mark15After).not.toBe(mark15Before);
+    expect(problems).toEqual([]);
+  });
+
+  it('aborts a view request that a newer edit took over, and shows the newer one', async () => {
+    // The first edit's /api/view is held in the browser until the second edit has started its own.
+    const aborted: string[] = [];
+    page.on('requestfailed', (r) => aborted.push(`${new URL(r.url()).pathname} ${r.failure()?.errorText}`));
+    let held: Route | null = null;
+    let release = () => {};
+    const released = new Promise<void>((ok) => (release = ok));
+    await page.route('**/api/view', async (route) => {
+      if (held) return route.continue();
+      held = route;
+      await released;
+      await route.continue().catch(() => {}); // the page has given it up
+    });
+    const n = await redraws(page);
+    await page.locator('#f-site-latitude').fill('41');
+    await expect.poll(() => held !== null, { timeout: 30_000 }).toBe(true);
+    await page.locator('#f-site-latitude').fill('42');
+    await expect.poll(() => aborted.filter((a) => a.startsWith('/api/view ')), { timeout: 30_000 }).toEqual(['/api/view net::ERR_ABORTED']);
+    release();
+    await redrawn(page, n);
+    expect(await number(page, 'tilt')).toBe('42°');
+    expect(await page.locator('#face svg #text').innerHTML()).toContain('42.000N');
     expect(problems).toEqual([]);
   });
 
@@ -142,27 +192,43 @@ describe.skipIf(!HAVE_CHROMIUM)('the dial page in a real browser (Debian chromiu
     expect(probe.shadowTriangles3d).toBeGreaterThan(0);
   });
 
+});
+
+describe.skipIf(SKIP_BROWSER)('the dial page downloads what `umbrafab build` writes', () => {
+  let browser: Awaited<ReturnType<typeof launchChromium>>;
+  beforeAll(async () => {
+    browser = await launchChromium({ width: 1440, height: 900 });
+  });
+  afterAll(async () => browser?.close());
+
   it('downloads plate.dxf byte for byte as `umbrafab build` writes it for the saved spec', async () => {
-    // One edit of its own (the cases do not depend on each other's order), saved, built with the CLI, compared with the download.
-    const n = await redraws(page);
-    await page.locator('#f-gnomon-height').fill('40');
-    await redrawn(page, n);
-    await saveWithPage(page);
-    const out = join(dir, 'cli');
-    const cli = await runCli(['build', specFile, '--out', out, '--force']);
-    expect(cli.code, cli.err).toBe(0);
-    // The file list belongs to the spec on show (the page marks both with the build id).
-    await page.waitForFunction(() => document.body.dataset.files !== undefined && document.body.dataset.files === document.body.dataset.view, null, { timeout: 60_000 });
-    const [download] = await Promise.all([page.waitForEvent('download'), page.locator('#files a[data-file="plate.dxf"]').click()]);
-    expect(download.suggestedFilename()).toBe('plate.dxf');
-    const got = join(dir, 'downloaded-plate.dxf');
-    await download.saveAs(got);
-    const a = readFileSync(got);
-    const b = readFileSync(join(out, 'plate.dxf'));
-    expect(a.length).toBe(b.length);
-    expect(a.equals(b)).toBe(true);
-    expect(readFileSync(specFile, 'utf8')).toMatch(/^  height: 40$/m);
-    expect(problems).toEqual([]);
+    // It saves, so it edits a spec file and a server of its own.
+    const own = await serveCopy(SOLAR);
+    const tab = await openPage(browser, own.server);
+    try {
+      const n = await redraws(tab.page);
+      await tab.page.locator('#f-gnomon-height').fill('40');
+      await redrawn(tab.page, n);
+      await saveWithPage(tab.page);
+      const out = join(own.dir, 'cli');
+      const cli = await runCli(['build', own.specFile, '--out', out, '--force']);
+      expect(cli.code, cli.err).toBe(0);
+      // The file list belongs to the spec on show (the page marks both with the build id).
+      await tab.page.waitForFunction(() => document.body.dataset.files !== undefined && document.body.dataset.files === document.body.dataset.view, null, { timeout: 60_000 });
+      const [download] = await Promise.all([tab.page.waitForEvent('download'), tab.page.locator('#files a[data-file="plate.dxf"]').click()]);
+      expect(download.suggestedFilename()).toBe('plate.dxf');
+      const got = join(own.dir, 'downloaded-plate.dxf');
+      await download.saveAs(got);
+      const a = readFileSync(got);
+      const b = readFileSync(join(out, 'plate.dxf'));
+      expect(a.length).toBe(b.length);
+      expect(a.equals(b)).toBe(true);
+      expect(readFileSync(own.specFile, 'utf8')).toMatch(/^  height: 40$/m);
+      expect(tab.problems).toEqual([]);
+    } finally {
+      await tab.page.close();
+      await own.server.close();
+    }
   });
 });
 
@@ -179,7 +245,7 @@ async function saveWithPage(page: Page): Promise<string[]> {
   return listed;
 }
 
-describe.skipIf(!HAVE_CHROMIUM)('"save spec" in a real browser edits the user\'s file', () => {
+describe.skipIf(SKIP_BROWSER)('"save spec" in a real browser edits the user\'s file', () => {
   const SPEC = join(ROOT, 'fixtures/specs/page-router-thick.yaml');
   let server: RunningServer;
   let browser: Awaited<ReturnType<typeof launchChromium>>;
@@ -188,13 +254,8 @@ describe.skipIf(!HAVE_CHROMIUM)('"save spec" in a real browser edits the user\'s
 
   /** A fresh copy of the commented spec, a server and a page for each case: the cases run in any order. */
   async function open(): Promise<void> {
-    const dir = mkdtempSync(join(tmpdir(), 'umbrafab-save-'));
-    specFile = join(dir, 'dial.yaml');
-    copyFileSync(SPEC, specFile);
-    server = await startServer({ specPath: specFile, port: 0, log: () => {} });
-    page = await browser.context.newPage();
-    await page.goto(server.url);
-    await page.waitForFunction(() => (window as any).umbrafab?.ready === true, null, { timeout: 60_000 });
+    ({ specFile, server } = await serveCopy(SPEC));
+    ({ page } = await openPage(browser, server));
   }
 
   beforeAll(async () => {

@@ -1,4 +1,3 @@
-import { execFileSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
@@ -6,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { parseSpec } from '@umbrafab/geometry';
 import { buildFiles, readSpecFile } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
+import { sheetCheck } from './helpers/sheetCheck.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');
 const site = { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' };
@@ -34,14 +34,7 @@ describe.each([
     expect(dump.entities.filter((e) => e.type === 'TEXT').every((e) => e.layer === 'REFERENCE_NO_CUT')).toBe(true);
     if (s.cutFiles.sheetWidth !== 'auto') expect(sheet.widthMm).toBe(s.cutFiles.sheetWidth);
     // Source: shapely (Debian python3-shapely): the parts' cut regions from sheet.dxf.
-    const out = JSON.parse(execFileSync('/usr/bin/python3', [join(ROOT, 'test/helpers/sheet_check.py'), file, String(sheet.widthMm), String(sheet.lengthMm)], { encoding: 'utf8' })) as {
-      parts: number;
-      valid: boolean;
-      maxOverlapMm2: number;
-      minDistanceMm: number;
-      outsideMm2: number;
-      edgeMm: number;
-    };
+    const out = sheetCheck(file, sheet.widthMm, sheet.lengthMm);
     console.log(`${sheet.file}: ${out.parts} parts on ${sheet.widthMm.toFixed(1)} x ${sheet.lengthMm.toFixed(1)} mm, closest ${out.minDistanceMm.toFixed(3)} mm apart (gap ${sheet.gapMm} mm), ${out.edgeMm.toFixed(3)} mm from the edge`);
     expect(out.parts).toBe(sheet.pieces.length);
     expect(out.valid).toBe(true);

@@ -6,7 +6,8 @@
 //   node packages/cli/scripts/build.mjs        (the root `prepare` hook runs it on install)
 //
 // Layout: dist/<hash>/main.mjs (the CLI), fullBuildWorker.mjs (the page
-// server's build thread), chunk-*.mjs, page/ (the page's static files), and
+// server's build thread), chunk-*.mjs, page/ (the page: page.js bundled from
+// src/serve/page/*.ts by pageBundle.mjs, index.html, page.css), and
 // dist/current.json naming that folder with every input's size and mtime, so
 // the bin (scripts/distEntry.mjs) can tell a stale build and rebuild it. The
 // folder name is a hash of the output, so concurrent rebuilds of the same
@@ -20,17 +21,17 @@
 // own dependencies, so a bare name would not resolve from packages/cli/dist);
 // the code loads them with import() only when an output needs them.
 import { createHash } from 'node:crypto';
-import { cpSync, existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { builtinModules } from 'node:module';
 import { dirname, join, relative, resolve, sep } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { PAGE_DIR, PAGE_STATIC_FILES, bundlePage } from './pageBundle.mjs';
 
 const CLI = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 const ROOT = resolve(CLI, '../..');
 const DIST = join(CLI, 'dist');
-const PAGE = join(CLI, 'src/serve/page');
 /** Files whose change must rebuild beside the bundled sources: this script and the package manifests (exports, sideEffects). */
-const CONFIG_INPUTS = [fileURLToPath(import.meta.url), ...['cli', 'geometry', 'fabricate'].map((p) => join(ROOT, 'packages', p, 'package.json'))];
+const CONFIG_INPUTS = [fileURLToPath(import.meta.url), fileURLToPath(new URL('./pageBundle.mjs', import.meta.url)), ...['cli', 'geometry', 'fabricate'].map((p) => join(ROOT, 'packages', p, 'package.json'))];
 
 /** The dist format; a change here rebuilds every dist. */
 const FORMAT = 1;
@@ -69,7 +70,11 @@ export async function buildDist() {
       logLevel: 'error',
       plugins: [thirdPartyByRealPath(externals)],
     });
-    cpSync(PAGE, join(tmp, 'page'), { recursive: true });
+    // The page: its modules bundled for the browser (pageBundle.mjs), its HTML and CSS as they are.
+    const page = await bundlePage();
+    mkdirSync(join(tmp, 'page'));
+    writeFileSync(join(tmp, 'page', 'page.js'), page.bytes);
+    for (const f of PAGE_STATIC_FILES) copyFileSync(join(PAGE_DIR, f), join(tmp, 'page', f));
 
     // Inputs to watch: every bundled project file; for a bundled third-party
     // file, only its package's package.json (it changes with the version, on
@@ -77,7 +82,8 @@ export async function buildDist() {
     const bundled = Object.keys(r.metafile.inputs).map((p) => resolve(CLI, p));
     const inputs = [
       ...bundled.map((f) => packageManifestOf(f) ?? f),
-      ...listFiles(PAGE),
+      ...listFiles(PAGE_DIR),
+      ...page.inputs,
       ...CONFIG_INPUTS,
       ...externals,
     ];

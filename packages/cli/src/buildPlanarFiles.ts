@@ -71,7 +71,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   if (finCut) files.push(...finCut.files);
   const mount = await wallMountFiles(spec, layout, drawing);
   files.push(...mount.files);
-  const extras = await planarExtraOutputs(spec, layout, drawing, part);
+  const extras = await planarExtraOutputs(spec, layout, drawing, part, [platePart, ...(finPart ? [finPart] : [])]);
   files.push(...extras.files);
   files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout), extras.templateGuide)) });
 

@@ -2,12 +2,13 @@ import { finSheetPart, wallMount, type DialSpec, type PlanarGnomonPart, type Pla
 import { CALIBRATION_BAR_MM, partsTemplateTiles, toPartsTemplatePdf, type PlanarTemplateGuide, type TemplatePart } from '@umbrafab/fabricate';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import type { TemplateSection } from './picturesOutputs.ts';
+import { sheetFiles, type SheetSections } from './sheetOutputs.ts';
 
-/** The outputs a planar face shares with the polar plate beyond its cut files: template.pdf so far. */
+/** The outputs a planar face shares with the polar plate beyond its own cut files: template.pdf and sheet.dxf. */
 export interface PlanarExtras {
   readonly files: readonly OutputFile[];
   /** report.json sections, each present when its file is written */
-  readonly report: { readonly template?: PlanarTemplateSection };
+  readonly report: { readonly template?: PlanarTemplateSection } & SheetSections;
   /** what install.md says about template.pdf (absent when it is not written) */
   readonly templateGuide?: PlanarTemplateGuide;
 }
@@ -20,14 +21,32 @@ export interface PlanarTemplateSection extends TemplateSection {
 }
 
 /**
- * template.pdf of a horizontal, wall, meridian or equatorial face
- * (`toPartsTemplatePdf`: the plate at 1:1, the table of line ends and holes,
- * the gnomon fin's profile and the wall mount at 1:1, each nominal), its
- * report section and install.md's guide to its sheets. Nothing when
- * template.write is false.
+ * The outputs of a horizontal, wall, meridian or equatorial face that
+ * polar builds write too: template.pdf (`planarTemplate`) and, for the
+ * cutting processes, sheet.dxf (`sheetFiles`: the plate, the sheet fin and
+ * the wall mount nested on one stock sheet, as cut, each with the relief
+ * its own DXF has). `cutParts` are the face's parts as plate.dxf and
+ * gnomon.dxf draw them; the wall mount is added here.
  */
-export async function planarExtraOutputs(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing, gnomon: PlanarGnomonPart): Promise<PlanarExtras> {
-  if (!spec.template.write) return { files: [], report: {} };
+export async function planarExtraOutputs(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing, gnomon: PlanarGnomonPart, cutParts: readonly SheetPart[]): Promise<PlanarExtras> {
+  const template = await planarTemplate(spec, layout, drawing, gnomon);
+  const mount = wallMount(layout)?.part;
+  const sheet = spec.process.method === 'print' ? undefined : await sheetFiles(spec, layout.plate.thicknessMm, [...cutParts, ...(mount ? [mount] : [])]);
+  return {
+    files: [...(sheet?.files ?? []), ...(template?.files ?? [])],
+    report: { ...(sheet?.report ?? {}), ...(template ? { template: template.report } : {}) },
+    ...(template ? { templateGuide: template.guide } : {}),
+  };
+}
+
+/**
+ * template.pdf of a planar face (`toPartsTemplatePdf`: the plate at 1:1,
+ * the table of line ends and holes, the gnomon fin's profile and the wall
+ * mount at 1:1, each nominal), its report section and install.md's guide
+ * to its sheets; null when template.write is false.
+ */
+async function planarTemplate(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing, gnomon: PlanarGnomonPart): Promise<{ files: OutputFile[]; report: PlanarTemplateSection; guide: PlanarTemplateGuide } | null> {
+  if (!spec.template.write) return null;
   const nominal = { material: spec.plate.material, reliefToolRadiusMm: 0, chordToleranceMm: spec.cutFiles.chordTolerance };
   const parts: TemplatePart[] = [];
   if (gnomon.kind === 'fin') parts.push({ label: 'gnomon fin profile', part: finSheetPart(gnomon.profile, { ...nominal, thicknessMm: gnomon.thicknessMm }) });
@@ -55,17 +74,15 @@ export async function planarExtraOutputs(spec: DialSpec, layout: PlanarLayout, d
   return {
     files: [{ name: 'template.pdf', bytes: pdf }],
     report: {
-      template: {
-        paper: tiles.plate.paper,
-        orientation: tiles.plate.orientation,
-        sheets: { columns: tiles.plate.columns, rows: tiles.plate.rows },
-        overlapMm: tiles.plate.overlapMm,
-        calibrationBarMm: CALIBRATION_BAR_MM,
-        scale: '1:1',
-        pages: tiles.pages,
-        drawings,
-      },
+      paper: tiles.plate.paper,
+      orientation: tiles.plate.orientation,
+      sheets: { columns: tiles.plate.columns, rows: tiles.plate.rows },
+      overlapMm: tiles.plate.overlapMm,
+      calibrationBarMm: CALIBRATION_BAR_MM,
+      scale: '1:1',
+      pages: tiles.pages,
+      drawings,
     },
-    templateGuide: guide,
+    guide,
   };
 }

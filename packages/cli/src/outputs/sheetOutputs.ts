@@ -1,4 +1,4 @@
-import { nestSheet, type SheetPart } from '@umbrafab/geometry';
+import { nestSheet, type DialSpec, type SheetPart } from '@umbrafab/geometry';
 import {
   cutDrawing,
   cutFileBase,
@@ -52,9 +52,17 @@ export interface SheetSections {
 export const sheetOutputs: Producer<SheetSections> = async (ctx) => {
   const { spec, layout } = ctx;
   if (spec.process.method === 'print') return { files: [], report: {} };
+  return sheetFiles(spec, layout.plate.thicknessMm, cutParts(ctx));
+};
+
+/**
+ * sheet.dxf from a job's flat parts (any face type): the parts of the
+ * plate's stock (spec.plate.material at `plateThicknessMm`) nested on one
+ * sheet as `sheetOutputs` describes, the others listed as other stock.
+ */
+export async function sheetFiles(spec: DialSpec, plateThicknessMm: number, all: readonly SheetPart[]): Promise<{ files: OutputFile[]; report: SheetSections }> {
   const c = spec.cutFiles;
-  const all = cutParts(ctx);
-  const stock = { material: spec.plate.material, thicknessMm: layout.plate.thicknessMm };
+  const stock = { material: spec.plate.material, thicknessMm: plateThicknessMm };
   const same = (p: SheetPart) => p.material === stock.material && Math.abs(p.thicknessMm - stock.thicknessMm) < 1e-9;
   const parts = all.filter(same);
   const kerf = spec.process.kerf;
@@ -104,4 +112,4 @@ export const sheetOutputs: Producer<SheetSections> = async (ctx) => {
       },
     },
   };
-};
+}

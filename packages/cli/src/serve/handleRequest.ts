@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import { isIP } from 'node:net';
 import { basename, dirname } from 'node:path';
@@ -78,7 +78,10 @@ export async function handleRequest(ctx: ServeContext, req: IncomingMessage, res
     const method = req.method ?? 'GET';
     if (method === 'GET' || method === 'HEAD') {
       const asset = STATIC_ASSETS[path];
-      if (asset) return send(res, 200, asset.type, readFileSync(asset.file), path === '/' ? { 'Content-Security-Policy': csp(asset.file) } : {});
+      if (asset) {
+        const bytes = await asset.read();
+        return send(res, 200, asset.type, bytes, path === '/' ? { 'Content-Security-Policy': csp(bytes) } : {});
+      }
       if (path === '/api/setup') return sendJson(res, 200, setup(ctx));
       if (path.startsWith('/api/files/')) return await sendBuildFile(ctx, res, path);
       throw new HttpError(404, `${path}: no such page or file`);
@@ -264,12 +267,29 @@ function send(res: ServerResponse, status: number, type: string, bytes: Uint8Arr
 }
 
 /** The page's Content-Security-Policy: its own scripts and the one inline import map (by hash), nothing from elsewhere. */
-function csp(indexFile: string): string {
+function csp(indexHtml: Uint8Array): string {
   if (!pageCsp) {
-    const html = readFileSync(indexFile, 'utf8');
+    const html = new TextDecoder().decode(indexHtml);
     const map = /<script type="importmap">([\s\S]*?)<\/script>/.exec(html)?.[1] ?? '';
     const hash = createHash('sha256').update(map).digest('base64');
     pageCsp = `default-src 'self'; script-src 'self' 'sha256-${hash}'; style-src 'self' 'unsafe-inline'; img-src 'self' data: blob:; connect-src 'self'; object-src 'none'; base-uri 'none'; frame-ancestors 'none'; form-action 'none'`;
   }
   return pageCsp;
+}
+
+// The answers the page's modules read (src/serve/page/api.ts), typed from the functions that build them.
+/** GET /api/setup */
+export type SetupAnswer = ReturnType<typeof setup>;
+/** POST /api/view */
+export type ViewAnswer = Awaited<ReturnType<typeof view>>;
+/** GET /api/files/<id> */
+export type FileListAnswer = Awaited<ReturnType<typeof fileList>>;
+/** POST /api/sun */
+export type SunAnswer = Awaited<ReturnType<typeof sun>>;
+/** POST /api/save (with or without preview) */
+export type SaveAnswer = ReturnType<typeof save>;
+/** Every refused request (4xx, 5xx): the problem, naming the spec field when it is one. */
+export interface Refusal {
+  readonly ok: false;
+  readonly error: { readonly field: string | null; readonly message: string };
 }
