@@ -13,6 +13,8 @@ export * from './polar/numeralText.ts';
 export * from './polar/layoutDial.ts';
 export * from './polar/markCount.ts';
 export * from './plate/plateDrawing.ts';
+export type { LaidOutPlate } from './plate/laidOutPlate.ts';
+export type { GnomonTab } from './plate/gnomonTabs.ts';
 export * from './parts/manifoldEngine.ts';
 export { shoelaceArea } from './parts/ring2d.ts';
 export * from './sheet/sheetPart.ts';

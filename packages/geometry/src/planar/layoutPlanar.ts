@@ -1,4 +1,7 @@
 import { SpecError } from '../errors.ts';
+import { cornerHoles } from '../plate/cornerHoles.ts';
+import { gnomonTabs, type GnomonTab } from '../plate/gnomonTabs.ts';
+import { laidOutPlate, type LaidOutPlate } from '../plate/laidOutPlate.ts';
 import { DEG } from '../guards.ts';
 import { clipPolyline } from '../polar/clipPolyline.ts';
 import { dateLineEntries } from '../polar/calendarLines.ts';
@@ -8,7 +11,7 @@ import { formatClock, parseClock } from '../spec/parseClock.ts';
 import type { DialSpec } from '../spec/schema.ts';
 import type { FaceType } from '../spec/sections/faceSection.ts';
 import { strokeText, strokeTextWidthMm } from '../text/strokeText.ts';
-import type { Circle, Hemisphere, MarkKind, RoundedRect, TextBlock, Vec2 } from '../types.ts';
+import type { Circle, Hemisphere, MarkKind, TextBlock, Vec2 } from '../types.ts';
 import { litDeclinations } from './faceSeesSun.ts';
 import { hourLine } from './hourLine.ts';
 import { planarDateLine } from './planarDateLine.ts';
@@ -73,23 +76,13 @@ export interface PlanarGnomonLayout {
   /** face y of the footprint's two ends, mm */
   readonly y0Mm: number;
   readonly y1Mm: number;
-  readonly tabs: readonly { readonly centerYMm: number; readonly lengthMm: number }[];
+  readonly tabs: readonly GnomonTab[];
   /** the nodus, measured along the style from its anchor (root, or the point above the face origin), mm; null without one */
   readonly nodusAlongStyleMm: number | null;
 }
 
-export interface PlanarPlateLayout {
-  readonly widthMm: number;
-  readonly lengthMm: number;
-  readonly thicknessMm: number;
-  readonly cornerRadiusMm: number;
-  /** plate x of the face origin (the fin's centre plane), mm */
-  readonly substyleX: number;
-  /** plate y of the face origin (the roots' middle, or the marks' middle when ψ = 0), mm */
-  readonly faceOriginY: number;
-  readonly holes: readonly Circle[];
-  readonly slots: readonly RoundedRect[];
-}
+/** A planar face's plate: the plate every face layout lays out (`LaidOutPlate`). */
+export type PlanarPlateLayout = LaidOutPlate;
 
 /** An hour on the spec's grid that the face cannot show, and why. */
 export interface LeftOutHour {
@@ -170,11 +163,14 @@ export function layoutPlanar(spec: DialSpec): PlanarLayout {
   const t = spec.gnomon.thickness;
   const model: PlanarGnomon = { thicknessMm: t, heightMm: h };
   if (!parallel && !equatorial && psiDeg < MIN_STYLE_HEIGHT_DEG) {
+    const why = `the style would stand ${psiDeg.toFixed(2)}° from this face, so its fin would be ${(1 / Math.tan(face.styleHeightRad)).toFixed(0)} times as long as it is high`;
+    // A level face's style rises at the latitude itself: only the site can change it.
+    if (faceType === 'horizontal') throw new SpecError('site.latitude', spec.site.latitude, `allowed: for a horizontal face, a latitude at least ${MIN_STYLE_HEIGHT_DEG}° from the equator (its style rises at |latitude|), or exactly 0`, why);
     throw new SpecError(
       faceType === 'vertical' ? 'face.wallDeclination' : 'face.type',
       faceType === 'vertical' ? spec.face?.wallDeclination : faceType,
       `allowed: a face whose style height is at least ${MIN_STYLE_HEIGHT_DEG}° (a wall within about ${(90 - MIN_STYLE_HEIGHT_DEG / Math.cos(spec.site.latitude * DEG)).toFixed(0)}° of the equator-ward horizon), or face.type meridian for a wall facing due east or west`,
-      `the style would stand ${psiDeg.toFixed(2)}° from this face, so its fin would be ${(1 / Math.tan(face.styleHeightRad)).toFixed(0)} times as long as it is high`,
+      why,
     );
   }
   const time = timeLayout(spec);
@@ -277,21 +273,8 @@ export function layoutPlanar(spec: DialSpec): PlanarLayout {
     return { role: 'title' as const, text, heightMm: textH, strokeWidthMm: stroke, strokes: strokeText(text, { heightMm: textH, at: [centreX, titleTop - faceOriginY - textH - i * 1.7 * textH], align: 'center' }) };
   });
 
-  const clearance = spec.process.clearance;
-  const slots: RoundedRect[] = gnomon.kind === 'rod'
-    ? []
-    : gnomon.tabs.map((tab) => ({ kind: 'rect' as const, cx: substyleX, cy: faceOriginY + tab.centerYMm, widthMm: t + 2 * clearance, heightMm: tab.lengthMm + 2 * clearance, cornerRadiusMm: 0 }));
-  const rodHole: Circle[] = gnomon.kind === 'rod' ? [{ kind: 'circle', cx: substyleX, cy: faceOriginY, radiusMm: t / 2 + clearance }] : [];
-  const plate: PlanarPlateLayout = {
-    widthMm,
-    lengthMm,
-    thicknessMm: spec.plate.thickness,
-    cornerRadiusMm: Math.min(spec.plate.cornerRadius, widthMm / 2, lengthMm / 2),
-    substyleX,
-    faceOriginY,
-    holes: [...cornerHoles(spec, widthMm, lengthMm), ...rodHole],
-    slots,
-  };
+  const rodHole: Circle[] = gnomon.kind === 'rod' ? [{ kind: 'circle', cx: substyleX, cy: faceOriginY, radiusMm: t / 2 + spec.process.clearance }] : [];
+  const plate = laidOutPlate(spec, { widthMm, lengthMm, substyleX, faceOriginY }, gnomon.tabs, [...cornerHoles(spec.holes, widthMm, lengthMm), ...rodHole]);
   const plateTurnDeg = substyleFromVerticalRad(wallFace, face) / DEG;
   if (faceType === 'vertical' && Math.abs(plateTurnDeg) > 1e-9) {
     notes.push(`the substyle stands ${Math.abs(plateTurnDeg).toFixed(2)}° from the plumb line, turned ${plateTurnDeg > 0 ? 'clockwise' : 'anticlockwise'} seen from in front: the plate's long edges follow the substyle (the plumb line is drawn on the reference layer)`);
@@ -333,7 +316,7 @@ function gnomonOf(spec: DialSpec, face: PlanarFace, parallel: boolean, equatoria
     const ys = marks.flatMap((m) => [m.a[1], m.b[1]]);
     const y0 = Math.min(...ys) - spec.gnomon.overhang;
     const y1 = Math.max(...ys) + spec.gnomon.overhang;
-    return { kind: 'fin', heightMm: h, thicknessMm: t, styleHeightDeg: 0, profile: [[y0, 0], [y1, 0], [y1, h], [y0, h]], styleFrom: [y0, h], styleTo: [y1, h], y0Mm: y0, y1Mm: y1, tabs: tabsAlong(spec, y0, y1), nodusAlongStyleMm: spec.gnomon.nodus ? spec.gnomon.nodusY : null };
+    return { kind: 'fin', heightMm: h, thicknessMm: t, styleHeightDeg: 0, profile: [[y0, 0], [y1, 0], [y1, h], [y0, h]], styleFrom: [y0, h], styleTo: [y1, h], y0Mm: y0, y1Mm: y1, tabs: gnomonTabs(spec, y0, y1, 'footprint'), nodusAlongStyleMm: spec.gnomon.nodus ? spec.gnomon.nodusY : null };
   }
   // ψ > 0: a triangle on the substyle from the root (u = 0) to the tip's foot (u = ±R).
   const sense = face.up[0] * face.substyle[0] + face.up[1] * face.substyle[1] + face.up[2] * face.substyle[2] >= 0 ? 1 : -1;
@@ -346,17 +329,7 @@ function gnomonOf(spec: DialSpec, face: PlanarFace, parallel: boolean, equatoria
   if (spec.gnomon.nodus && !(along > 0 && along <= R / Math.cos(face.styleHeightRad))) {
     throw new SpecError('gnomon.nodusY', spec.gnomon.nodusY, `allowed: from ${(-R / 2).toFixed(1)} to ${(R / 2).toFixed(1)} mm: the nodus must lie on the style (0 = over the footprint's middle)`);
   }
-  return { kind: 'fin', heightMm: h, thicknessMm: t, styleHeightDeg: psiDeg, profile, styleFrom: [0, 0], styleTo: [uTip, h], y0Mm: y0, y1Mm: y1, tabs: tabsAlong(spec, y0 + R * 0.1, y1 - R * 0.1), nodusAlongStyleMm: spec.gnomon.nodus ? along : null };
-}
-
-function tabsAlong(spec: DialSpec, y0: number, y1: number): { centerYMm: number; lengthMm: number }[] {
-  const L = y1 - y0;
-  const n = spec.gnomon.tabs;
-  const tl = spec.gnomon.tabLength;
-  if (n * tl > L * 0.8) {
-    throw new SpecError('gnomon.tabLength', tl, `allowed: tabs taking at most 80 % of the ${L.toFixed(1)} mm footprint, i.e. up to ${((L * 0.8) / n).toFixed(1)} mm each for ${n} tabs`);
-  }
-  return Array.from({ length: n }, (_, i) => ({ centerYMm: y0 + (L * (2 * i + 1)) / (2 * n), lengthMm: tl }));
+  return { kind: 'fin', heightMm: h, thicknessMm: t, styleHeightDeg: psiDeg, profile, styleFrom: [0, 0], styleTo: [uTip, h], y0Mm: y0, y1Mm: y1, tabs: gnomonTabs(spec, y0 + R * 0.1, y1 - R * 0.1, 'footprint'), nodusAlongStyleMm: spec.gnomon.nodus ? along : null };
 }
 
 /** Numerals at the asked height, or smaller (to 0.1 mm) until no two neighbours come closer than half a height. */
@@ -473,10 +446,3 @@ function titleText(spec: DialSpec, type: Exclude<FaceType, 'polar'>, psiDeg: num
   return [spec.name, spec.site.place ? `${spec.site.place}  ${pos}` : pos, `${kind}  STYLE ${psiDeg.toFixed(2)} DEG`, spec.dial.reads === 'solar' ? 'READS APPARENT SOLAR TIME' : 'READS STANDARD TIME'];
 }
 
-function cornerHoles(spec: DialSpec, widthMm: number, lengthMm: number): Circle[] {
-  const { count, diameter, inset } = spec.holes;
-  if (count === 0) return [];
-  const xs = [inset, widthMm - inset];
-  const ys = count === 4 ? [inset, lengthMm - inset] : [lengthMm / 2];
-  return ys.flatMap((cy) => xs.map((cx) => ({ kind: 'circle' as const, cx, cy, radiusMm: diameter / 2 })));
-}

@@ -41,14 +41,18 @@ export function plateOutline(plate: { readonly widthMm: number; readonly lengthM
   return { kind: 'rect', cx: plate.widthMm / 2, cy: plate.lengthMm / 2, widthMm: plate.widthMm, heightMm: plate.lengthMm, cornerRadiusMm: plate.cornerRadiusMm };
 }
 
-/** The plate and its face origin, as both layouts hold them. */
+/** The plate and its face origin, as both layouts hold them (see `LaidOutPlate`). */
 export interface DrawnPlate {
   readonly widthMm: number;
   readonly lengthMm: number;
   readonly cornerRadiusMm: number;
+  /** plate x of the face origin: the gnomon's centre plane (the substyle), mm */
   readonly substyleX: number;
+  /** plate y of the face origin (polar: the middle of the hour marks; planar: the roots' middle, or the marks' middle when ψ = 0), mm */
   readonly faceOriginY: number;
+  /** mounting holes (and a planar rod's hole), nominal size, plate coordinates */
   readonly holes: readonly Circle[];
+  /** gnomon slots, nominal size (tab + fit clearance on every side), plate coordinates */
   readonly slots: readonly RoundedRect[];
 }
 

@@ -1,10 +1,13 @@
 import { SpecError } from '../errors.ts';
+import { cornerHoles } from '../plate/cornerHoles.ts';
+import { gnomonTabs, type GnomonTab } from '../plate/gnomonTabs.ts';
+import { laidOutPlate, type LaidOutPlate } from '../plate/laidOutPlate.ts';
 import { DEG } from '../guards.ts';
 import type { DialSpec } from '../spec/schema.ts';
 import { formatClock, parseClock } from '../spec/parseClock.ts';
 import { standardMeridianDeg, zoneYearOffsets } from '../sun/zoneOffsets.ts';
 import { strokeText, strokeTextWidthMm } from '../text/strokeText.ts';
-import type { Circle, Hemisphere, Mark, MarkKind, RoundedRect, TextBlock } from '../types.ts';
+import type { Circle, Hemisphere, Mark, MarkKind, TextBlock } from '../types.ts';
 import { castingEdge, eastToFaceX, markOffsetEastMm } from './markOffset.ts';
 import { numeralText } from './numeralText.ts';
 import { penumbraMarkWidths } from './penumbraWidths.ts';
@@ -26,23 +29,11 @@ export interface GnomonLayout {
   readonly y0Mm: number;
   readonly y1Mm: number;
   /** Tabs through the plate, face y of each centre and length along the style, mm. */
-  readonly tabs: readonly { readonly centerYMm: number; readonly lengthMm: number }[];
+  readonly tabs: readonly GnomonTab[];
 }
 
-export interface PlateLayout {
-  readonly widthMm: number;
-  readonly lengthMm: number;
-  readonly thicknessMm: number;
-  readonly cornerRadiusMm: number;
-  /** Plate x of the gnomon's centre plane (the substyle), mm. */
-  readonly substyleX: number;
-  /** Plate y of the face origin (middle of the hour marks), mm. */
-  readonly faceOriginY: number;
-  /** Mounting holes, nominal size, plate coordinates. */
-  readonly holes: readonly Circle[];
-  /** Gnomon slots, nominal size (tab + fit clearance on every side), plate coordinates. */
-  readonly slots: readonly RoundedRect[];
-}
+/** The polar plate: the plate every face layout lays out (`LaidOutPlate`). */
+export type PlateLayout = LaidOutPlate;
 
 export interface TimeLayout {
   readonly reads: 'solar' | 'standard';
@@ -198,23 +189,7 @@ export function layoutDial(spec: DialSpec, options: LayoutOptions = {}): DialLay
     notes,
   });
 
-  const plate: PlateLayout = {
-    widthMm,
-    lengthMm,
-    thicknessMm: spec.plate.thickness,
-    cornerRadiusMm: Math.min(spec.plate.cornerRadius, widthMm / 2, lengthMm / 2),
-    substyleX,
-    faceOriginY,
-    holes: holeCircles(spec, widthMm, lengthMm),
-    slots: gnomon.tabs.map((tab) => ({
-      kind: 'rect' as const,
-      cx: substyleX,
-      cy: faceOriginY + tab.centerYMm,
-      widthMm: t + 2 * spec.process.clearance,
-      heightMm: tab.lengthMm + 2 * spec.process.clearance,
-      cornerRadiusMm: 0,
-    })),
-  };
+  const plate = laidOutPlate(spec, { widthMm, lengthMm, substyleX, faceOriginY }, gnomon.tabs, holeCircles(spec, widthMm, lengthMm));
   checkHolesClear(spec, plate, marks, numerals, title);
   return { spec, hemisphere, marks, numerals, title, gnomon, plate, time, notes };
 }
@@ -307,13 +282,7 @@ function checkKerfAgainstMarks(spec: DialSpec): void {
 }
 
 function gnomonLayout(spec: DialSpec, y0: number, y1: number): GnomonLayout {
-  const L = y1 - y0;
-  const n = spec.gnomon.tabs;
-  const tl = spec.gnomon.tabLength;
-  if (n * tl > L * 0.8) {
-    throw new SpecError('gnomon.tabLength', tl, `allowed: tabs taking at most 80 % of the ${L.toFixed(1)} mm style, i.e. up to ${((L * 0.8) / n).toFixed(1)} mm each for ${n} tabs`);
-  }
-  const tabs = Array.from({ length: n }, (_, i) => ({ centerYMm: y0 + (L * (2 * i + 1)) / (2 * n), lengthMm: tl }));
+  const tabs = gnomonTabs(spec, y0, y1, 'style');
   return { heightMm: spec.gnomon.height, thicknessMm: spec.gnomon.thickness, y0Mm: y0, y1Mm: y1, tabs };
 }
 
@@ -417,9 +386,7 @@ function holeCircles(spec: DialSpec, widthMm: number, lengthMm: number): Circle[
   if (2 * inset >= widthMm || 2 * inset >= lengthMm || inset < r + 1) {
     throw new SpecError('holes.inset', inset, `allowed: from ${r + 1} mm (the hole radius plus 1 mm) to less than half the plate's smaller side`);
   }
-  const xs = [inset, widthMm - inset];
-  const ys = count === 4 ? [inset, lengthMm - inset] : [lengthMm / 2];
-  return ys.flatMap((cy) => xs.map((cx) => ({ kind: 'circle' as const, cx, cy, radiusMm: r })));
+  return cornerHoles(spec.holes, widthMm, lengthMm);
 }
 
 /** Every hole keeps HOLE_CLEAR_MM of free stock to every mark and glyph. */

@@ -3,6 +3,8 @@ export * from './gnomonForLayout.ts';
 export * from './styleEdges.ts';
 export * from './castShadow.ts';
 export * from './shadowOnFace.ts';
+export * from './convexHull2d.ts';
+export * from './planarShadowOnFace.ts';
 export * from './drawnMarks.ts';
 export * from './marksFromPlate.ts';
 export * from './checkDial.ts';
