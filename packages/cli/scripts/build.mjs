@@ -68,7 +68,7 @@ export async function buildDist() {
       // Bundled CommonJS packages require() Node's built-ins: give ESM chunks a require.
       banner: { js: "import { createRequire as __umbrafabRequire } from 'node:module';\nconst require = __umbrafabRequire(import.meta.url);" },
       logLevel: 'error',
-      plugins: [thirdPartyByRealPath(externals)],
+      plugins: [thirdPartyByRealPath(externals), packageIndexAsStars()],
     });
     // The page: its modules bundled for the browser (pageBundle.mjs), its HTML and CSS as they are.
     const page = await bundlePage();
@@ -182,6 +182,34 @@ function thirdPartyByRealPath(externals) {
         externals.add(r.path);
         const fromOut = relative(join(DIST, 'x'), r.path).split(sep).join('/');
         return { path: fromOut.startsWith('.') ? fromOut : `./${fromOut}`, external: true };
+      });
+    },
+  };
+}
+
+/** A package entry point: its `export { a, type B } from './x.ts'` lines name the package's public API. */
+const PACKAGE_INDEX = /[\\/]packages[\\/](?:geometry|fabricate)[\\/]src[\\/]index\.ts$/;
+
+/**
+ * Hands esbuild each package index with its named re-exports as `export *`
+ * from the same files (and its type-only lines dropped). esbuild cannot split
+ * a file between chunks, and a file that re-exports names counts as reached,
+ * with every file it re-exports from, by every chunk that imports any one of
+ * them: the whole package would then sit in one chunk that `check` loads with
+ * the PDF template (esbuild issues #2869 and #3531). Star re-exports resolve
+ * straight to the defining file, so each chunk keeps only what it uses. The
+ * names the bundle can reach stay those the index lists: every importer is
+ * type-checked against it.
+ */
+function packageIndexAsStars() {
+  return {
+    name: 'package-index-as-stars',
+    setup(build) {
+      build.onLoad({ filter: PACKAGE_INDEX }, (args) => {
+        const text = readFileSync(args.path, 'utf8');
+        const stars = text.replace(/export\s+type\s*\{[^}]*\}\s*from\s*'[^']+';/g, '').replace(/export\s*\{[^}]*\}\s*from\s*('[^']+');/g, 'export * from $1;');
+        if (/export\s*\{/.test(stars)) return { errors: [{ text: `${args.path}: an export this build cannot turn into export * (only \`export { ... } from '...'\` lines)` }] };
+        return { contents: stars, loader: 'ts', resolveDir: dirname(args.path) };
       });
     },
   };

@@ -22,6 +22,7 @@ import { cutPartFiles } from './outputs/cutParts.ts';
 import { utf8 } from './outputs/outputTypes.ts';
 import { planarExtraOutputs } from './outputs/planarExtras.ts';
 import type { PlanarReport, WallMountSection } from './outputs/planarReport.ts';
+import { planarPreviewSvgOptions } from './planarViews.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
 /** What a planar build produces, in memory (the same shape as the polar `BuildResult`). */
@@ -55,7 +56,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   const [platePart, finPart] = flatParts(reliefToolRadius(spec));
   const plateCut = await cutPartFiles({ spec, drawing }, platePart);
   files.push(...plateCut.files);
-  const preview = toSvg(drawing, { caption: `${spec.name} - ${layout.faceType} face, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+  const preview = toSvg(drawing, planarPreviewSvgOptions({ spec, layout }));
   files.push({ name: 'preview.svg', bytes: utf8(preview) });
   if (spec.pictures.write) files.push({ name: 'preview.png', bytes: toPng(preview, { pxPerMm: spec.pictures.pxPerMm }) });
   const engraving = await engraveFromSpec(spec, drawing);

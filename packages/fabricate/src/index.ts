@@ -1,22 +1,58 @@
-export * from './process/roundTo.ts';
-export * from './process/rectVertices.ts';
-export * from './dxf/toDxf.ts';
-export * from './svg/toSvg.ts';
-export * from './svg/previewFrame.ts';
-export * from './report/toReportJson.ts';
-export * from './engrave/index.ts';
-export * from './stl/index.ts';
-export * from './dxf/toDxfR12.ts';
-export * from './dxf/cutLayers.ts';
-export * from './svg/toCutSvg.ts';
-export * from './cut/cutDrawing.ts';
-export * from './cut/offsetProfiles.ts';
-export * from './cut/piecesDrawing.ts';
-export * from './install/toInstallMd.ts';
-export * from './install/markdownText.ts';
-export * from './template/index.ts';
-export * from './pictures/index.ts';
-export * from './check/index.ts';
-export * from './install/toPlanarInstallMd.ts';
-export * from './process/assertToolFits.ts';
-export * from './cut/partCutFiles.ts';
+// @umbrafab/fabricate's public names: what the CLI, the tests and the scripts
+// import from '@umbrafab/fabricate'. Each name comes from the file that
+// defines it; a name nothing outside this package uses stays unexported.
+// A new writer another package needs gets its name here.
+
+export { toDxf } from './dxf/toDxf.ts';
+
+export { toSvg, type SvgOptions } from './svg/toSvg.ts';
+export { previewFrame, plateToPreview } from './svg/previewFrame.ts';
+
+export { toReportJson } from './report/toReportJson.ts';
+
+export { resolveEngraveSettings, MATERIAL_NAMES, MATERIAL_PRESETS } from './engrave/materialPresets.ts';
+export { vbitDepthMm } from './engrave/vbitDepth.ts';
+export { engraveSettingsFromSpec } from './engrave/engraveSettingsFromSpec.ts';
+export { engravingPlanKey, planEngraving, writeEngraving, engraveFromSpec, type EngravingReport } from './engrave/engraveFromSpec.ts';
+export { clipToPlate } from './engrave/clipToPlate.ts';
+export { cutFromSpec, type CuttingReport } from './engrave/cutFromSpec.ts';
+
+export { toStl } from './stl/toStl.ts';
+export { stlHeader } from './stl/stlHeader.ts';
+
+export { toDxfR12 } from './dxf/toDxfR12.ts';
+
+export { toCutSvg } from './svg/toCutSvg.ts';
+
+export { cutDrawing, nominalProfiles, type CutDrawing, type CutProfiles } from './cut/cutDrawing.ts';
+export { offsetProfiles } from './cut/offsetProfiles.ts';
+export { piecesDrawing } from './cut/piecesDrawing.ts';
+
+export { toInstallMd } from './install/toInstallMd.ts';
+export { escapeMarkdownText } from './install/markdownText.ts';
+
+export {
+  toTemplatePdf,
+  templateTiles,
+  toPartsTemplatePdf,
+  partsTemplateTiles,
+  CALIBRATION_BAR_MM,
+  CALIBRATION_BAR_RGB,
+  PRINT_AT_FULL_SIZE,
+  type TemplatePart,
+} from './template/toTemplatePdf.ts';
+
+export { toPng, toPngAsync, svgWidthMm, svgHeightMm } from './pictures/toPng.ts';
+export { toAssemblySvg } from './pictures/toAssemblySvg.ts';
+export { fitPixelBudget, MAX_PICTURE_PIXELS } from './pictures/fitPixelBudget.ts';
+
+export { toCheckJson } from './check/toCheckJson.ts';
+export { toCheckSvg } from './check/toCheckSvg.ts';
+export { checkTableText } from './check/checkTableText.ts';
+export { planarCheckText } from './check/planarCheckText.ts';
+
+export { toPlanarInstallMd, type PlanarTemplateGuide } from './install/toPlanarInstallMd.ts';
+
+export { assertToolFits } from './process/assertToolFits.ts';
+
+export { resolveStrokeMode, cutFileBase, partCutFiles, formatMm, type PartCutReport } from './cut/partCutFiles.ts';

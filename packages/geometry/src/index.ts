@@ -1,51 +1,101 @@
-export * from './types.ts';
-export * from './errors.ts';
+// @umbrafab/geometry's public names: what the other packages, the tests and
+// the scripts import from '@umbrafab/geometry'. Each name comes from the file
+// that defines it; a name nothing outside this package uses stays unexported.
+// A new function another package needs gets its name here.
+
+export type { Vec2, Path, RoundedRect, Circle, Hemisphere, Mark, MarkKind } from './types.ts';
+export { isSpecError, formatValue, SpecError } from './errors.ts';
 export { DEG, assertFinite, assertInteger, assertNonNegative, assertPositive, assertRange } from './guards.ts';
-export * from './spec/schema.ts';
-export * from './spec/parseSpec.ts';
-export * from './spec/parseClock.ts';
-export * from './spec/derivedDefaults.ts';
-export * from './spec/textFields.ts';
-export * from './spec/didYouMean.ts';
-export * from './text/strokeText.ts';
-export * from './polar/markOffset.ts';
-export * from './polar/numeralText.ts';
-export * from './polar/layoutDial.ts';
-export * from './polar/markCount.ts';
-export * from './plate/plateDrawing.ts';
-export type { LaidOutPlate } from './plate/laidOutPlate.ts';
-export type { GnomonTab } from './plate/gnomonTabs.ts';
-export * from './parts/manifoldEngine.ts';
+
+export { METHODS, type ProcessMethod, specSchema, type DialSpec } from './spec/schema.ts';
+export { parseSpec } from './spec/parseSpec.ts';
+export { parseClock } from './spec/parseClock.ts';
+export { DERIVED_DEFAULTS } from './spec/derivedDefaults.ts';
+export { didYouMean } from './spec/didYouMean.ts';
+
+export { markOffsetEastMm, eastToFaceX } from './polar/markOffset.ts';
+export { layoutDial, type TimeLayout, type DialLayout, type LayoutOptions } from './polar/layoutDial.ts';
+export { countMarks, markCountText } from './polar/markCount.ts';
+
+export { plateDrawing, type PlateDrawing } from './plate/plateDrawing.ts';
+
+export { manifoldEngine } from './parts/manifoldEngine.ts';
 export { shoelaceArea } from './parts/ring2d.ts';
-export * from './sheet/sheetPart.ts';
-export * from './sheet/sheetParts.ts';
-export * from './sheet/nestSheet.ts';
-export * from './sheet/arcPoints.ts';
-export * from './outline/strokeOutlines.ts';
-export { dropRepeats } from './outline/dropRepeats.ts';
-export { roundedRectArea, roundedRectCorners, roundedRectPath, type RoundedRectCorners } from './outline/roundedRect.ts';
-export * from './sheet/cornerRelief.ts';
-export * from './plate/cutLayerNames.ts';
-export * from './spec/sections/cutFilesSection.ts';
-export * from './polar/markField.ts';
-export * from './polar/clipPolyline.ts';
-export * from './polar/calendarLines.ts';
-export * from './polar/meanTimeLines.ts';
-export * from './polar/summerNumerals.ts';
-export * from './polar/penumbraWidths.ts';
-export * from './polar/curveLabels.ts';
-export * from './polar/equationOfTimePlate.ts';
-export * from './polar/timeFaceExtras.ts';
-export * from './install/installSheet.ts';
-export * from './sun/index.ts';
-export * from './calendar/index.ts';
-export * from './parts/index.ts';
-export * from './spec/sections/partsSection.ts';
-export * from './shadow/index.ts';
-export * from './assembly/index.ts';
-export * from './stand/index.ts';
-export * from './spec/sections/standSection.ts';
-export * from './spec/materials.ts';
-export * from './planar/index.ts';
-export * from './spec/sections/faceSection.ts';
-export * from './install/assemblyGuide.ts';
+
+export type { SheetPart } from './sheet/sheetPart.ts';
+export { reliefToolRadius, plateSheetPart, finSheetPart, sheetParts, slotReliefs } from './sheet/sheetParts.ts';
+export { nestSheet } from './sheet/nestSheet.ts';
+export { arcSegments } from './sheet/arcPoints.ts';
+
+export { drawingStrokes, strokeOutlines, strokePolygons, type Stroke, type StrokeOutlines } from './outline/strokeOutlines.ts';
+
+export { CUT_LAYER_NAMES, type CutLayerKey } from './plate/cutLayerNames.ts';
+
+export type { StrokeDrawing } from './spec/sections/cutFilesSection.ts';
+
+export { nodusFootY } from './polar/markField.ts';
+export { calendarLines } from './polar/calendarLines.ts';
+export { meanTimeLines } from './polar/meanTimeLines.ts';
+export { timeFaceExtras } from './polar/timeFaceExtras.ts';
+
+export { installSheet, type InstallSheet } from './install/installSheet.ts';
+
+export { parseLocalDate } from './sun/localDate.ts';
+export { equationOfTimeMin } from './sun/equationOfTimeMin.ts';
+export { equationOfTimeTable } from './sun/equationOfTimeTable.ts';
+export { offsetHoursAt } from './sun/zoneOffsets.ts';
+export { sunTrack, sunOnDay, instantAtHourAngle, type SunTrack } from './sun/sunTrack.ts';
+export { sunAtHourAngle, sunAtClock } from './sun/sunAtTime.ts';
+
+export type { FacePolyline } from './calendar/types.ts';
+
+export type { Mesh, Vec3 } from './parts/mesh.ts';
+export { meshVolumeMm3 } from './parts/meshVolumeMm3.ts';
+export { meshBounds } from './parts/meshBounds.ts';
+export { validateMesh } from './parts/validateMesh.ts';
+export { gnomonLaidFlat } from './parts/gnomonLaidFlat.ts';
+export { gnomonSolid } from './parts/gnomonSolid.ts';
+export { wedgeSolid, WEDGE_MAX_TILT_DEG, type WedgePart } from './parts/wedgeSolid.ts';
+export { partsPlan, type PartsPlan } from './parts/partsPlan.ts';
+export { dialGnomon, dialWedge, gnomonOnPlate, faceToWedge, mapMesh } from './parts/dialParts.ts';
+export { bodySolid } from './parts/bodySolid.ts';
+export { MATERIAL_DENSITIES, materialDensity, isFilament, type MaterialDensity } from './parts/materials.ts';
+export { partMass, totalMass, type PartMass } from './parts/partMass.ts';
+export { filamentUse, type FilamentUse } from './parts/filamentUse.ts';
+export { fitsBed, type SplitPart } from './parts/splitForBed.ts';
+export { printedPlate, printedWedge, fitToBed } from './parts/printedParts.ts';
+export { sheetPlateVolumeMm3 } from './parts/sheetPlateVolume.ts';
+
+export { dialFrame, toDialFrame } from './shadow/dialFrame.ts';
+export { gnomonForLayout } from './shadow/gnomonForLayout.ts';
+export { styleEdges } from './shadow/styleEdges.ts';
+export { shadowOnLine } from './shadow/castShadow.ts';
+export { shadowOnFace } from './shadow/shadowOnFace.ts';
+export { planarFaceVector, planarShadowOnFace } from './shadow/planarShadowOnFace.ts';
+export { marksFromPlate, type PlateLine } from './shadow/marksFromPlate.ts';
+export { checkDial, isFaceLit, type MarkCheck, type CheckResult } from './shadow/checkDial.ts';
+export { checkPlanar, type PlanarCheckResult } from './shadow/checkPlanar.ts';
+export { planarMarksFromPlate } from './shadow/planarMarksFromPlate.ts';
+
+export type { AssemblyPartName, PictureItem } from './assembly/assemblyTypes.ts';
+export { placeAssembly, faceToWorld } from './assembly/placeAssembly.ts';
+export { defaultPictureDate, sunForPicture } from './assembly/sunForPicture.ts';
+export { projectToPicture, viewAssembly, type AssemblyPicture } from './assembly/viewAssembly.ts';
+
+export type { PartPlacement } from './stand/standTypes.ts';
+export { METRIC_SIZES } from './stand/metricFasteners.ts';
+export { mountingFixings } from './stand/mountingFixings.ts';
+export { flatStand, type SizedStand } from './stand/flatStand.ts';
+export { standSolid } from './stand/standSolid.ts';
+export { fastenerTable, wedgeFastenerRows, type FastenerRow } from './stand/fastenerTable.ts';
+export { pieceRows, type PlacedPiece } from './stand/pieceRows.ts';
+export { sheetPartAreaMm2 } from './stand/sheetPartAreaMm2.ts';
+
+export { faceOrientationOf, layoutPlanar, type LeftOutHour, type PlanarGnomonLayout, type PlanarLayout } from './planar/layoutPlanar.ts';
+export type { FinEdge } from './planar/planarTypes.ts';
+export type { FaceType } from './spec/sections/faceSection.ts';
+export { planarPlateDrawing } from './planar/planarPlateDrawing.ts';
+export { planarGnomonSolid, type PlanarGnomonPart } from './planar/planarGnomonSolid.ts';
+export { planarInstallSheet, type PlanarInstallSheet } from './planar/planarInstallSheet.ts';
+export { wallDeclinationFromShadow, type ShadowReading } from './planar/wallDeclinationFromShadow.ts';
+export { wallMount, WALL_MOUNT_RIM_MM, WALL_ANCHOR_HOLE_MM, type WallMountFixing } from './planar/wallMount.ts';

@@ -1,8 +1,10 @@
 import { createHash } from 'node:crypto';
-import type { DialSpec } from '@umbrafab/geometry';
+import { faceOrientationOf, type DialSpec } from '@umbrafab/geometry';
+import { toSvg, type SvgOptions } from '@umbrafab/fabricate';
 import { buildContext } from '../buildFiles.ts';
 import type { BuildContext } from '../outputs/outputTypes.ts';
-import { plateOutputs } from '../outputs/plateOutputs.ts';
+import { plateOutputs, previewSvgOptions } from '../outputs/plateOutputs.ts';
+import { planarContext, planarPreviewSvgOptions, type PlanarContext } from '../planarViews.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import type { FullBuilder } from './fullBuilder.ts';
 
@@ -11,12 +13,22 @@ export interface CachedBuild {
   /** short content id: the same validated spec always gets the same id */
   readonly id: string;
   readonly spec: DialSpec;
-  /** the layout and plate drawing every producer reads (buildContext) */
-  readonly ctx: BuildContext;
-  /** preview.svg exactly as `umbrafab build` writes it (the plate producer on the same context) */
+  /** the layout and plate drawing: the polar plate's (buildContext, what every producer reads) or a planar face's (planarContext) */
+  readonly ctx: PageContext;
+  /** preview.svg exactly as `umbrafab build` writes it (the plate producer on the same context, or the planar build's writer) */
   readonly previewSvg: string;
-  /** every file of `umbrafab build` for this spec (buildFiles, in the builder's worker), built once on first call */
+  /** how preview.svg was drawn, for `previewFrame` */
+  readonly previewOptions: SvgOptions;
+  /** every file of `umbrafab build` for this spec (buildAnyFiles, in the builder's worker), built once on first call */
   readonly full: () => Promise<readonly OutputFile[]>;
+}
+
+/** The geometry the page's views read: the polar plate's, or a horizontal, wall, meridian or equatorial face's. */
+export type PageContext = BuildContext | PlanarContext;
+
+/** Is this a planar face's context (a spec with a non-polar `face.type`)? */
+export function isPlanarContext(ctx: PageContext): ctx is PlanarContext {
+  return 'kind' in ctx.layout && ctx.layout.kind === 'planar';
 }
 
 /** Most bytes of finished full builds the page server keeps for downloads (the newest build's are always kept). */
@@ -58,15 +70,14 @@ export function buildCache(builder: FullBuilder, size = 12, maxFileBytes = MAX_C
         return hit;
       }
       builder.warm();
-      const ctx = buildContext(spec);
-      const plate = await plateOutputs(ctx);
-      const svg = plate.files.find((f) => f.name === 'preview.svg');
+      const { ctx, previewSvg, previewOptions } = await faceViews(spec);
       let full: Promise<readonly OutputFile[]> | undefined;
       const entry: CachedBuild = {
         id,
         spec,
         ctx,
-        previewSvg: svg ? new TextDecoder().decode(svg.bytes) : '',
+        previewSvg,
+        previewOptions,
         full: () =>
           (full ??= builder.build(spec).then((files) => {
             hold(id, files, () => (full = undefined));
@@ -88,6 +99,23 @@ export function buildCache(builder: FullBuilder, size = 12, maxFileBytes = MAX_C
 }
 
 export type BuildCache = ReturnType<typeof buildCache>;
+
+/**
+ * The face's geometry and preview.svg as `umbrafab build` draws them: the
+ * polar plate through the plate producer, any other face through the
+ * planar build's writer and options (`buildAnyFiles` picks the same way).
+ */
+async function faceViews(spec: DialSpec): Promise<{ ctx: PageContext; previewSvg: string; previewOptions: SvgOptions }> {
+  if (faceOrientationOf(spec)) {
+    const ctx = planarContext(spec);
+    const previewOptions = planarPreviewSvgOptions(ctx);
+    return { ctx, previewSvg: toSvg(ctx.drawing, previewOptions), previewOptions };
+  }
+  const ctx = buildContext(spec);
+  const plate = await plateOutputs(ctx);
+  const svg = plate.files.find((f) => f.name === 'preview.svg');
+  return { ctx, previewSvg: svg ? new TextDecoder().decode(svg.bytes) : '', previewOptions: previewSvgOptions(ctx) };
+}
 
 /** sha-256 of the validated spec's JSON, first 16 hex digits. */
 export function specId(spec: DialSpec): string {

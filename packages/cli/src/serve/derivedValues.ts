@@ -17,7 +17,7 @@ export interface DerivedValue {
  * them back, so an unchanged form builds exactly what the file builds.
  * @example derivedValues(spec, layout)['process.kerf'] // { value: 0.9, follows: ['process.method'], rule: '…' } for waterjet
  */
-export function derivedValues(spec: DialSpec, layout?: DialLayout): Record<string, DerivedValue> {
+export function derivedValues(spec: DialSpec, layout?: Pick<DialLayout, 'spec' | 'hemisphere'>): Record<string, DerivedValue> {
   const out: Record<string, DerivedValue> = {};
   const material = spec.plate.material as (typeof MATERIAL_NAMES)[number];
   const preset = (MATERIAL_NAMES as readonly string[]).includes(material) ? (MATERIAL_PRESETS[material] as unknown as Record<string, number>) : undefined;

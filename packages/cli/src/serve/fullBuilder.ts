@@ -1,6 +1,6 @@
 import { Worker } from 'node:worker_threads';
 import type { DialSpec } from '@umbrafab/geometry';
-import { buildFiles } from '../buildFiles.ts';
+import { buildAnyFiles } from '../buildFiles.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 
 /** How long the build worker stays up with nothing to do, ms: then it stops and its memory goes back to the system. */
@@ -17,7 +17,7 @@ export interface FullBuilder {
 }
 
 /**
- * Full builds (`buildFiles`) in one worker thread, one job at a time, so the
+ * Full builds (`buildAnyFiles`, as `umbrafab build`: the polar plate or any other face) in one worker thread, one job at a time, so the
  * server keeps answering the page meanwhile. The worker loads the TypeScript
  * sources through tsx's loader, as bin/umbrafab.js does. If the worker
  * cannot start, builds run on the main thread instead (same code, same bytes,
@@ -60,7 +60,7 @@ export function fullBuilder(options: { readonly idleMs?: number } = {}): FullBui
         // The worker could not load or crashed: finish its jobs here, and run later ones here too.
         broken = true;
         worker = undefined;
-        for (const p of waiting.values()) buildFiles(p.spec).then((r) => p.ok(r.files), p.fail);
+        for (const p of waiting.values()) buildAnyFiles(p.spec).then((r) => p.ok(r.files), p.fail);
         waiting.clear();
       });
       worker = w;
@@ -79,7 +79,7 @@ export function fullBuilder(options: { readonly idleMs?: number } = {}): FullBui
     build: (spec) => {
       clearTimeout(idle);
       const w = start();
-      if (!w) return buildFiles(spec).then((r) => r.files);
+      if (!w) return buildAnyFiles(spec).then((r) => r.files);
       const job = ++next;
       return new Promise((ok, fail) => {
         waiting.set(job, { spec, ok, fail });

@@ -6,20 +6,19 @@ import { basename, dirname } from 'node:path';
 import { isSpecError, parseSpec, type DialSpec } from '@umbrafab/geometry';
 import { writeFilesAtomic } from '../writeFilesAtomic.ts';
 import { isLoopbackHost, type HostCheck } from './bindPolicy.ts';
-import type { BuildCache } from './buildCache.ts';
+import { isPlanarContext, type BuildCache } from './buildCache.ts';
 import { formValuesToSpec, specToFormValues, type FormValue } from './formValues.ts';
 import { HttpError } from './httpError.ts';
 import { plateToPreview, previewFrame } from '@umbrafab/fabricate';
-import { previewSvgOptions } from '../outputs/plateOutputs.ts';
 import { BodyAbortedError, MAX_BODY_BYTES, readJsonBody } from './readJsonBody.ts';
-import { sceneMeshes } from './sceneMeshes.ts';
+import { planarSceneMeshes, sceneMeshes } from './sceneMeshes.ts';
 import { specFields } from './specFields.ts';
 import { parseSpecText, readSpecText } from '../readSpec.ts';
 import { starterSpecYaml } from '../starterSpec.ts';
 import { derivedValues, type DerivedValue } from './derivedValues.ts';
 import { describeChange, editSpecText } from './editSpecText.ts';
 import { STATIC_ASSETS } from './staticAssets.ts';
-import { summaryRows } from './summaryRows.ts';
+import { planarSummaryRows, summaryRows } from './summaryRows.ts';
 import { sunView, type SunQuery } from './sunView.ts';
 
 /** Everything a request may use; fixed when the server starts. */
@@ -65,7 +64,7 @@ let pageCsp: string | undefined;
  * - GET  /api/setup: the form's fields (from the spec schema), its first values, the save target;
  * - POST /api/view {fields}: validate with parseSpec (422 with the CLI's message when invalid) and return the views:
  *   preview.svg as the build writes it, the numbers, the placed parts for 3D;
- * - GET  /api/files/<id>: the full build's file list (buildFiles, run once per spec on first request);
+ * - GET  /api/files/<id>: the full build's file list (buildAnyFiles, as `umbrafab build`; run once per spec on first request);
  * - GET  /api/files/<id>/<name>: one file of that build, its bytes exactly;
  * - POST /api/sun {fields, date, time, kind}: the sun and the gnomon's shadow;
  * - POST /api/save {fields, preview?}: edit the spec file given on the command line, only the changed fields (preview: list them, write nothing).
@@ -178,16 +177,17 @@ function specFrom(fields: Record<string, FormValue>): DialSpec {
 async function view(ctx: ServeContext, body: unknown) {
   const spec = specFrom(fieldsOf(body, ['fields']));
   const b = await ctx.builds.views(spec);
-  const { layout } = b.ctx;
+  const c = b.ctx;
+  const planar = isPlanarContext(c);
   return {
     ok: true,
     id: b.id,
     svg: b.previewSvg,
-    frame: previewFrame(b.ctx.drawing, previewSvgOptions(b.ctx)),
-    summary: summaryRows(layout),
-    derived: derivedValues(spec, layout),
-    notes: layout.notes,
-    scene: sceneMeshes(layout),
+    frame: previewFrame(c.drawing, b.previewOptions),
+    summary: planar ? planarSummaryRows(c.layout) : summaryRows(c.layout),
+    derived: derivedValues(spec, c.layout),
+    notes: c.layout.notes,
+    scene: planar ? planarSceneMeshes(c.layout) : sceneMeshes(c.layout),
     filesUrl: `/api/files/${b.id}`,
   };
 }
@@ -205,7 +205,7 @@ async function sun(ctx: ServeContext, body: unknown) {
   const b = await ctx.builds.views(specFrom(fields));
   const { layout } = b.ctx;
   const view = sunView(layout, { date: q.date, time: q.time, kind: q.kind });
-  const frame = previewFrame(b.ctx.drawing, previewSvgOptions(b.ctx));
+  const frame = previewFrame(b.ctx.drawing, b.previewOptions);
   const { plate } = layout;
   const shadowPreview = view.shadowFace.map((poly) => poly.map(([x, y]) => plateToPreview(frame, [x + plate.substyleX, y + plate.faceOriginY])));
   return { ok: true, id: b.id, sun: view, shadowPreview };

@@ -1,4 +1,4 @@
-import { countMarks, markCountText, type DialLayout } from '@umbrafab/geometry';
+import { countMarks, markCountText, type DialLayout, type PlanarLayout } from '@umbrafab/geometry';
 
 /** One line of the page's numbers panel: already formatted, nothing left to compute in the browser. */
 export interface SummaryRow {
@@ -36,4 +36,30 @@ export function summaryRows(layout: DialLayout): SummaryRow[] {
     { key: 'cut', label: 'process', value: `${spec.process.method}, kerf ${spec.process.kerf} mm` },
   );
   return rows;
+}
+
+/**
+ * The key numbers of a horizontal, wall, meridian or equatorial face, read
+ * from its layout (the values its report.json carries): face, style height,
+ * plate, gnomon, mark count, time correction.
+ */
+export function planarSummaryRows(layout: PlanarLayout): SummaryRow[] {
+  const { plate, gnomon, time, spec } = layout;
+  const f = spec.face!;
+  const orientation =
+    layout.faceType === 'vertical' ? `, declination ${f.wallDeclination}°${f.reclination ? `, reclination ${f.reclination}°` : ''}` : layout.faceType === 'meridian' ? `, facing ${f.facing}` : layout.faceType === 'equatorial' ? `, ${f.side} side` : '';
+  return [
+    { key: 'face', label: 'face', value: `${layout.faceType}${orientation}` },
+    { key: 'styleHeight', label: 'style height over the face', value: `${Number(gnomon.styleHeightDeg.toFixed(3))}°` },
+    { key: 'substyle', label: 'substyle hour angle', value: `${Number(layout.substyleHourAngleDeg.toFixed(3))}°` },
+    { key: 'plate', label: 'plate', value: `${mm(plate.widthMm)} × ${mm(plate.lengthMm)} × ${mm(plate.thicknessMm)}` },
+    { key: 'gnomon', label: `gnomon (${gnomon.kind}) height × thickness`, value: `${mm(gnomon.heightMm)} × ${mm(gnomon.thicknessMm)}` },
+    { key: 'hemisphere', label: 'hemisphere', value: layout.hemisphere },
+    { key: 'marks', label: 'marks', value: markCountText(countMarks(layout.marks)) },
+    ...(layout.leftOut.length ? [{ key: 'leftOut', label: 'hours left out', value: layout.leftOut.map((h) => h.label).join(', ') }] : []),
+    { key: 'reads', label: 'reads', value: time.reads === 'solar' ? 'apparent solar time' : 'standard time' },
+    { key: 'meridian', label: 'standard meridian', value: `${time.standardMeridianDeg}°` },
+    { key: 'longitudeCorrection', label: 'longitude correction', value: `${Number(time.longitudeCorrectionMin.toFixed(2))} min` },
+    { key: 'cut', label: 'process', value: `${spec.process.method}, kerf ${spec.process.kerf} mm` },
+  ];
 }

@@ -11,7 +11,7 @@ import {
   type Vec2,
   type Vec3,
 } from '@umbrafab/geometry';
-import { faceShadowPolygons, sunInFaceFrame } from './shadowSource.ts';
+import { faceShadowPolygons, sunInFaceFrame, type SunLayout } from './shadowSource.ts';
 
 /** Which clock the page's time control reads. */
 export type TimeKind = 'apparent' | 'clock';
@@ -58,7 +58,7 @@ const tracks = new Map<string, SunTrack>();
  * the face.
  * @throws SpecError naming `date` or `time` for a bad value
  */
-export function sunView(layout: DialLayout, query: SunQuery): SunView {
+export function sunView(layout: SunLayout, query: SunQuery): SunView {
   const day = parseLocalDate(query.date, 'date');
   const minutes = parseClock('time', query.time, { seconds: true });
   if (query.kind !== 'apparent' && query.kind !== 'clock') throw new SpecError('time kind', query.kind, 'allowed: "apparent" or "clock"');

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { runAdmesh } from '../../../../test/helpers/admesh.ts';
 import { expectClose } from '../../../../test/helpers/closeTo.ts';
-import { gnomonSolid, meshVolumeMm3, validateMesh, wedgeSolid, type Mesh } from '../../../geometry/src/parts/index.ts';
+import { gnomonSolid, meshVolumeMm3, validateMesh, wedgeSolid, type Mesh } from '@umbrafab/geometry';
 import { toStl } from './toStl.ts';
 
 // Outside check: Debian's admesh reads each STL and runs its full default

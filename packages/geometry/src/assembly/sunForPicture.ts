@@ -31,7 +31,7 @@ export interface PictureSun {
 }
 
 /** The default picture date: the local summer solstice (June 21 north, December 21 south). */
-export function defaultPictureDate(layout: DialLayout): string {
+export function defaultPictureDate(layout: Pick<DialLayout, 'spec' | 'hemisphere'>): string {
   return `${layout.spec.calendar.year}-${layout.hemisphere === 'north' ? '06' : '12'}-21`;
 }
 

@@ -1,3 +1,0 @@
-export * from './toPng.ts';
-export * from './toAssemblySvg.ts';
-export * from './fitPixelBudget.ts';

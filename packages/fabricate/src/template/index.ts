@@ -1,2 +1,0 @@
-export * from './templatePages.ts';
-export * from './toTemplatePdf.ts';
