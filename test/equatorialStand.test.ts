@@ -241,7 +241,7 @@ describe.each(cases)('equatorial stand: $name', ({ name, raw }) => {
     expect(md).toMatch(/spirit level/);
     expect(md).toMatch(new RegExp(`true ${e > 0 ? 'north' : 'south'}, not magnetic`));
     expect(md).toMatch(new RegExp(`rod's upper end pointing up toward true ${e > 0 ? 'north' : 'south'}`));
-    const report = result.report as { stand: { fasteners: { use: string; count: number }[]; fixings: unknown[]; faceTiltDeg: number } };
+    const report = result.report as unknown as { stand: { fasteners: { use: string; count: number }[]; fixings: unknown[]; faceTiltDeg: number } };
     expect(report.stand.fasteners.map((f) => f.use)).toEqual(['plate to seat rails', 'under each seat rail', 'under each seat rail', 'rod on each side of the hub', 'feet to the ground']);
     expect(report.stand.fixings.length).toBe(layout.plate.holes.length - 1);
     if (print) return;

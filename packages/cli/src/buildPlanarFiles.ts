@@ -22,6 +22,7 @@ import { cutPartFiles } from './outputs/cutParts.ts';
 import { planarStandFiles } from './outputs/planarStandOutputs.ts';
 import { utf8 } from './outputs/outputTypes.ts';
 import { planarExtraOutputs } from './outputs/planarExtras.ts';
+import type { PlanarReport, WallMountSection } from './outputs/planarReport.ts';
 import { planarPreviewSvgOptions } from './planarViews.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
@@ -30,7 +31,7 @@ export interface PlanarBuildResult {
   readonly layout: PlanarLayout;
   readonly drawing: PlateDrawing;
   readonly files: readonly OutputFile[];
-  readonly report: Record<string, unknown>;
+  readonly report: PlanarReport;
 }
 
 /**
@@ -79,7 +80,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout), extras.templateGuide)) });
 
   const names = [...files.map((f) => f.name), 'report.json'];
-  const report = {
+  const report: PlanarReport = {
     generator,
     spec,
     face: {
@@ -97,6 +98,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
       widthMm: layout.plate.widthMm,
       lengthMm: layout.plate.lengthMm,
       thicknessMm: layout.plate.thicknessMm,
+      cornerRadiusMm: layout.plate.cornerRadiusMm,
       substyleX: layout.plate.substyleX,
       faceOriginY: layout.plate.faceOriginY,
       holes: layout.plate.holes.map((c) => ({ xMm: c.cx, yMm: c.cy, diameterMm: 2 * c.radiusMm })),
@@ -124,11 +126,11 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
  * origin); its report section lists the fixings, anchors and fasteners.
  * Nothing for faces that do not hang on a wall.
  */
-async function wallMountFiles(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing): Promise<{ files: OutputFile[]; report?: Record<string, unknown> }> {
+async function wallMountFiles(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing): Promise<{ files: OutputFile[]; report?: WallMountSection }> {
   const m = wallMount(layout);
   if (!m) return { files: [] };
   const files: OutputFile[] = [];
-  let cut: Record<string, unknown> | undefined;
+  let cut: WallMountSection['files']['dxf'];
   if (spec.process.method !== 'print') {
     assertToolFits([m.part], spec.process.kerf);
     const c = await cutPartFiles({ spec, drawing }, m.part);
