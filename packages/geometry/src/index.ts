@@ -99,6 +99,6 @@ export { planarGnomonSolid, type PlanarGnomonPart } from './planar/planarGnomonS
 export { planarInstallSheet, type PlanarInstallSheet } from './planar/planarInstallSheet.ts';
 export { wallDeclinationFromShadow, type ShadowReading } from './planar/wallDeclinationFromShadow.ts';
 export { wallMount, WALL_MOUNT_RIM_MM, WALL_ANCHOR_HOLE_MM, type WallMountFixing } from './planar/wallMount.ts';
-export { equatorialStand, equatorialStandApplies, type EquatorialStand } from './planar/equatorialStand.ts';
+export { equatorialStand, equatorialStandApplies, type EquatorialStand, type EquatorialFixing } from './planar/equatorialStand.ts';
 export { standUnionSolid, PRINT_FUSE_MM } from './stand/standUnionSolid.ts';
 export { placePoint } from './stand/placeStandPart.ts';

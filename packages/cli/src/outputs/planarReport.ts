@@ -3,6 +3,7 @@ import type { EngravingReport } from '@umbrafab/fabricate';
 import type { CutFileSection } from './cutParts.ts';
 import type { MeshFigures } from './partsOutputs.ts';
 import type { PlanarExtras } from './planarExtras.ts';
+import type { EquatorialStandSection } from './planarStandOutputs.ts';
 import type { PlateSection } from './plateOutputs.ts';
 import type { ReportHead, ReportTail } from './report.ts';
 
@@ -34,6 +35,8 @@ export interface PlanarSections {
   readonly parts?: { readonly gnomonDxf: CutFileSection };
   /** a wall face's mounting plate (mount.dxf, mount.stl); absent for faces that do not hang on a wall */
   readonly mount?: WallMountSection;
+  /** an equatorial face's stand (stand.dxf, stand.stl); absent for other faces */
+  readonly stand?: EquatorialStandSection;
   /** how the dial reads and the corrections to clock time */
   readonly time: TimeLayout;
   readonly engraving: EngravingReport;

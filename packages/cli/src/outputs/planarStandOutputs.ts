@@ -10,12 +10,61 @@ import {
   standSolid,
   standUnionSolid,
   type DialSpec,
+  type EquatorialFixing,
+  type FastenerRow,
   type PlanarLayout,
+  type Vec3,
 } from '@umbrafab/geometry';
 import { assertToolFits, piecesDrawing, stlHeader, toDxf, toStl } from '@umbrafab/fabricate';
 import { STAND_PART_LABELS } from './standOutputs.ts';
 import { utf8 } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
+import type { MeshFigures } from './partsOutputs.ts';
+
+/** report.json `stand` of an equatorial face: the stand that holds the plate square to the Earth's axis and the rod on it. */
+export interface EquatorialStandSection {
+  /** flat-pack (cut from sheet, bolted) or printed (one fused solid) */
+  readonly kind: 'flat-pack' | 'printed';
+  readonly material: string;
+  /** sheet stock thickness, mm */
+  readonly thicknessMm: number;
+  /** slot clearance over each tab, per side, mm */
+  readonly clearancePerSideMm: number;
+  /** the face's tilt from level as placed, degrees (90° − |latitude|) */
+  readonly faceTiltDeg: number;
+  /** the rod's axis as placed, unit vector in the site frame (x east, y north, z up) */
+  readonly rodAxisEnu: readonly number[];
+  /** the rod's elevation above the horizon as placed, degrees (|latitude|) */
+  readonly rodElevationDeg: number;
+  /** the face origin (the rod's point on the face) in the site frame, mm */
+  readonly faceOriginMm: readonly number[];
+  /** overall height above the ground, mm */
+  readonly heightMm: number;
+  /** the feet's footprint, across and along the meridian, mm */
+  readonly footprintMm: { readonly acrossMm: number; readonly alongMm: number };
+  /** height of the plate's lowest point above the ground, mm */
+  readonly plateLowestMm: number;
+  /** distance between the two cheeks, mm */
+  readonly cheekSpacingMm: number;
+  /** the seat rails under the plate: lower edge (plate frame) and width, mm */
+  readonly rails: readonly { readonly lowerEdgeMm: number; readonly widthMm: number }[];
+  /** the rod hub: how far behind the face it holds the rod, and its width, mm */
+  readonly hub: { readonly depthBehindFaceMm: number; readonly widthMm: number };
+  /** each flat part: bounding size, area in mm², its holes and slots */
+  readonly parts: readonly { readonly name: string; readonly label: string; readonly quantity: number; readonly sizeMm: readonly number[]; readonly areaMm2: number; readonly holes: number; readonly slots: number }[];
+  /** tab-and-slot joints between the parts */
+  readonly joints: number;
+  /** each plate hole and the rail hole under it */
+  readonly fixings: readonly EquatorialFixing[];
+  /** what to buy: screws, washers, nuts, set collars, anchors */
+  readonly fasteners: readonly FastenerRow[];
+  readonly files: {
+    /** stand.dxf (sheet processes) */
+    readonly dxf?: { readonly pieces: number; readonly layers: readonly string[]; readonly nominal: true };
+    /** stand.stl: assembled parts (sheet) or the one printed solid */
+    readonly stl?: MeshFigures & { readonly shells: number };
+  };
+}
 
 /** Shop names of the equatorial stand's parts (stand.dxf labels, report). */
 export const EQUATORIAL_STAND_LABELS: Readonly<Record<string, string>> = {
@@ -41,7 +90,7 @@ const r6 = (x: number) => Math.round(x * 1e6) / 1e6;
  * the rod's axis and the face's tilt as placed. Nothing for other faces,
  * or beyond the latitudes the stand is built for.
  */
-export async function planarStandFiles(spec: DialSpec, layout: PlanarLayout): Promise<{ files: OutputFile[]; report?: Record<string, unknown> }> {
+export async function planarStandFiles(spec: DialSpec, layout: PlanarLayout): Promise<{ files: OutputFile[]; report?: EquatorialStandSection }> {
   if (!equatorialStandApplies(layout)) return { files: [] };
   const write = spec.parts.write;
   const print = spec.process.method === 'print';
@@ -54,7 +103,7 @@ export async function planarStandFiles(spec: DialSpec, layout: PlanarLayout): Pr
   const lat = spec.site.latitude;
   const d = stand.dims;
   const latText = `${Math.abs(lat).toFixed(2)} deg ${lat >= 0 ? 'N' : 'S'}`;
-  const out: Record<string, unknown> = {};
+  const out: { dxf?: EquatorialStandSection['files']['dxf']; stl?: EquatorialStandSection['files']['stl'] } = {};
   if (wantDxf) {
     const pieces = pieceRows(stand.parts);
     const notes = [
