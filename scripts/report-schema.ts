@@ -8,8 +8,10 @@
  * type is inferred from its zod schema, the sections are interfaces), and
  * this walk turns that structure into JSON Schema: objects with every
  * property (required unless optional, no others allowed), arrays and tuples,
- * string/number/boolean and literal unions; each property's doc comment
- * becomes its description.
+ * string/number/boolean and literal unions, unions of objects as `anyOf`
+ * (the polar and the planar report); each property's doc comment becomes its
+ * description. A named object type used more than once (the spec, a cut
+ * file's section) is written once under `$defs` and referred to by `$ref`.
  */
 import { writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
@@ -37,17 +39,49 @@ export function reportSchemaText(): string {
   if (!source) throw new Error(`cannot read ${REPORT_TYPES}`);
   const alias = source.statements.find((s): s is ts.TypeAliasDeclaration => ts.isTypeAliasDeclaration(s) && s.name.text === 'Report');
   if (!alias) throw new Error('report.ts declares no type Report');
-  const root = toSchema(checker, checker.getTypeAtLocation(alias.name), new Set(), 'report');
+  const type = checker.getTypeAtLocation(alias.name);
+  // First walk: which named object types occur more than once (the polar and planar reports share the spec, cut sections, …).
+  const uses = new Map<ts.Type, number>();
+  toSchema({ checker, uses }, type, new Set(), 'report');
+  const shared = new Map<ts.Type, string>();
+  for (const [t, n] of uses) if (n > 1) shared.set(t, defName(checker, t, shared));
+  const walk = { checker, shared, defs: {} as Record<string, Schema> };
+  const root = toSchema(walk, type, new Set(), 'report');
   const schema: Schema = {
     $schema: 'https://json-schema.org/draft/2020-12/schema',
     title: 'umbrafab report.json',
     description: docOf(checker, checker.getSymbolAtLocation(alias.name)),
     ...root,
+    ...(Object.keys(walk.defs).length ? { $defs: Object.fromEntries(Object.entries(walk.defs).sort(([a], [b]) => a.localeCompare(b))) } : {}),
   };
   return `${JSON.stringify(schema, null, 2)}\n`;
 }
 
-function toSchema(checker: ts.TypeChecker, type: ts.Type, seen: ReadonlySet<ts.Type>, where: string): Schema {
+/**
+ * One walk over the type: counting named object types (`uses`), or writing
+ * the schema with the `shared` ones (used more than once) as `$ref`s into
+ * `defs`, each written once.
+ */
+type Walk =
+  | { readonly checker: ts.TypeChecker; readonly uses: Map<ts.Type, number> }
+  | { readonly checker: ts.TypeChecker; readonly shared: ReadonlyMap<ts.Type, string>; readonly defs: Record<string, Schema> };
+
+/** An interface's or type alias's name, for a shared type's `$defs` entry (made unique). */
+function defName(checker: ts.TypeChecker, type: ts.Type, taken: ReadonlyMap<ts.Type, string>): string {
+  const base = (type.aliasSymbol ?? type.getSymbol())?.getName().replace(/^__\w+$/, '') || checker.typeToString(type).replace(/\W+/g, '') || 'object';
+  const names = new Set(taken.values());
+  let name = base;
+  for (let i = 2; names.has(name); i++) name = `${base}${i}`;
+  return name;
+}
+
+function isNamedObject(type: ts.Type): boolean {
+  const name = (type.aliasSymbol ?? type.getSymbol())?.getName();
+  return name !== undefined && !name.startsWith('__') && name !== 'Array' && name !== 'ReadonlyArray';
+}
+
+function toSchema(walk: Walk, type: ts.Type, seen: ReadonlySet<ts.Type>, where: string): Schema {
+  const checker = walk.checker;
   const f = type.flags;
   if (f & ts.TypeFlags.Any || f & ts.TypeFlags.Unknown) return {};
   if (f & ts.TypeFlags.StringLiteral) return { const: (type as ts.StringLiteralType).value };
@@ -60,37 +94,56 @@ function toSchema(checker: ts.TypeChecker, type: ts.Type, seen: ReadonlySet<ts.T
   if (type.isUnion()) {
     const parts = type.types.filter((t) => !(t.flags & ts.TypeFlags.Undefined));
     if (parts.every((t) => t.flags & ts.TypeFlags.BooleanLiteral)) return { type: 'boolean' };
-    if (parts.length === 1) return toSchema(checker, parts[0], seen, where);
+    if (parts.length === 1) return toSchema(walk, parts[0], seen, where);
     if (parts.every((t) => t.isStringLiteral())) return { enum: parts.map((t) => (t as ts.StringLiteralType).value) };
-    return { anyOf: parts.map((t) => toSchema(checker, t, seen, where)) };
+    return { anyOf: parts.map((t) => toSchema(walk, t, seen, where)) };
   }
   if (seen.has(type)) throw new Error(`${where}: a recursive type cannot be written as a plain schema`);
   const inner = new Set(seen).add(type);
   if (checker.isTupleType(type)) {
-    const items = checker.getTypeArguments(type as ts.TypeReference).map((t, i) => toSchema(checker, t, inner, `${where}[${i}]`));
+    const items = checker.getTypeArguments(type as ts.TypeReference).map((t, i) => toSchema(walk, t, inner, `${where}[${i}]`));
     return { type: 'array', prefixItems: items, minItems: items.length, maxItems: items.length };
   }
   if (checker.isArrayType(type)) {
     const [item] = checker.getTypeArguments(type as ts.TypeReference);
-    return { type: 'array', items: toSchema(checker, item, inner, `${where}[]`) };
+    return { type: 'array', items: toSchema(walk, item, inner, `${where}[]`) };
   }
   if (f & ts.TypeFlags.Object || type.isIntersection()) {
-    const properties: Record<string, Schema> = {};
-    const required: string[] = [];
-    for (const p of checker.getPropertiesOfType(type)) {
-      const decl = p.valueDeclaration ?? p.declarations?.[0];
-      const pt = decl ? checker.getTypeOfSymbolAtLocation(p, decl) : checker.getTypeOfSymbol(p);
-      const description = docOf(checker, p);
-      properties[p.name] = { ...(description ? { description } : {}), ...toSchema(checker, pt, inner, `${where}.${p.name}`) };
-      if (!(p.flags & ts.SymbolFlags.Optional)) required.push(p.name);
+    if ('uses' in walk && isNamedObject(type)) {
+      const n = walk.uses.get(type) ?? 0;
+      walk.uses.set(type, n + 1);
+      if (n > 0) return {};
     }
-    const index = checker.getIndexInfosOfType(type);
-    if (index.length > 0 && Object.keys(properties).length === 0) {
-      return { type: 'object', additionalProperties: toSchema(checker, index[0].type, inner, `${where}[key]`) };
+    const shared = 'shared' in walk ? walk.shared.get(type) : undefined;
+    if (shared !== undefined && 'defs' in walk) {
+      if (!(shared in walk.defs)) {
+        walk.defs[shared] = {};
+        walk.defs[shared] = objectSchema(walk, type, inner, where);
+      }
+      return { $ref: `#/$defs/${shared}` };
     }
-    return { type: 'object', properties, required, additionalProperties: false };
+    return objectSchema(walk, type, inner, where);
   }
   throw new Error(`${where}: no JSON Schema for the type ${checker.typeToString(type)}`);
+}
+
+/** An object: every property (required unless optional, described by its doc comment), no others; or a map of one value type. */
+function objectSchema(walk: Walk, type: ts.Type, inner: ReadonlySet<ts.Type>, where: string): Schema {
+  const checker = walk.checker;
+  const properties: Record<string, Schema> = {};
+  const required: string[] = [];
+  for (const p of checker.getPropertiesOfType(type)) {
+    const decl = p.valueDeclaration ?? p.declarations?.[0];
+    const pt = decl ? checker.getTypeOfSymbolAtLocation(p, decl) : checker.getTypeOfSymbol(p);
+    const description = docOf(checker, p);
+    properties[p.name] = { ...(description ? { description } : {}), ...toSchema(walk, pt, inner, `${where}.${p.name}`) };
+    if (!(p.flags & ts.SymbolFlags.Optional)) required.push(p.name);
+  }
+  const index = checker.getIndexInfosOfType(type);
+  if (index.length > 0 && Object.keys(properties).length === 0) {
+    return { type: 'object', additionalProperties: toSchema(walk, index[0].type, inner, `${where}[key]`) };
+  }
+  return { type: 'object', properties, required, additionalProperties: false };
 }
 
 function docOf(checker: ts.TypeChecker, symbol: ts.Symbol | undefined): string {

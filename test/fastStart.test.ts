@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
+import { startServer } from '@umbrafab/cli';
 
 // The bin runs the plain-JavaScript build (packages/cli/dist/) and each
 // command loads only what its outputs need. What a child process loads is
@@ -130,6 +131,16 @@ describe('the bin loads only what a command needs', () => {
       const pdf = Buffer.from(await (await fetch(url + files.files.find((f) => f.name === 'template.pdf')!.url)).arrayBuffer());
       expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
       expect(pdf.equals(readFileSync(join(ROOT, 'fixtures/golden/demo/template.pdf')))).toBe(true);
+      // The page's script: build.mjs's bundle of src/serve/page/*.ts, the very bytes the server run from the sources bundles in memory.
+      const builtPage = Buffer.from(await (await fetch(`${url}/page.js`)).arrayBuffer());
+      const fromSources = await startServer({ specPath: join(ROOT, 'fixtures/demo.yaml'), port: 0, log: () => {} });
+      try {
+        const sourcePage = Buffer.from(await (await fetch(`${fromSources.url}page.js`)).arrayBuffer());
+        expect(builtPage.toString()).toContain('import * as THREE from "three";');
+        expect(builtPage.equals(sourcePage)).toBe(true);
+      } finally {
+        await fromSources.close();
+      }
     } finally {
       child.kill();
     }

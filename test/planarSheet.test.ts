@@ -4,7 +4,7 @@ import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
 import { parseSpec } from '@umbrafab/geometry';
-import { buildAnyFiles } from '@umbrafab/cli';
+import { buildAnyFiles, type PlanarReport } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 import { sheetCheck } from './helpers/sheetCheck.ts';
 
@@ -12,7 +12,6 @@ const ROOT = resolve(import.meta.dirname, '..');
 const FIXTURES = ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial', 'equatorial-lower'];
 const specOf = (name: string, patch: Record<string, unknown> = {}) => parseSpec({ ...parse(readFileSync(join(ROOT, `fixtures/planar/${name}.yaml`), 'utf8')), ...patch });
 
-type SheetReport = { file: string; widthMm: number; lengthMm: number; gapMm: number; edgeMm: number; pieces: { part: string }[]; otherStock: string[] };
 
 describe('sheet.dxf of every planar face: plate, sheet fin and wall mount nested on the stock', () => {
   for (const name of FIXTURES) {
@@ -20,7 +19,7 @@ describe('sheet.dxf of every planar face: plate, sheet fin and wall mount nested
       const spec = specOf(name);
       const built = await buildAnyFiles(spec);
       const names = built.files.map((f) => f.name);
-      const sheet = (built.report as { sheet: SheetReport }).sheet;
+      const sheet = (built.report as PlanarReport).sheet!;
       const dir = mkdtempSync(join(tmpdir(), 'umbrafab-psheet-'));
       const file = join(dir, sheet.file);
       writeFileSync(file, built.files.find((f) => f.name === sheet.file)!.bytes);

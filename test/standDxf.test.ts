@@ -3,10 +3,11 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { flatStand, parseSpec, pieceRows, type Vec2 } from '@umbrafab/geometry';
+import { flatStand, parseSpec, pieceRows } from '@umbrafab/geometry';
 import { buildFiles, parseSpecText } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 import { runAdmesh } from './helpers/admesh.ts';
+import { jointsInDxf } from './helpers/standJoints.ts';
 
 /**
  * stand.dxf and stand.stl read back by outside tools: ezdxf's audit (and
@@ -49,28 +50,7 @@ describe.each(cases)('stand.dxf and stand.stl: $name', ({ name, raw }) => {
     // The joints in the drawing's coordinates (each piece's first copy).
     const stand = flatStand(result.layout);
     const pieces = pieceRows(stand.parts);
-    const offset = (instance: string): Vec2 => {
-      const part = stand.instances.find((i) => i.id === instance)!.part;
-      return pieces.find((p) => p.part === part && p.copy === 1)!.offsetMm;
-    };
-    const partOf = (instance: string) => stand.parts.find((p) => p.name === stand.instances.find((i) => i.id === instance)!.part)!;
-    const joints = stand.joints.map((j) => {
-      const ring = partOf(j.tab.instance).outer.points;
-      const [r0, t0, , r1] = [0, 1, 2, 3].map((k) => ring[(j.tab.vertex + k) % ring.length]);
-      const o = offset(j.tab.instance);
-      const so = offset(j.slot.instance);
-      const d = Math.hypot(t0[0] - r0[0], t0[1] - r0[1]);
-      return {
-        r0: [r0[0] + o[0], r0[1] + o[1]],
-        r1: [r1[0] + o[0], r1[1] + o[1]],
-        out: [(t0[0] - r0[0]) / d, (t0[1] - r0[1]) / d],
-        slotCentre: [j.slot.centre[0] + so[0], j.slot.centre[1] + so[1]],
-        slotAxis: j.slot.axis,
-        tabThickness: partOf(j.tab.instance).thicknessMm,
-        slottedThickness: partOf(j.slot.instance).thicknessMm,
-        nominalLength: Math.hypot(r1[0] - r0[0], r1[1] - r0[1]),
-      };
-    });
+    const joints = jointsInDxf(stand, pieces);
     const jsonPath = join(dir, `${tag}-joints.json`);
     writeFileSync(jsonPath, JSON.stringify({ dxf: dxfPath, joints }));
     const fit = JSON.parse(execFileSync('/usr/bin/python3', [join(ROOT, 'test/helpers/stand_joint_fit.py'), jsonPath], { encoding: 'utf8' })) as {

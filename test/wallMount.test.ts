@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { layoutPlanar, METRIC_SIZES, parseSpec, wallMount, WALL_MOUNT_RIM_MM, type PlanarLayout } from '@umbrafab/geometry';
-import { buildAnyFiles, parseSpecText } from '@umbrafab/cli';
+import { buildAnyFiles, parseSpecText, type PlanarReport } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 import { runAdmesh } from './helpers/admesh.ts';
 
@@ -51,7 +51,8 @@ describe.each(['wall-declining', 'wall-reclining', 'meridian-east'])('wall mount
       expect(m!.radius!).toBeLessThan(h.radius!);
     }
     const outer = mountDump.entities.find((e) => e.type === 'LWPOLYLINE' && e.layer === 'CUT_PROFILE')!;
-    const report = result.report as { plate: { widthMm: number; lengthMm: number }; mount: { anchors: { xMm: number; yMm: number; diameterMm: number }[]; fixings: unknown[]; fasteners: { use: string; count: number; lengthMm: number }[]; widthMm: number; lengthMm: number } };
+    const planar = result.report as PlanarReport;
+    const report = { plate: planar.plate, mount: planar.mount! };
     const anchors = report.mount.anchors;
     for (const a of anchors) expect(mountHoles.some((c) => Math.hypot(c.center![0] - a.xMm, c.center![1] - a.yMm) < 1e-6 && Math.abs(2 * c.radius! - a.diameterMm) < 1e-6)).toBe(true);
     const job = join(dir, `${name}-fit.json`);

@@ -3,14 +3,14 @@ import { buildPlanarFiles, type PlanarBuildResult } from './buildPlanarFiles.ts'
 import { toReportJson } from '@umbrafab/fabricate';
 import { PRODUCERS, START_ORDER } from './outputs/index.ts';
 import { utf8, type BuildContext, type ProducerResult } from './outputs/outputTypes.ts';
-import type { Report } from './outputs/report.ts';
+import type { PolarReport } from './outputs/report.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
 /** Everything one build produces, in memory (no I/O): the CLI writes it, other front ends serve it. */
 export interface BuildResult {
   readonly layout: DialLayout;
   readonly files: readonly OutputFile[];
-  readonly report: Report;
+  readonly report: PolarReport;
   /** the layout's notes, then the producers' (also in report.json) */
   readonly notes: readonly string[];
 }
@@ -25,7 +25,7 @@ export const GENERATOR = 'umbrafab 0.1.0';
 export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContext(spec)): Promise<BuildResult> {
   const { layout } = ctx;
   const files: OutputFile[] = [];
-  const sections: Partial<Report> = {};
+  const sections: Partial<PolarReport> = {};
   const notes: string[] = [...layout.notes];
   // Producers whose work runs mostly on worker threads (PNG rendering) start
   // first, so that their threads overlap the others' work on this one; the
@@ -54,7 +54,7 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   if (dup) throw new Error(`two producers both write ${dup}`);
   // Each producer's sections are typed beside it; together they make the
   // Report (test/reportSchema.test.ts holds every build to its schema).
-  const report = { generator: GENERATOR, spec, ...sections, notes, files: names } as Report;
+  const report = { generator: GENERATOR, spec, ...sections, notes, files: names } as PolarReport;
   files.push({ name: 'report.json', bytes: utf8(toReportJson(report)) });
   return { layout, files, report, notes };
 }

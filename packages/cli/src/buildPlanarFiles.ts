@@ -19,8 +19,10 @@ import {
 } from '@umbrafab/geometry';
 import { assertToolFits, engraveFromSpec, stlHeader, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
 import { cutPartFiles } from './outputs/cutParts.ts';
+import { planarStandFiles } from './outputs/planarStandOutputs.ts';
 import { utf8 } from './outputs/outputTypes.ts';
 import { planarExtraOutputs } from './outputs/planarExtras.ts';
+import type { PlanarReport, WallMountSection } from './outputs/planarReport.ts';
 import { planarPreviewSvgOptions } from './planarViews.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
@@ -29,7 +31,7 @@ export interface PlanarBuildResult {
   readonly layout: PlanarLayout;
   readonly drawing: PlateDrawing;
   readonly files: readonly OutputFile[];
-  readonly report: Record<string, unknown>;
+  readonly report: PlanarReport;
 }
 
 /**
@@ -71,12 +73,14 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   if (finCut) files.push(...finCut.files);
   const mount = await wallMountFiles(spec, layout, drawing);
   files.push(...mount.files);
+  const stand = await planarStandFiles(spec, layout);
+  files.push(...stand.files);
   const extras = await planarExtraOutputs(spec, layout, drawing, part, [platePart, ...(finPart ? [finPart] : [])]);
   files.push(...extras.files);
   files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout), extras.templateGuide)) });
 
   const names = [...files.map((f) => f.name), 'report.json'];
-  const report = {
+  const report: PlanarReport = {
     generator,
     spec,
     face: {
@@ -94,6 +98,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
       widthMm: layout.plate.widthMm,
       lengthMm: layout.plate.lengthMm,
       thicknessMm: layout.plate.thicknessMm,
+      cornerRadiusMm: layout.plate.cornerRadiusMm,
       substyleX: layout.plate.substyleX,
       faceOriginY: layout.plate.faceOriginY,
       holes: layout.plate.holes.map((c) => ({ xMm: c.cx, yMm: c.cy, diameterMm: 2 * c.radiusMm })),
@@ -103,6 +108,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
     gnomon: { ...layout.gnomon, profileAreaMm2: part.profileAreaMm2, belowFaceMm: part.belowFaceMm },
     ...(finCut ? { parts: { gnomonDxf: finCut.report } } : {}),
     ...(mount.report ? { mount: mount.report } : {}),
+    ...(stand.report ? { stand: stand.report } : {}),
     ...extras.report,
     time: layout.time,
     engraving: engraving.report,
@@ -120,11 +126,11 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
  * origin); its report section lists the fixings, anchors and fasteners.
  * Nothing for faces that do not hang on a wall.
  */
-async function wallMountFiles(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing): Promise<{ files: OutputFile[]; report?: Record<string, unknown> }> {
+async function wallMountFiles(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing): Promise<{ files: OutputFile[]; report?: WallMountSection }> {
   const m = wallMount(layout);
   if (!m) return { files: [] };
   const files: OutputFile[] = [];
-  let cut: Record<string, unknown> | undefined;
+  let cut: WallMountSection['files']['dxf'];
   if (spec.process.method !== 'print') {
     assertToolFits([m.part], spec.process.kerf);
     const c = await cutPartFiles({ spec, drawing }, m.part);

@@ -7,6 +7,8 @@
 export { EXIT, main, type Io } from './main.ts';
 export { buildAnyFiles, buildContext, buildFiles, GENERATOR, type BuildResult } from './buildFiles.ts';
 export type { BuildContext, Producer, ProducerResult } from './outputs/outputTypes.ts';
+export type { PolarReport, Report } from './outputs/report.ts';
+export type { PlanarReport } from './outputs/planarReport.ts';
 export { MAX_SPEC_ALIASES, MAX_SPEC_BYTES, MAX_SPEC_DEPTH, MAX_SPEC_NODES, parseSpecText, readSpecFile, readSpecText } from './readSpec.ts';
 export { parsePlateDxf, readPlateDxf, type PlateDxf } from './readPlateDxf.ts';
 export { entryExists, OutputError, recoverInterrupted, writeFilesAtomic, type OutputFile } from './writeFilesAtomic.ts';

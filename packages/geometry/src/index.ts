@@ -3,7 +3,7 @@
 // that defines it; a name nothing outside this package uses stays unexported.
 // A new function another package needs gets its name here.
 
-export type { Vec2, Path, RoundedRect, Circle, Hemisphere, Mark } from './types.ts';
+export type { Vec2, Path, RoundedRect, Circle, Hemisphere, Mark, MarkKind } from './types.ts';
 export { isSpecError, formatValue, SpecError } from './errors.ts';
 export { DEG, assertFinite, assertInteger, assertNonNegative, assertPositive, assertRange } from './guards.ts';
 
@@ -82,7 +82,7 @@ export { placeAssembly, faceToWorld } from './assembly/placeAssembly.ts';
 export { defaultPictureDate, sunForPicture } from './assembly/sunForPicture.ts';
 export { projectToPicture, viewAssembly, type AssemblyPicture } from './assembly/viewAssembly.ts';
 
-export type { PartPlacement } from './stand/standTypes.ts';
+export type { FlatStand, PartPlacement } from './stand/standTypes.ts';
 export { METRIC_SIZES } from './stand/metricFasteners.ts';
 export { mountingFixings } from './stand/mountingFixings.ts';
 export { flatStand, type SizedStand } from './stand/flatStand.ts';
@@ -91,9 +91,14 @@ export { fastenerTable, wedgeFastenerRows, type FastenerRow } from './stand/fast
 export { pieceRows, type PlacedPiece } from './stand/pieceRows.ts';
 export { sheetPartAreaMm2 } from './stand/sheetPartAreaMm2.ts';
 
-export { faceOrientationOf, layoutPlanar, type PlanarLayout } from './planar/layoutPlanar.ts';
+export { faceOrientationOf, layoutPlanar, type LeftOutHour, type PlanarGnomonLayout, type PlanarLayout } from './planar/layoutPlanar.ts';
+export type { FinEdge } from './planar/planarTypes.ts';
+export type { FaceType } from './spec/sections/faceSection.ts';
 export { planarPlateDrawing } from './planar/planarPlateDrawing.ts';
 export { planarGnomonSolid, type PlanarGnomonPart } from './planar/planarGnomonSolid.ts';
 export { planarInstallSheet, type PlanarInstallSheet } from './planar/planarInstallSheet.ts';
 export { wallDeclinationFromShadow, type ShadowReading } from './planar/wallDeclinationFromShadow.ts';
-export { wallMount, WALL_MOUNT_RIM_MM, WALL_ANCHOR_HOLE_MM } from './planar/wallMount.ts';
+export { wallMount, WALL_MOUNT_RIM_MM, WALL_ANCHOR_HOLE_MM, type WallMountFixing } from './planar/wallMount.ts';
+export { equatorialStand, equatorialStandApplies, type EquatorialStand, type EquatorialFixing } from './planar/equatorialStand.ts';
+export { standUnionSolid, PRINT_FUSE_MM } from './stand/standUnionSolid.ts';
+export { placePoint } from './stand/placeStandPart.ts';

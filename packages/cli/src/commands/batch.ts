@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { DialLayout, DialSpec, PlateDrawing } from '@umbrafab/geometry';
 import { utf8 } from '../outputs/outputTypes.ts';
+import type { Report } from '../outputs/report.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import { assertOutFolder, specBaseName } from './build.ts';
 import { UsageError, type CommandModule } from './commandTypes.ts';
@@ -149,8 +150,8 @@ type BatchDeps = typeof import('./batchDeps.ts');
 interface LatitudeBuild {
   readonly lat: number;
   readonly files: readonly OutputFile[];
-  /** the latitude's report.json: the polar `Report` or a planar face's */
-  readonly report: object;
+  /** the latitude's report.json: the polar report or a planar face's */
+  readonly report: Report;
   readonly plateLengthMm: number;
   /** latitudes with the same key have the same face: a file whose bytes are the same within the group is written once for it */
   readonly faceKey: string;

@@ -93,20 +93,20 @@ export async function handleRequest(ctx: ServeContext, req: IncomingMessage, res
     if (path === '/api/save') return sendJson(res, 200, save(ctx, body));
     throw new HttpError(404, `${path}: no such action`);
   } catch (e) {
-    if (isSpecError(e)) return sendJson(res, 422, { ok: false, error: { field: e.field, message: e.message } });
+    if (isSpecError(e)) return sendJson(res, 422, refusal(e.field, e.message));
     if (e instanceof HttpError) {
       // A body we did not read to the end: answer, then close the connection (Node ends the socket after the response).
       if (e.status === 413) res.setHeader('Connection', 'close');
-      return sendJson(res, e.status, { ok: false, error: { field: null, message: e.message } });
+      return sendJson(res, e.status, refusal(null, e.message));
     }
     if (e instanceof BodyAbortedError) {
       // A slow or vanished upload: one line in the log, and the connection is already closed or closing.
       ctx.log(`umbrafab serve: ${e.message}`);
-      if (!res.headersSent && !res.destroyed) return sendJson(res, 408, { ok: false, error: { field: null, message: 'request body: did not arrive in time' } });
+      if (!res.headersSent && !res.destroyed) return sendJson(res, 408, refusal(null, 'request body: did not arrive in time'));
       return;
     }
     ctx.log(`umbrafab serve: internal error: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
-    return sendJson(res, 500, { ok: false, error: { field: null, message: `internal error: ${e instanceof Error ? e.message : String(e)}` } });
+    return sendJson(res, 500, refusal(null, `internal error: ${e instanceof Error ? e.message : String(e)}`));
   }
 }
 
@@ -292,4 +292,8 @@ export type SaveAnswer = ReturnType<typeof save>;
 export interface Refusal {
   readonly ok: false;
   readonly error: { readonly field: string | null; readonly message: string };
+}
+
+function refusal(field: string | null, message: string): Refusal {
+  return { ok: false, error: { field, message } };
 }

@@ -113,7 +113,8 @@ export async function laserFillPasses(job: EngraveJob, o: LaserFillOptions): Pro
       if (level.isEmpty()) break;
       levels.push(level);
     }
-    const pieces = keep(region.offset(-half, JOIN, 2, segments)).decompose();
+    // Regions: those of the first level (the region moved in by half a beam; none when that is empty).
+    const pieces = levels.length > 0 ? levels[0].decompose() : [];
     const regions = pieces.length;
     pieces.forEach((piece) => piece.delete());
     let rings = 0;

@@ -21,6 +21,7 @@ import type { FaceOrientation, FinEdge, PlanarFace } from './planarTypes.ts';
 import { plateFrame, substyleFromVerticalRad } from './plateFrame.ts';
 import { isEquatorialFace, isParallelFace, type PlanarGnomon } from './styleEdgeAnchor.ts';
 import { lineHourAngleDeg } from './lineHourAngle.ts';
+import { markKindAt } from '../polar/markKind.ts';
 
 /** Gap between bands (line ends, numerals, title), mm. */
 const BAND_GAP_MM = 3;
@@ -186,7 +187,7 @@ export function layoutPlanar(spec: DialSpec): PlanarLayout {
   for (let m = Math.ceil(from / step) * step; m <= to; m += step) {
     const Hdeg = lineHourAngleDeg(m, time.hourAngleShiftDeg);
     const label = formatClock(m);
-    const kind: MarkKind = m % 60 === 0 ? 'hour' : m % 30 === 0 ? 'half' : 'quarter';
+    const kind = markKindAt(m);
     const H = Hdeg * DEG;
     if (!litDeclinations(wallFace, H)) {
       leftOut.push({ label, hourAngleDeg: Hdeg, reason: 'the face never sees the sun at this hour (behind the face or below the horizon all year)' });

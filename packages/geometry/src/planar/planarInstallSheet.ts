@@ -1,6 +1,8 @@
 import { INSTALL_CAUTIONS } from '../install/installSheet.ts';
 import type { PlanarLayout } from './layoutPlanar.ts';
 import { wallMount } from './wallMount.ts';
+import { equatorialStandApplies } from './equatorialStand.ts';
+import { equatorialStandSteps } from './equatorialStandSteps.ts';
 
 /** The installation sheet of a planar face: plain data, every length mm, angle degrees. */
 export interface PlanarInstallSheet {
@@ -26,7 +28,7 @@ const f2 = (x: number) => x.toFixed(2);
  * (the fin's foot end) and the substyle's angle from the plumb line — then
  * fixed through its holes; a meridian face is plumbed and its style set
  * level-true at the latitude; an equatorial face is tilted to 90° − |φ| with
- * its rod on the celestial pole. Angles and lengths come from the layout.
+ * its rod on the celestial pole, on its stand (`equatorialStandSteps`) where one is built. Angles and lengths come from the layout.
  */
 export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
   const spec = layout.spec;
@@ -66,6 +68,10 @@ export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
       );
       break;
     case 'equatorial':
+      if (equatorialStandApplies(layout)) {
+        steps.push(...equatorialStandSteps(layout));
+        break;
+      }
       steps.push(
         `The plate lies square to the Earth's axis: tilt it ${f2(90 - Math.abs(lat))}° from the horizontal (90° − |latitude|), its ${spec.face!.side} face toward the ${spec.face!.side === 'upper' ? `celestial ${pole} pole` : `${eqWard}ern sky`}.`,
         `Turn it so the 12 line points straight down the slope, on the true meridian; the rod then points at the celestial ${pole} pole.`,

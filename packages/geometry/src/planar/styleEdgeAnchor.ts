@@ -11,8 +11,13 @@ export interface PlanarGnomon {
 
 /** ψ below this counts as a face parallel to the axis (polar, meridian). */
 export const PARALLEL_STYLE_RAD = 1e-9;
-/** ψ above π/2 minus this counts as a face perpendicular to the axis (equatorial): the gnomon is a rod. */
-export const PERPENDICULAR_STYLE_RAD = 1e-9;
+/**
+ * ψ above π/2 minus this counts as a face perpendicular to the axis
+ * (equatorial): the gnomon is a rod. Not tighter: ψ = asin |p · n| is
+ * ill-conditioned near 1, where one rounding step of |p · n| moves ψ by
+ * about 1.5e-8 rad (an equatorial face at 55° or 70° fell on the fin side).
+ */
+export const PERPENDICULAR_STYLE_RAD = 1e-6;
 
 export function isParallelFace(face: PlanarFace): boolean {
   return face.styleHeightRad < PARALLEL_STYLE_RAD;

@@ -12,6 +12,8 @@ import { castingEdge, eastToFaceX, markOffsetEastMm } from './markOffset.ts';
 import { numeralText } from './numeralText.ts';
 import { penumbraMarkWidths } from './penumbraWidths.ts';
 import { summerNumerals } from './summerNumerals.ts';
+import { markKindAt } from './markKind.ts';
+import { lineHourAngleDeg } from '../planar/lineHourAngle.ts';
 
 /** Gap between the end of the marks (or gnomon) and the numerals, and between bands, mm. */
 const BAND_GAP_MM = 3;
@@ -96,15 +98,41 @@ export function layoutDial(spec: DialSpec, options: LayoutOptions = {}): DialLay
     throw new SpecError('face.type', spec.face.type, 'allowed here: "polar" (this command draws the polar plate; `umbrafab build` and `umbrafab check` take every face type)');
   }
   const hemisphere: Hemisphere = spec.site.latitude >= 0 ? 'north' : 'south';
-  const h = spec.gnomon.height;
-  const t = spec.gnomon.thickness;
   const notes: string[] = [];
   const time = timeLayout(spec);
-
   checkKerfAgainstMarks(spec);
   const times = markTimes(spec, time.hourAngleShiftDeg);
+  const marks = placeMarks(spec, times, hemisphere);
+  const spanBottom = -spec.marks.hour.length / 2;
+  const gnomon = gnomonLayout(spec, spanBottom - spec.gnomon.overhang, Math.max(...marks.map((m) => m.y1Mm)) + spec.gnomon.overhang);
+  const band = numeralBand(spec, marks, Math.min(spanBottom, gnomon.y0Mm) - BAND_GAP_MM, notes);
+  const titleLines = titleText(spec, time, options.latitudeRangeDeg);
+  const across = plateAcross(spec, times, marks, band.numerals, titleLines);
+  const along = plateAlong(spec, marks, gnomon, band, titleLines);
+  const substyleX = across.widthMm / 2;
+  const title = titleBlocks(titleLines, spec, {
+    leftX: -across.widthMm / 2 + across.titleLeftInset,
+    rightLimitX: -spec.gnomon.thickness / 2 - spec.process.clearance - BAND_GAP_MM,
+    topY: along.titleTopY,
+    notes,
+  });
+  const plate = laidOutPlate(spec, { widthMm: across.widthMm, lengthMm: along.lengthMm, substyleX, faceOriginY: along.faceOriginY }, gnomon.tabs, holeCircles(spec, across.widthMm, along.lengthMm));
+  checkHolesClear(spec, plate, marks, band.numerals, title);
+  return { spec, hemisphere, marks, numerals: band.numerals, title, gnomon, plate, time, notes };
+}
 
-  // Marks in face coordinates. The hour marks' span is centred on y = 0.
+/**
+ * The marks in face coordinates, sorted across the face: each time's line
+ * (both edges of the noon band at H = 0) at the tan law's x with the
+ * gnomon's thickness, its kind's length from the equator-ward end of the
+ * hour marks (whose span is centred on y = 0), widths widened to the
+ * penumbra when `marks.followPenumbra`; a line under the fin (the noon band
+ * of a solar dial lies exactly at the fin's faces, ±t/2) cannot be seen or
+ * read, so it is flagged `underGnomon`: kept in the report, not engraved.
+ */
+function placeMarks(spec: DialSpec, times: readonly MarkTime[], hemisphere: Hemisphere): Mark[] {
+  const h = spec.gnomon.height;
+  const t = spec.gnomon.thickness;
   const lengths = spec.marks;
   const spanBottom = -lengths.hour.length / 2;
   const marks: Mark[] = [];
@@ -127,35 +155,43 @@ export function layoutDial(spec: DialSpec, options: LayoutOptions = {}): DialLay
     }
   }
   marks.sort((a, b) => a.xMm - b.xMm || a.y1Mm - b.y1Mm);
-  if (spec.marks.followPenumbra) marks.splice(0, marks.length, ...penumbraMarkWidths(marks));
-  // A line that runs under the fin (the noon band of a solar dial lies
-  // exactly at the fin's faces, ±t/2) cannot be seen or read: it stays in the
-  // report but is not engraved.
-  marks.forEach((m, i) => {
-    if (Math.abs(m.xMm) - m.widthMm / 2 < t / 2) marks[i] = { ...m, underGnomon: true };
-  });
+  const widened = spec.marks.followPenumbra ? penumbraMarkWidths(marks) : marks;
+  return widened.map((m) => (Math.abs(m.xMm) - m.widthMm / 2 < t / 2 ? { ...m, underGnomon: true } : m));
+}
 
-  const spanTop = Math.max(...marks.map((m) => m.y1Mm));
-  const gnomonY0 = spanBottom - spec.gnomon.overhang;
-  const gnomonY1 = spanTop + spec.gnomon.overhang;
-  const gnomon = gnomonLayout(spec, gnomonY0, gnomonY1);
+/** The numeral band below the marks: its top, the numerals (hours, then summer-time ones) and the lowest y any of them reaches. */
+interface NumeralBand {
+  readonly topY: number;
+  readonly numerals: readonly TextBlock[];
+  readonly bottomY: number;
+}
 
-  // Numerals: one per whole hour, centred on its line (on the noon band's middle).
+/**
+ * One numeral per whole hour, centred on its line (on the noon band's
+ * middle), hanging from `topY` at the largest height that keeps neighbours
+ * apart, and the summer-time numerals below them.
+ */
+function numeralBand(spec: DialSpec, marks: readonly Mark[], topY: number, notes: string[]): NumeralBand {
   const numeralHeight = fitNumeralHeight(spec, marks, notes);
-  const numeralTop = Math.min(spanBottom, gnomonY0) - BAND_GAP_MM;
-  const numeralBase = numeralTop - numeralHeight;
+  const numeralBase = topY - numeralHeight;
   const summer = summerNumerals(spec, marks, numeralHeight, numeralBase);
-  const numerals = [...hourNumerals(spec, marks, numeralHeight, numeralBase), ...summer.blocks];
+  return { topY, numerals: [...hourNumerals(spec, marks, numeralHeight, numeralBase), ...summer.blocks], bottomY: summer.bottomY };
+}
 
-  // Plate extents across the style.
+/**
+ * The plate's width across the style: the engraving's half-width plus the
+ * margin, room for the mounting holes clear of it, and (an auto plate) the
+ * title block at full size left of the gnomon.
+ * @throws SpecError naming `plate.width` when a fixed plate is too narrow (with the widest hours that fit)
+ */
+function plateAcross(spec: DialSpec, times: readonly MarkTime[], marks: readonly Mark[], numerals: readonly TextBlock[], titleLines: readonly string[]): { readonly widthMm: number; readonly titleLeftInset: number } {
   const holes = spec.holes;
+  const t = spec.gnomon.thickness;
   const markHalfExtent = Math.max(...marks.map((m) => Math.abs(m.xMm) + m.widthMm / 2));
   const numeralHalfExtent = Math.max(0, ...numerals.map((n) => halfExtentX(n)));
   const engravingHalf = Math.max(markHalfExtent, numeralHalfExtent);
   const holeNeed = holes.count > 0 ? engravingHalf + HOLE_CLEAR_MM + holes.diameter / 2 + holes.inset : 0;
-  // The title block sits left of the gnomon: an auto plate is wide enough for it at full size.
   const textH = spec.dial.textHeight;
-  const titleLines = titleText(spec, time, options.latitudeRangeDeg);
   const titleLeftInset = holes.count === 4 ? holes.inset + holes.diameter / 2 + HOLE_CLEAR_MM : spec.plate.margin;
   const titleNeed = titleLeftInset + Math.max(...titleLines.map((l) => strokeTextWidthMm(l, textH))) + t / 2 + spec.process.clearance + BAND_GAP_MM;
   const autoHalfWidth = Math.max(engravingHalf + spec.plate.margin, holeNeed, titleNeed);
@@ -163,13 +199,22 @@ export function layoutDial(spec: DialSpec, options: LayoutOptions = {}): DialLay
   if (spec.plate.width !== 'auto' && widthMm / 2 < Math.max(engravingHalf + spec.plate.margin, holeNeed)) {
     throw plateTooNarrow(spec, times, widthMm, Math.max(engravingHalf + spec.plate.margin, holeNeed));
   }
+  return { widthMm, titleLeftInset };
+}
 
-  // Plate extents along the style: margin, numerals, marks and gnomon, title, margin.
+/**
+ * The plate's length along the style: margin, numerals, marks and gnomon,
+ * title, margin; the content centred on a longer fixed plate. Gives the
+ * plate y of the face origin and the face y of the title block's top.
+ * @throws SpecError naming `plate.length` when a fixed plate is too short
+ */
+function plateAlong(spec: DialSpec, marks: readonly Mark[], gnomon: GnomonLayout, band: NumeralBand, titleLines: readonly string[]): { readonly lengthMm: number; readonly faceOriginY: number; readonly titleTopY: number } {
+  const textH = spec.dial.textHeight;
   const titleBandHeight = (titleLines.length - 1) * LINE_PITCH * textH + textH;
-  const engravedTop = Math.max(spanTop, gnomonY1);
-  const bottomNeed = spec.plate.margin + (numeralTop - summer.bottomY);
+  const engravedTop = Math.max(Math.max(...marks.map((m) => m.y1Mm)), gnomon.y1Mm);
+  const bottomNeed = spec.plate.margin + (band.topY - band.bottomY);
   const titleBottom = engravedTop + BAND_GAP_MM;
-  const contentLength = bottomNeed + (titleBottom - numeralTop) + titleBandHeight + spec.plate.margin;
+  const contentLength = bottomNeed + (titleBottom - band.topY) + titleBandHeight + spec.plate.margin;
   const lengthMm = spec.plate.length === 'auto' ? Math.ceil(contentLength) : spec.plate.length;
   if (spec.plate.length !== 'auto' && lengthMm < contentLength) {
     throw new SpecError(
@@ -179,19 +224,8 @@ export function layoutDial(spec: DialSpec, options: LayoutOptions = {}): DialLay
       `the layout needs ${contentLength.toFixed(1)} mm along the style but the plate is ${lengthMm} mm`,
     );
   }
-  const faceOriginY = (lengthMm - contentLength) / 2 + spec.plate.margin + (0 - summer.bottomY);
-  const substyleX = widthMm / 2;
-
-  const title = titleBlocks(titleLines, spec, {
-    leftX: -widthMm / 2 + titleLeftInset,
-    rightLimitX: -t / 2 - spec.process.clearance - BAND_GAP_MM,
-    topY: titleBottom + titleBandHeight,
-    notes,
-  });
-
-  const plate = laidOutPlate(spec, { widthMm, lengthMm, substyleX, faceOriginY }, gnomon.tabs, holeCircles(spec, widthMm, lengthMm));
-  checkHolesClear(spec, plate, marks, numerals, title);
-  return { spec, hemisphere, marks, numerals, title, gnomon, plate, time, notes };
+  const faceOriginY = (lengthMm - contentLength) / 2 + spec.plate.margin + (0 - band.bottomY);
+  return { lengthMm, faceOriginY, titleTopY: titleBottom + titleBandHeight };
 }
 
 export function timeLayout(spec: DialSpec): TimeLayout {
@@ -220,7 +254,7 @@ function markTimes(spec: DialSpec, shiftDeg: number): MarkTime[] {
   const maxH = spec.hours.maxHourAngle;
   const out: MarkTime[] = [];
   for (let m = from; m <= to; m += step) {
-    const H = roundDeg(15 * (m / 60 - 12) + shiftDeg);
+    const H = lineHourAngleDeg(m, shiftDeg);
     if (Math.abs(H) > maxH) {
       const field = m < 12 * 60 ? 'hours.from' : 'hours.to';
       const why =
@@ -229,26 +263,20 @@ function markTimes(spec: DialSpec, shiftDeg: number): MarkTime[] {
           : `its line would lie ${Math.abs(Math.tan(H * DEG)).toFixed(2)} gnomon heights from the style, beyond hours.maxHourAngle ${maxH}°`;
       throw new SpecError(field, field === 'hours.from' ? spec.hours.from : spec.hours.to, `allowed: the widest range that fits is ${widestRange(spec, shiftDeg, (Hd) => Math.abs(Hd) <= maxH)}`, `${formatClock(m)} (hour angle ${H.toFixed(1)}°) cannot be shown: ${why}`);
     }
-    out.push({ minutes: m, kind: m % 60 === 0 ? 'hour' : m % 30 === 0 ? 'half' : 'quarter', hourAngleDeg: H });
+    out.push({ minutes: m, kind: markKindAt(m), hourAngleDeg: H });
   }
   return out;
-}
-
-/** Round an angle to 1e-9° so that 15°·(T−12) is exactly 0 at noon and byte-stable. */
-function roundDeg(d: number): number {
-  const r = Math.round(d * 1e9) / 1e9;
-  return r === 0 ? 0 : r;
 }
 
 /** "07:00–17:00": the widest run of grid times around noon whose hour angle passes `ok`. */
 function widestRange(spec: DialSpec, shiftDeg: number, ok: (hourAngleDeg: number) => boolean): string {
   const step = spec.hours.step;
   const noon = Math.round((12 * 60 - (shiftDeg / 15) * 60) / step) * step;
-  if (!ok(roundDeg(15 * (noon / 60 - 12) + shiftDeg))) return 'none (no mark fits)';
+  if (!ok(lineHourAngleDeg(noon, shiftDeg))) return 'none (no mark fits)';
   let lo = noon;
-  while (lo - step >= 0 && ok(roundDeg(15 * ((lo - step) / 60 - 12) + shiftDeg))) lo -= step;
+  while (lo - step >= 0 && ok(lineHourAngleDeg(lo - step, shiftDeg))) lo -= step;
   let hi = noon;
-  while (hi + step < 24 * 60 && ok(roundDeg(15 * ((hi + step) / 60 - 12) + shiftDeg))) hi += step;
+  while (hi + step < 24 * 60 && ok(lineHourAngleDeg(hi + step, shiftDeg))) hi += step;
   return `${formatClock(lo)}–${formatClock(hi)}`;
 }
 

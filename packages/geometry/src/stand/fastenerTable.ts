@@ -32,6 +32,33 @@ function boltLength(s: MetricSize, clampMm: number): number {
 }
 
 /**
+ * The plate's screws into seat rails of `railThicknessMm`: one per plate
+ * hole (ISO 273 medium clearance), countersunk (ISO 10642, the plate's holes
+ * countersunk 90° to the head + COUNTERSINK_OVERSIZE_MM) when the plate
+ * takes the head with COUNTERSINK_LAND_MM to spare, else a low pan head
+ * (ISO 7045); a washer and a nylon-insert nut under each rail. Stainless
+ * outdoors. Shared by the polar and the equatorial stands.
+ *
+ * @example seatRailScrewRows(METRIC_SIZES[2], 4, 5.5, 3, 3)[0].lengthMm // 16
+ */
+export function seatRailScrewRows(s: MetricSize, count: number, holeDiaMm: number, plateThicknessMm: number, railThicknessMm: number): FastenerRow[] {
+  const Tp = plateThicknessMm;
+  const sink = Tp >= s.csHeadHeightMm + COUNTERSINK_LAND_MM;
+  return [
+    {
+      use: 'plate to seat rails',
+      item: `${sink ? 'countersunk machine screw ISO 10642' : 'pan-head machine screw ISO 7045'}, stainless A4${holeDiaMm < s.clearanceHoleMm - 1e-9 ? ` (first drill the plate's and rails' Ø ${holeDiaMm.toFixed(1)} mm holes out to Ø ${s.clearanceHoleMm} mm)` : ''}`,
+      size: s.name,
+      lengthMm: boltLength(s, Tp + railThicknessMm),
+      count,
+      countersink: sink ? `90° to Ø ${(s.csHeadMm + COUNTERSINK_OVERSIZE_MM).toFixed(1)} mm on the face` : 'none',
+    },
+    { use: 'under each seat rail', item: 'plain washer ISO 7089, stainless A4', size: s.name, lengthMm: null, count, countersink: 'none' },
+    { use: 'under each seat rail', item: 'nylon-insert lock nut DIN 985, stainless A4', size: s.name, lengthMm: null, count, countersink: 'none' },
+  ];
+}
+
+/**
  * The fastener table of a dial on its flat-pack stand:
  * - plate to seat rails: one screw per plate hole (size from the hole,
  *   ISO 273 medium clearance), through the plate and the rail, a washer
@@ -51,34 +78,23 @@ export function fastenerTable(layout: DialLayout, stand: SizedStand): FastenerRo
   const rows: FastenerRow[] = [];
   const holes = layout.plate.holes;
   const s = z.screw;
-  if (s && holes.length > 0) {
-    const Tp = z.plateThicknessMm;
-    const sink = Tp >= s.csHeadHeightMm + COUNTERSINK_LAND_MM;
-    const length = boltLength(s, Tp + z.thicknessMm);
-    rows.push({
-      use: 'plate to seat rails',
-      item: `${sink ? 'countersunk machine screw ISO 10642' : 'pan-head machine screw ISO 7045'}, stainless A4${2 * holes[0].radiusMm < s.clearanceHoleMm - 1e-9 ? ` (first drill the plate's and rails' Ø ${(2 * holes[0].radiusMm).toFixed(1)} mm holes out to Ø ${s.clearanceHoleMm} mm)` : ''}`,
-      size: s.name,
-      lengthMm: length,
-      count: holes.length,
-      countersink: sink ? `90° to Ø ${(s.csHeadMm + COUNTERSINK_OVERSIZE_MM).toFixed(1)} mm on the face` : 'none',
-    });
-    rows.push({ use: 'under each seat rail', item: 'plain washer ISO 7089, stainless A4', size: s.name, lengthMm: null, count: holes.length, countersink: 'none' });
-    rows.push({ use: 'under each seat rail', item: 'nylon-insert lock nut DIN 985, stainless A4', size: s.name, lengthMm: null, count: holes.length, countersink: 'none' });
-  }
+  if (s && holes.length > 0) rows.push(...seatRailScrewRows(s, holes.length, 2 * holes[0].radiusMm, z.plateThicknessMm, z.thicknessMm));
   const a = z.anchor;
   const count = layout.spec.stand.anchors;
-  if (a && count > 0) {
-    rows.push({
-      use: 'feet to the ground',
-      item: 'ground anchor (concrete: through-bolt anchor; timber: coach screw), stainless, with washer',
-      size: a.name,
-      lengthMm: preferredLength(z.thicknessMm + a.washerMm + a.nutHeightMm + ANCHOR_EMBED_MM),
-      count,
-      countersink: 'none',
-    });
-  }
+  if (a && count > 0) rows.push(groundAnchorRow(a, count, z.thicknessMm));
   return rows;
+}
+
+/** Ground anchors through a stand's feet of `footThicknessMm` (concrete: ANCHOR_EMBED_MM embedment as a first figure). */
+export function groundAnchorRow(a: MetricSize, count: number, footThicknessMm: number): FastenerRow {
+  return {
+    use: 'feet to the ground',
+    item: 'ground anchor (concrete: through-bolt anchor; timber: coach screw), stainless, with washer',
+    size: a.name,
+    lengthMm: preferredLength(footThicknessMm + a.washerMm + a.nutHeightMm + ANCHOR_EMBED_MM),
+    count,
+    countersink: 'none',
+  };
 }
 
 /** The same table for a printed wedge: its mounting holes through the toe into the ground (parts.wedge). */

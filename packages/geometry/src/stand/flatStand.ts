@@ -1,10 +1,10 @@
 import type { Vec3 } from '../parts/mesh.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { SheetPart } from '../sheet/sheetPart.ts';
-import { relievedSlot, relieveTabRoots } from '../sheet/cornerRelief.ts';
 import { CHORD_TOLERANCE_MM } from '../sheet/arcPoints.ts';
 import { reliefToolRadius } from '../sheet/sheetParts.ts';
-import type { Circle, Path, RoundedRect, Vec2 } from '../types.ts';
+import type { Circle, Path, Vec2 } from '../types.ts';
+import { indexOf, path, rectPath, relieveAlong, slotCut, type NominalSlot } from './standJoinery.ts';
 import { mountingFixings } from './mountingFixings.ts';
 import { standDimensions, type StandSizing } from './standDimensions.ts';
 import type { FlatStand, PartPlacement, StandInstance, StandJoint } from './standTypes.ts';
@@ -14,65 +14,12 @@ export interface SizedStand extends FlatStand {
   readonly sizing: StandSizing;
 }
 
-const path = (points: readonly Vec2[]): Path => ({ kind: 'path', points, closed: true });
-
 /** Options of `flatStand`. */
 export interface FlatStandOptions {
   /** radius of the round tool the inside corners are relieved for, mm (default: reliefToolRadius(spec), the router's tool radius); 0 = none */
   readonly reliefToolRadiusMm: number;
   /** largest gap between an arc and its polyline, mm (default cutFiles.chordTolerance) */
   readonly chordToleranceMm: number;
-}
-
-/** A nominal slot: centre, unit axis along the tab's length, length and width (tab + 2 · clearance). */
-interface NominalSlot {
-  readonly centre: Vec2;
-  readonly axis: Vec2;
-  readonly lengthMm: number;
-  readonly widthMm: number;
-}
-
-/** The cut-out of an axis-aligned nominal slot, relieved for the tool (dog-bones or round ends), clockwise as SheetPart's inner paths are. */
-function slotCut(slot: NominalSlot, toolRadiusMm: number, toleranceMm: number): Path {
-  const along = Math.abs(slot.axis[0]) > 0.5;
-  const rect: RoundedRect = { kind: 'rect', cx: slot.centre[0], cy: slot.centre[1], widthMm: along ? slot.lengthMm : slot.widthMm, heightMm: along ? slot.widthMm : slot.lengthMm, cornerRadiusMm: 0 };
-  const p = relievedSlot(rect, toolRadiusMm, toleranceMm).path;
-  return { ...p, points: [...p.points].reverse() };
-}
-
-/**
- * T-bone relief at the tab roots along a straight edge of a counter-clockwise
- * outline that runs through `on` with direction `dir` (material on its left):
- * the outline is turned so the edge lies level with the material above it,
- * relieved as the gnomon's tab roots are (relieveTabRoots), and turned back.
- */
-function relieveAlong(outline: readonly Vec2[], on: Vec2, dir: Vec2, toolRadiusMm: number, toleranceMm: number): Vec2[] {
-  if (!(toolRadiusMm > 0)) return [...outline];
-  // Rotate by −angle(dir): the edge runs along +x, the material (left of dir) above it.
-  const c = dir[0];
-  const s = -dir[1];
-  const rot = ([x, y]: Vec2): Vec2 => [x * c - y * s, x * s + y * c];
-  const back = ([x, y]: Vec2): Vec2 => [x * c + y * s, -x * s + y * c];
-  const turned = outline.map(rot);
-  const z = rot(on)[1];
-  // Snap the edge's corners onto one level (they are collinear only to rounding).
-  const snapped = turned.map(([x, y]): Vec2 => [x, Math.abs(y - z) < 1e-7 ? z : y]);
-  return relieveTabRoots(snapped, toolRadiusMm, z, toleranceMm).map((p, i) => {
-    const k = snapped.indexOf(p);
-    return k >= 0 ? outline[k] : back(p);
-  });
-}
-
-/** Index of the corner equal to `p` (to 1 nm) in an outline. */
-function indexOf(outline: readonly Vec2[], p: Vec2): number {
-  const i = outline.findIndex((q) => Math.abs(q[0] - p[0]) < 1e-6 && Math.abs(q[1] - p[1]) < 1e-6);
-  if (i < 0) throw new Error(`flatStand: corner (${p[0]}, ${p[1]}) lost in the relieved outline`);
-  return i;
-}
-
-/** A counter-clockwise rectangle from its lower-left corner. */
-function rectPath(w: number, h: number): Path {
-  return path([[0, 0], [w, 0], [w, h], [0, h]]);
 }
 
 /**

@@ -39,6 +39,20 @@ export interface StandSizing extends StandDimensions {
 }
 
 /**
+ * The slot checks every flat-pack stand shares, as SpecErrors naming the
+ * field: a clearance per side `c` of half the sheet thickness `T` or more,
+ * a router tool wider than a slot (T + 2c).
+ */
+export function assertStandSlots(spec: DialLayout['spec'], T: number, c: number): void {
+  if (!(2 * c < T)) {
+    throw new SpecError('process.clearance', c, `allowed: less than ${T / 2} mm per side, half the stand's sheet thickness (stand.thickness ${T} mm)`, 'the slots of the stand would be more than twice as wide as its tabs');
+  }
+  if (spec.process.method === 'router' && spec.process.kerf > T + 2 * c + 1e-9) {
+    throw new SpecError('process.kerf', spec.process.kerf, `allowed: a router tool no wider than the stand's slots, ${(T + 2 * c).toFixed(3)} mm (stand.thickness + 2 × process.clearance)`, 'the tool could not cut the stand\'s slots');
+  }
+}
+
+/**
  * Size the flat-pack stand for a layout: sheet (stand.material and
  * stand.thickness, by default the plate's), clearance per side
  * (process.clearance), tilt = |latitude|; seat rails under the plate's hole
@@ -69,12 +83,7 @@ export function standDimensions(layout: DialLayout): StandSizing {
   if (Math.abs(spec.site.latitude) > WEDGE_MAX_TILT_DEG) {
     throw new SpecError('site.latitude', spec.site.latitude, `allowed: a latitude of at most ${WEDGE_MAX_TILT_DEG}° north or south`, `got ${spec.site.latitude}, so the latitude wedge cannot be made (its seat would stand vertical)`);
   }
-  if (!(2 * c < T)) {
-    throw new SpecError('process.clearance', c, `allowed: less than ${T / 2} mm per side, half the stand's sheet thickness (stand.thickness ${T} mm)`, 'the slots of the stand would be more than twice as wide as its tabs');
-  }
-  if (spec.process.method === 'router' && spec.process.kerf > T + 2 * c + 1e-9) {
-    throw new SpecError('process.kerf', spec.process.kerf, `allowed: a router tool no wider than the stand's slots, ${(T + 2 * c).toFixed(3)} mm (stand.thickness + 2 × process.clearance)`, 'the tool could not cut the stand\'s slots');
-  }
+  assertStandSlots(spec, T, c);
 
   const holes = layout.plate.holes;
   const holeDia = holes.length > 0 ? 2 * holes[0].radiusMm : 0;

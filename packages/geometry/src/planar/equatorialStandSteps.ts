@@ -1,0 +1,71 @@
+import { jointFixing } from '../install/assemblyGuide.ts';
+import { dateToUtcMidnightMs, MS_PER_DAY, parseLocalDate } from '../sun/localDate.ts';
+import { magneticDeclinationDeg, WMM2025_VALID_FROM, WMM2025_VALID_UNTIL } from '../sun/magneticDeclinationDeg.ts';
+import { equatorialStand } from './equatorialStand.ts';
+import type { PlanarLayout } from './layoutPlanar.ts';
+
+const f1 = (x: number) => x.toFixed(1);
+const f2 = (x: number) => x.toFixed(2);
+
+/**
+ * The compass correction at the site, in words: the WMM2025 magnetic
+ * declination at 12:00 UT of install.date (default April 1 of
+ * calendar.year), or a pointer to the noon shadow outside the model's
+ * validity or for a date that is not a real day.
+ */
+function compassSentence(layout: PlanarLayout): string {
+  const spec = layout.spec;
+  const date = spec.install.date ?? `${spec.calendar.year}-04-01`;
+  let at: Date;
+  try {
+    at = new Date(dateToUtcMidnightMs(parseLocalDate(date, 'install.date')) + MS_PER_DAY / 2);
+  } catch {
+    return 'find the meridian from the noon shadow below';
+  }
+  if (at < WMM2025_VALID_FROM || at > WMM2025_VALID_UNTIL) return `${date} is outside WMM2025's validity: find the meridian from the noon shadow below`;
+  const d = magneticDeclinationDeg({ latitudeDeg: spec.site.latitude, longitudeDeg: spec.site.longitude, date: at });
+  const shown = f1(Math.abs(d));
+  if (shown === '0.0') return 'the compass needle points to true north here (magnetic declination 0.0°, WMM2025)';
+  return `the compass needle's north end points ${shown}° ${d > 0 ? 'east' : 'west'} of true north here (magnetic declination, WMM2025, ${date}), so true north lies ${shown}° ${d > 0 ? 'west' : 'east'} of the needle`;
+}
+
+/**
+ * The installation steps of an equatorial face on its stand
+ * (`equatorialStand`), common practice for flat-pack stands and equatorial
+ * dials: assemble (or print) the stand, fix the plate on its seat rails
+ * with the fasteners listed, fit the rod through the plate, the rail and
+ * the hub with a set collar each side of the hub, level the base, turn the
+ * cheeks onto the true meridian (true, not magnetic: the WMM2025
+ * declination, then the noon shadow), anchor. The angles are the layout's:
+ * the face tilts 90° − |φ|, the rod rises |φ| toward the elevated pole.
+ */
+export function equatorialStandSteps(layout: PlanarLayout): string[] {
+  const spec = layout.spec;
+  const stand = equatorialStand(layout);
+  const d = stand.dims;
+  const lat = spec.site.latitude;
+  const pole = lat >= 0 ? 'north' : 'south';
+  const eqWard = lat >= 0 ? 'south' : 'north';
+  const upper = spec.face?.side !== 'lower';
+  const rod = layout.gnomon;
+  const rails = d.rails.length;
+  const screws = stand.fasteners.find((f) => f.use === 'plate to seat rails');
+  const anchors = stand.fasteners.find((f) => f.use === 'feet to the ground');
+  const print = spec.process.method === 'print';
+  const steps: string[] = [];
+  steps.push(
+    print
+      ? `Print stand.stl standing on its feet, with supports under the seat rails and the rod hub; clean the holes to size with a drill.`
+      : `Deburr every cut edge of the stand (stand.dxf). Slide the ROD HUB's two end tabs into the sloping slots of the two CHEEKS from between them, so the hub joins the cheeks, then stand the cheeks in the two FEET's slots, their lower tabs down. Lay the ${rails} SEAT RAILS on the cheeks' seat edges, the cheeks' tabs through the rails' slots: RAIL A at the plate's lower edge, the rail with the rod's hole at the hub's end. Check with a try square that the cheeks stand upright and the rails sit square across them, then ${jointFixing(d.material)}.`,
+  );
+  steps.push(
+    screws
+      ? `${upper ? 'Lay the plate on the rails, engraved face up' : 'Hold the plate against the rails from below, engraved face down (toward the ground and the ' + eqWard + 'ern sky)'}, its lower edge (by the title) flush with RAIL A's lower edge and its sides flush with the rails' ends: its ${screws.count} holes fall on the rails' holes. Fit the ${screws.size} × ${screws.lengthMm} mm screws from the face${screws.countersink === 'none' ? '' : ` (countersink the plate's holes ${screws.countersink} first)`}, a washer and a nylon-insert nut behind each rail.`
+      : `The plate has no mounting holes (holes.count 0): bond it to the rails with an exterior adhesive suited to both materials, its lower edge flush with RAIL A's lower edge.`,
+  );
+  steps.push(`Push the rod (${f1(rod.thicknessMm)} mm diameter, ${f1(2 * rod.heightMm + layout.plate.thicknessMm)} mm long) through the plate's centre hole, the rail under it and the hub's hole until ${f1(rod.heightMm)} mm stands out of the engraved face; lock it with the two set collars, one against each face of the hub. The plate's hole and the hub's hole hold it square to the face, along the Earth's axis.`);
+  steps.push(`Set the stand where it will stay, on a firm, level base (a concrete pad or a paving slab bedded on mortar). Shim under the feet until a spirit level laid across each foot and along the feet reads level; a digital level on the face then reads ${f2(d.faceTiltDeg)}° (90° − |latitude|) and along the rod ${f2(90 - d.faceTiltDeg)}°.`);
+  steps.push(`Turn the whole stand until the cheeks lie in the true meridian (true ${pole}, not magnetic: ${compassSentence(layout)}), the rod's upper end pointing up toward true ${pole}, at the celestial ${pole} pole, and the plate's upper edge toward the ${eqWard}. Refine at local apparent noon (the longitude correction and the equation of time in report.json, time): then the rod's shadow falls on the 12 line.`);
+  steps.push(`${anchors ? `Mark and drill through the feet's ${anchors.count} holes and fit the ${anchors.size} ground anchors (${anchors.lengthMm} mm or as the anchor maker's data require for your ground); ` : 'Fix the feet to the base as local codes require; '}tighten the anchors and then the plate screws, evenly. Check the level, the tilt and the noon shadow once more.`);
+  return steps;
+}
