@@ -13,18 +13,12 @@ import json
 import sys
 
 from ezdxf import recover
-from shapely.geometry import Point, Polygon
+
+from cut_rings import cut_rings
 
 doc, auditor = recover.readfile(sys.argv[1])
 audit2 = doc.audit()
-rings = []
-for e in doc.modelspace():
-    if e.dxf.layer != "CUT_PROFILE":
-        continue
-    if e.dxftype() == "LWPOLYLINE" and e.closed:
-        rings.append(Polygon([(p[0], p[1]) for p in e.get_points("xy")]))
-    elif e.dxftype() == "CIRCLE":
-        rings.append(Point(e.dxf.center[0], e.dxf.center[1]).buffer(e.dxf.radius, 64))
+rings = cut_rings(doc, 64)
 valid = all(r.is_valid for r in rings)
 pieces = [r for r in rings if not any(o is not r and o.contains(r) for o in rings)]
 cutouts = [r for r in rings if not any(p is r for p in pieces)]

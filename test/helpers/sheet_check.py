@@ -12,19 +12,14 @@ import json
 import sys
 
 import ezdxf
-from shapely.geometry import Point, Polygon, box
+from shapely.geometry import box
+
+from cut_rings import cut_rings
 
 doc = ezdxf.readfile(sys.argv[1])
 W = float(sys.argv[2])
 L = float(sys.argv[3])
-rings = []
-for e in doc.modelspace():
-    if e.dxf.layer != "CUT_PROFILE":
-        continue
-    if e.dxftype() == "LWPOLYLINE" and e.closed:
-        rings.append(Polygon([(p[0], p[1]) for p in e.get_points("xy")]))
-    elif e.dxftype() == "CIRCLE":
-        rings.append(Point(e.dxf.center.x, e.dxf.center.y).buffer(e.dxf.radius, resolution=32))
+rings = cut_rings(doc, 32)
 outers = [r for i, r in enumerate(rings) if not any(j != i and o.area > r.area and o.contains(r) for j, o in enumerate(rings))]
 regions = []
 for o in outers:
