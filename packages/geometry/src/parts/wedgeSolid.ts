@@ -158,16 +158,63 @@ export interface WedgePart {
  * @param options merged over WEDGE_DEFAULTS (holes and arrow merged one level deep)
  * @example wedgeSolid({ latitudeDeg: 51.5 }).mesh
  */
-export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'>> & {
+export function wedgeSolid(options: WedgeInput = {}): WedgePart {
+  const o = mergeWedgeOptions(options);
+  const tiltDeg = checkTiltAndSizes(o);
+  const hole = mountingHoleShape(o.holes, o.minBaseMm);
+  checkArrow(o.arrow, o.minBaseMm);
+
+  const a = (tiltDeg * Math.PI) / 180;
+  const sinA = Math.sin(a);
+  const cosA = Math.cos(a);
+  const W = o.seatWidthMm;
+  const toe = toeLayout(o, hole, sinA, cosA);
+  const section = crossSection(o, toe.lengthMm, sinA, cosA);
+  const holeXs = holeCentresX(o, hole);
+
+  // Points go into the draft in this order: hole rings, arrow recess, extruded profile.
+  const draft = newDraft();
+  const bores = addMountingHoles(draft, holeXs, toe.centreYMm, hole, o.minBaseMm);
+  const recess = o.arrow === null ? null : addArrowRecess(draft, o.arrow, toe.centreYMm, o.minBaseMm);
+  const toeTopRings = recess === null ? bores.topRings : [...bores.topRings, recess.topRing];
+  extrudeProfileX(draft, section.profile, -W / 2, W / 2, { [BOTTOM_WALL]: bores.bottomRings, [section.toeTopWall]: toeTopRings });
+
+  const corner = (x: number, p: Vec2): Vec3 => [x, p[0], p[1]];
+  const { seatLower: P0, seatUpper: P1 } = section;
+  return {
+    kind: 'wedge',
+    mesh: finishMesh(draft),
+    design: tiltDeg < WEDGE_SLAB_BELOW_DEG ? 'slab' : 'stand',
+    tiltRad: a,
+    profile: section.profile,
+    profileAreaMm2: shoelaceArea(section.profile),
+    seatCorners: [corner(-W / 2, P0), corner(W / 2, P0), corner(W / 2, P1), corner(-W / 2, P1)],
+    seatNormal: [0, -sinA, cosA],
+    toeLengthMm: toe.lengthMm,
+    footprint: { xMinMm: -W / 2, xMaxMm: W / 2, yMinMm: -toe.lengthMm, yMaxMm: section.yBackMm },
+    holes: bores.holes,
+    arrowOutline: recess === null ? null : recess.outline,
+  };
+}
+
+/** What wedgeSolid takes: WedgeOptions, any field left out, holes and arrow in part. */
+type WedgeInput = Partial<Omit<WedgeOptions, 'holes' | 'arrow'>> & {
   readonly holes?: Partial<WedgeHoles>;
   readonly arrow?: Partial<WedgeArrow> | null;
-} = {}): WedgePart {
-  const o: WedgeOptions = {
+};
+
+/** The options merged over WEDGE_DEFAULTS, holes and arrow one level deep (arrow: null keeps none). */
+function mergeWedgeOptions(options: WedgeInput): WedgeOptions {
+  return {
     ...WEDGE_DEFAULTS,
     ...options,
     holes: { ...WEDGE_DEFAULTS.holes, ...(options.holes ?? {}) },
     arrow: options.arrow === null ? null : { ...(WEDGE_DEFAULTS.arrow as WedgeArrow), ...(options.arrow ?? {}) },
   };
+}
+
+/** Refuse a tilt, seat or wall that does not print; returns the tilt |latitude|, degrees. */
+function checkTiltAndSizes(o: WedgeOptions): number {
   assertFinite('wedge.latitudeDeg', o.latitudeDeg);
   const tiltDeg = Math.abs(o.latitudeDeg);
   if (tiltDeg > WEDGE_MAX_TILT_DEG) {
@@ -186,17 +233,22 @@ export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'
     }
   }
   assertNonNegative('wedge.payloadHeightMm', o.payloadHeightMm);
+  return tiltDeg;
+}
 
-  const a = (tiltDeg * Math.PI) / 180;
-  const sinA = Math.sin(a);
-  const cosA = Math.cos(a);
-  const W = o.seatWidthMm;
-  const base = o.minBaseMm;
-  const lw = o.lipWidthMm;
-  const lipH = o.lipMm;
+/** A mounting hole's shape as built: its count and polygon, bore and top radii, countersink depth. */
+interface MountingHoleShape {
+  readonly count: number;
+  readonly segments: number;
+  /** circumscribed polygon: vertex radius / nominal radius */
+  readonly polygonFactor: number;
+  readonly boreR: number;
+  readonly topR: number;
+  readonly csDepth: number;
+}
 
-  // Holes and arrow set how deep the toe's free top must be.
-  const holes = o.holes;
+/** The holes' radii and countersink depth, refusing a count, bore or countersink the toe cannot take. */
+function mountingHoleShape(holes: WedgeHoles, base: number): MountingHoleShape {
   assertInteger('wedge.holes.count', holes.count, 0, 64);
   if (holes.count % 2 !== 0) {
     throw new SpecError('wedge.holes.count', holes.count, 'allowed: an even number (pairs either side of the meridian arrow)');
@@ -210,51 +262,77 @@ export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'
     boreR = holes.diameterMm / 2;
     topR = boreR;
     if (holes.countersink !== null) {
-      const cs = holes.countersink;
-      assertFinite('wedge.holes.countersink.diameterMm', cs.diameterMm);
-      if (!(cs.diameterMm > holes.diameterMm)) {
-        throw new SpecError('wedge.holes.countersink.diameterMm', cs.diameterMm, `allowed: more than wedge.holes.diameterMm = ${holes.diameterMm} mm`);
-      }
-      assertFinite('wedge.holes.countersink.angleDeg', cs.angleDeg);
-      if (!(cs.angleDeg >= 60 && cs.angleDeg <= 120)) {
-        throw new SpecError('wedge.holes.countersink.angleDeg', cs.angleDeg, 'allowed: 60° to 120°');
-      }
-      topR = cs.diameterMm / 2;
-      // Cone depth from the radii and half the included angle.
-      csDepth = (topR - boreR) / Math.tan((cs.angleDeg * Math.PI) / 360);
-      if (!(csDepth < base - WEDGE_MIN_WALL_MM)) {
-        throw new SpecError(
-          'wedge.holes.countersink',
-          cs,
-          `allowed: a countersink leaving at least ${WEDGE_MIN_WALL_MM} mm of straight bore in minBaseMm = ${base} mm`,
-          `its depth ${csDepth.toFixed(3)} mm is too deep`,
-        );
-      }
+      topR = holes.countersink.diameterMm / 2;
+      csDepth = countersinkDepth(holes, holes.countersink, base);
     }
   }
-  const arrow = o.arrow;
-  if (arrow !== null) {
-    for (const f of ['lengthMm', 'shaftWidthMm', 'headWidthMm', 'headLengthMm', 'depthMm'] as const) assertPositive(`wedge.arrow.${f}`, arrow[f]);
-    if (!(arrow.headLengthMm < arrow.lengthMm)) {
-      throw new SpecError('wedge.arrow.headLengthMm', arrow.headLengthMm, `allowed: less than wedge.arrow.lengthMm = ${arrow.lengthMm} mm`);
-    }
-    if (!(arrow.shaftWidthMm < arrow.headWidthMm)) {
-      throw new SpecError('wedge.arrow.shaftWidthMm', arrow.shaftWidthMm, `allowed: less than wedge.arrow.headWidthMm = ${arrow.headWidthMm} mm`);
-    }
-    if (!(arrow.depthMm <= base - WEDGE_MIN_WALL_MM)) {
-      throw new SpecError('wedge.arrow.depthMm', arrow.depthMm, `allowed: at most ${base - WEDGE_MIN_WALL_MM} mm (leaving ${WEDGE_MIN_WALL_MM} mm of the ${base} mm toe)`);
-    }
+  const polygonFactor = 1 / Math.cos(Math.PI / holes.segments);
+  return { count: holes.count, segments: holes.segments, polygonFactor, boreR, topR, csDepth };
+}
+
+/** Depth of the countersink cone, mm, refusing one wider than the bore allows or deeper than the toe. */
+function countersinkDepth(holes: WedgeHoles, cs: WedgeCountersink, base: number): number {
+  assertFinite('wedge.holes.countersink.diameterMm', cs.diameterMm);
+  if (!(cs.diameterMm > holes.diameterMm)) {
+    throw new SpecError('wedge.holes.countersink.diameterMm', cs.diameterMm, `allowed: more than wedge.holes.diameterMm = ${holes.diameterMm} mm`);
   }
+  assertFinite('wedge.holes.countersink.angleDeg', cs.angleDeg);
+  if (!(cs.angleDeg >= 60 && cs.angleDeg <= 120)) {
+    throw new SpecError('wedge.holes.countersink.angleDeg', cs.angleDeg, 'allowed: 60° to 120°');
+  }
+  // Cone depth from the radii and half the included angle.
+  const csDepth = (cs.diameterMm / 2 - holes.diameterMm / 2) / Math.tan((cs.angleDeg * Math.PI) / 360);
+  if (!(csDepth < base - WEDGE_MIN_WALL_MM)) {
+    throw new SpecError(
+      'wedge.holes.countersink',
+      cs,
+      `allowed: a countersink leaving at least ${WEDGE_MIN_WALL_MM} mm of straight bore in minBaseMm = ${base} mm`,
+      `its depth ${csDepth.toFixed(3)} mm is too deep`,
+    );
+  }
+  return csDepth;
+}
 
-  // Toe length: room for the features, and a footprint reaching in front of
-  // the payload's lowest front corner (seat lower edge raised by payloadHeight along the normal).
-  const polygonFactor = 1 / Math.cos(Math.PI / holes.segments); // circumscribed polygon: vertex radius / nominal radius
-  const featureDepth = Math.max(holes.count > 0 ? 2 * topR * polygonFactor : 0, arrow !== null ? arrow.lengthMm : 0) + 2 * o.wallMm;
-  const lipFrontY = -lipH * sinA;
-  const toe = Math.max(-lipFrontY + featureDepth, o.payloadHeightMm * sinA - lw * cosA + o.wallMm);
-  const yc = (-toe + lipFrontY) / 2; // centre line of the free toe top
+/** Refuse a meridian arrow whose head, shaft or depth does not fit (null: no arrow). */
+function checkArrow(arrow: WedgeArrow | null, base: number): void {
+  if (arrow === null) return;
+  for (const f of ['lengthMm', 'shaftWidthMm', 'headWidthMm', 'headLengthMm', 'depthMm'] as const) assertPositive(`wedge.arrow.${f}`, arrow[f]);
+  if (!(arrow.headLengthMm < arrow.lengthMm)) {
+    throw new SpecError('wedge.arrow.headLengthMm', arrow.headLengthMm, `allowed: less than wedge.arrow.lengthMm = ${arrow.lengthMm} mm`);
+  }
+  if (!(arrow.shaftWidthMm < arrow.headWidthMm)) {
+    throw new SpecError('wedge.arrow.shaftWidthMm', arrow.shaftWidthMm, `allowed: less than wedge.arrow.headWidthMm = ${arrow.headWidthMm} mm`);
+  }
+  if (!(arrow.depthMm <= base - WEDGE_MIN_WALL_MM)) {
+    throw new SpecError('wedge.arrow.depthMm', arrow.depthMm, `allowed: at most ${base - WEDGE_MIN_WALL_MM} mm (leaving ${WEDGE_MIN_WALL_MM} mm of the ${base} mm toe)`);
+  }
+}
 
-  // Cross-section, counter-clockwise in (y, z).
+/**
+ * The toe's length, mm: room for the holes and arrow, and a footprint
+ * reaching in front of the payload's lowest front corner (seat lower edge
+ * raised by payloadHeight along the normal); and the centre line of its
+ * free top (y), where holes and arrow sit.
+ */
+function toeLayout(o: WedgeOptions, hole: MountingHoleShape, sinA: number, cosA: number): { readonly lengthMm: number; readonly centreYMm: number } {
+  const featureDepth = Math.max(hole.count > 0 ? 2 * hole.topR * hole.polygonFactor : 0, o.arrow !== null ? o.arrow.lengthMm : 0) + 2 * o.wallMm;
+  const lipFrontY = -o.lipMm * sinA;
+  const toe = Math.max(-lipFrontY + featureDepth, o.payloadHeightMm * sinA - o.lipWidthMm * cosA + o.wallMm);
+  return { lengthMm: toe, centreYMm: (-toe + lipFrontY) / 2 };
+}
+
+/** Profile wall of the bottom face (the edge from the toe's front to the back along z = 0). */
+const BOTTOM_WALL = 0;
+
+/**
+ * The (y, z) cross-section, counter-clockwise: toe, back (with its shelf),
+ * seat, lip; with the seat's edges, the back's y and which profile wall is
+ * the toe's free top.
+ */
+function crossSection(o: WedgeOptions, toe: number, sinA: number, cosA: number) {
+  const base = o.minBaseMm;
+  const lw = o.lipWidthMm;
+  const lipH = o.lipMm;
   const u: Vec2 = [cosA, sinA]; // up the slope
   const nrm: Vec2 = [-sinA, cosA]; // seat normal
   const F: Vec2 = [0, base]; // lip foot
@@ -267,37 +345,45 @@ export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'
   const shelf = o.backShelfMm;
   const yBack = P1[0] + shelf;
   const profile: Vec2[] = shelf > 0 ? [[-toe, 0], [yBack, 0], [yBack, P1[1]], P1, P0, L1, L2, G, [-toe, base]] : [[-toe, 0], [yBack, 0], P1, P0, L1, L2, G, [-toe, base]];
-  const BOTTOM_WALL = 0;
-  const TOE_TOP_WALL = shelf > 0 ? 7 : 6;
+  return { profile, seatLower: P0, seatUpper: P1, yBackMm: yBack, toeTopWall: shelf > 0 ? 7 : 6 };
+}
 
-  // Hole centres: pairs symmetric about x = 0, outside the arrow.
+/** Hole centres across the meridian (x), ascending: pairs symmetric about x = 0, outside the arrow; refuses holes that do not fit. */
+function holeCentresX(o: WedgeOptions, hole: MountingHoleShape): number[] {
   const holeXs: number[] = [];
-  if (holes.count > 0) {
-    const perSide = holes.count / 2;
-    const rv = topR * polygonFactor;
-    const xInner = (arrow !== null ? arrow.headWidthMm / 2 : 0) + o.wallMm + rv;
-    const xOuter = W / 2 - o.wallMm - rv;
-    const step = perSide > 1 ? (xOuter - xInner) / (perSide - 1) : 0;
-    if (xOuter < xInner || (perSide > 1 && step < 2 * rv + o.wallMm)) {
-      throw new SpecError(
-        'wedge.holes.count',
-        holes.count,
-        `allowed: as many holes as fit across seatWidthMm = ${W} mm with wallMm = ${o.wallMm} mm`,
-        `${holes.count} holes of ${(2 * topR).toFixed(2)} mm do not fit`,
-      );
-    }
-    for (let j = 0; j < perSide; j++) {
-      const x = xOuter - j * step;
-      holeXs.push(-x, x);
-    }
-    holeXs.sort((p, q) => p - q);
+  if (hole.count === 0) return holeXs;
+  const W = o.seatWidthMm;
+  const perSide = hole.count / 2;
+  const rv = hole.topR * hole.polygonFactor;
+  const xInner = (o.arrow !== null ? o.arrow.headWidthMm / 2 : 0) + o.wallMm + rv;
+  const xOuter = W / 2 - o.wallMm - rv;
+  const step = perSide > 1 ? (xOuter - xInner) / (perSide - 1) : 0;
+  if (xOuter < xInner || (perSide > 1 && step < 2 * rv + o.wallMm)) {
+    throw new SpecError(
+      'wedge.holes.count',
+      hole.count,
+      `allowed: as many holes as fit across seatWidthMm = ${W} mm with wallMm = ${o.wallMm} mm`,
+      `${hole.count} holes of ${(2 * hole.topR).toFixed(2)} mm do not fit`,
+    );
   }
+  for (let j = 0; j < perSide; j++) {
+    const x = xOuter - j * step;
+    holeXs.push(-x, x);
+  }
+  holeXs.sort((p, q) => p - q);
+  return holeXs;
+}
 
-  const draft = newDraft();
-  const N = holes.segments;
+/**
+ * Each hole's bore wall and countersink cone into the draft; returns the
+ * rings to open in the bottom and in the toe's top, and the holes as built.
+ */
+function addMountingHoles(draft: MeshDraft, holeXs: readonly number[], yc: number, hole: MountingHoleShape, base: number) {
+  const { boreR, topR, csDepth, polygonFactor } = hole;
+  const N = hole.segments;
   const bottomRings: number[][] = [];
   const topRings: number[][] = [];
-  const builtHoles: WedgeHole[] = [];
+  const holes: WedgeHole[] = [];
   for (const hx of holeXs) {
     const ring = (r: number, z: number): number[] =>
       Array.from({ length: N }, (_, k) => {
@@ -312,47 +398,30 @@ export function wedgeSolid(options: Partial<Omit<WedgeOptions, 'holes' | 'arrow'
     if (top) bandFacing(draft, neck, top, axis);
     bottomRings.push(bottom);
     topRings.push(top ?? neck);
-    builtHoles.push({ xMm: hx, yMm: yc, boreRadiusMm: boreR, topRadiusMm: topR, countersinkDepthMm: csDepth });
+    holes.push({ xMm: hx, yMm: yc, boreRadiusMm: boreR, topRadiusMm: topR, countersinkDepthMm: csDepth });
   }
+  return { bottomRings, topRings, holes };
+}
 
-  let arrowOutline: Vec2[] | null = null;
-  if (arrow !== null) {
-    const yTail = yc - arrow.lengthMm / 2;
-    const yTip = yc + arrow.lengthMm / 2;
-    const yNeck = yTip - arrow.headLengthMm;
-    const s = arrow.shaftWidthMm / 2;
-    const hw = arrow.headWidthMm / 2;
-    arrowOutline = [[-s, yTail], [s, yTail], [s, yNeck], [hw, yNeck], [0, yTip], [-hw, yNeck], [-s, yNeck]];
-    const top = arrowOutline.map(([x, y]) => addPoint(draft, [x, y, base]));
-    const floor = arrowOutline.map(([x, y]) => addPoint(draft, [x, y, base - arrow.depthMm]));
-    for (let k = 0; k < arrowOutline.length; k++) {
-      const k1 = (k + 1) % arrowOutline.length;
-      const dx = arrowOutline[k1][0] - arrowOutline[k][0];
-      const dy = arrowOutline[k1][1] - arrowOutline[k][1];
-      // The recess wall faces into the recess: the left side of a CCW outline edge.
-      addPlanarFace(draft, [-dy, dx, 0], [top[k], floor[k], floor[k1], top[k1]]);
-    }
-    addPlanarFace(draft, [0, 0, 1], floor);
-    topRings.push(top);
+/** The meridian arrow's recess (walls and floor) into the draft; returns its outline (x, y, CCW) and its ring in the toe's top. */
+function addArrowRecess(draft: MeshDraft, arrow: WedgeArrow, yc: number, base: number): { readonly outline: Vec2[]; readonly topRing: number[] } {
+  const yTail = yc - arrow.lengthMm / 2;
+  const yTip = yc + arrow.lengthMm / 2;
+  const yNeck = yTip - arrow.headLengthMm;
+  const s = arrow.shaftWidthMm / 2;
+  const hw = arrow.headWidthMm / 2;
+  const outline: Vec2[] = [[-s, yTail], [s, yTail], [s, yNeck], [hw, yNeck], [0, yTip], [-hw, yNeck], [-s, yNeck]];
+  const top = outline.map(([x, y]) => addPoint(draft, [x, y, base]));
+  const floor = outline.map(([x, y]) => addPoint(draft, [x, y, base - arrow.depthMm]));
+  for (let k = 0; k < outline.length; k++) {
+    const k1 = (k + 1) % outline.length;
+    const dx = outline[k1][0] - outline[k][0];
+    const dy = outline[k1][1] - outline[k][1];
+    // The recess wall faces into the recess: the left side of a CCW outline edge.
+    addPlanarFace(draft, [-dy, dx, 0], [top[k], floor[k], floor[k1], top[k1]]);
   }
-
-  extrudeProfileX(draft, profile, -W / 2, W / 2, { [BOTTOM_WALL]: bottomRings, [TOE_TOP_WALL]: topRings });
-
-  const corner = (x: number, p: Vec2): Vec3 => [x, p[0], p[1]];
-  return {
-    kind: 'wedge',
-    mesh: finishMesh(draft),
-    design: tiltDeg < WEDGE_SLAB_BELOW_DEG ? 'slab' : 'stand',
-    tiltRad: a,
-    profile,
-    profileAreaMm2: shoelaceArea(profile),
-    seatCorners: [corner(-W / 2, P0), corner(W / 2, P0), corner(W / 2, P1), corner(-W / 2, P1)],
-    seatNormal: [0, -sinA, cosA],
-    toeLengthMm: toe,
-    footprint: { xMinMm: -W / 2, xMaxMm: W / 2, yMinMm: -toe, yMaxMm: yBack },
-    holes: builtHoles,
-    arrowOutline,
-  };
+  addPlanarFace(draft, [0, 0, 1], floor);
+  return { outline, topRing: top };
 }
 
 /**
