@@ -20,8 +20,8 @@ import { planarMeanTimeCurve } from './planarMeanTimeCurve.ts';
 import type { FaceOrientation, FinEdge, PlanarFace } from './planarTypes.ts';
 import { plateFrame, substyleFromVerticalRad } from './plateFrame.ts';
 import { isEquatorialFace, isParallelFace, type PlanarGnomon } from './styleEdgeAnchor.ts';
-import { lineHourAngleDeg } from './lineHourAngle.ts';
-import { markKindAt } from '../polar/markKind.ts';
+import { lineHourAngleDeg } from '../clock/lineHourAngle.ts';
+import { markKindAt } from '../clock/markKind.ts';
 
 /** Gap between bands (line ends, numerals, title), mm. */
 const BAND_GAP_MM = 3;

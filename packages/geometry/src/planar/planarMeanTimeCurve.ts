@@ -6,7 +6,7 @@ import { nodusTraces, type NodusTrace } from './planarDateLine.ts';
 import type { PlanarFace } from './planarTypes.ts';
 import type { PlanarGnomon } from './styleEdgeAnchor.ts';
 import { sunDirectionEnu } from './sunDirectionEnu.ts';
-import { lineHourAngleDeg } from './lineHourAngle.ts';
+import { lineHourAngleDeg } from '../clock/lineHourAngle.ts';
 
 /** Options of `planarMeanTimeCurve`. */
 export interface PlanarMeanTimeOptions {

@@ -12,8 +12,8 @@ import { castingEdge, eastToFaceX, markOffsetEastMm } from './markOffset.ts';
 import { numeralText } from './numeralText.ts';
 import { penumbraMarkWidths } from './penumbraWidths.ts';
 import { summerNumerals } from './summerNumerals.ts';
-import { markKindAt } from './markKind.ts';
-import { lineHourAngleDeg } from '../planar/lineHourAngle.ts';
+import { markKindAt } from '../clock/markKind.ts';
+import { lineHourAngleDeg } from '../clock/lineHourAngle.ts';
 
 /** Gap between the end of the marks (or gnomon) and the numerals, and between bands, mm. */
 const BAND_GAP_MM = 3;
