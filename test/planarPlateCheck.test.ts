@@ -28,8 +28,8 @@ function moveVertex(dxf: string, points: readonly [number, number][], [dx, dy]: 
   return { text: lines.join('\n'), moved };
 }
 
-describe('umbrafab check --plate on planar faces (marks read back from plate.dxf)', () => {
-  for (const fixture of ['garden-horizontal', 'wall-declining']) {
+describe('umbrafab check --plate on every planar face type (marks read back from plate.dxf)', () => {
+  for (const fixture of ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial', 'equatorial-lower']) {
     it(`${fixture}: the written plate.dxf checks clean; one hour line moved 0.5 mm fails, naming that line`, async () => {
       const spec = join(ROOT, `fixtures/planar/${fixture}.yaml`);
       const out = mkdtempSync(join(tmpdir(), 'umbrafab-pplate-'));
