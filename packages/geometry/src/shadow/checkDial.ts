@@ -12,7 +12,7 @@ import { drawnMarksFromLayout, type DrawnMark } from './drawnMarks.ts';
 import { gnomonForLayout } from './gnomonForLayout.ts';
 import { checkSampling } from './checkSampling.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
-import { instantAtHourAngle, sunOnDay, type RefractionModel, type SunSample } from '../sun/sunTrack.ts';
+import { instantAtHourAngle, sunOnDay, type RefractionModel, type SunDay, type SunSample, type SunTrack } from '../sun/sunTrack.ts';
 import { KM_PER_AU } from 'astronomy-engine';
 
 /**
@@ -163,25 +163,78 @@ export interface CheckResult {
  * @example checkDial(layoutDial(parseSpec(raw))).pass
  */
 export function checkDial(layout: DialLayout, options: CheckOptions = {}): CheckResult {
-  const spec = layout.spec;
-  const { toleranceMm, stepMinutes, everyDays, refraction, year, track } = checkSampling(spec, options);
-  const c = spec.check;
+  const settings = checkSettings(layout, options);
+  const caster = castingStyle(layout);
+  const frames = checkFrames(layout.spec.site.latitude, settings.tiltErrorDeg, settings.azimuthErrorDeg);
+  const run = runDays(layout, settings, caster, frames);
+  const marks = settings.drawn.map((d, i) => markCheck(d, run.acc[i]));
+  return assembleResult(layout, settings, caster, run, marks);
+}
+
+/** What one check runs with: the sampling over the spec's defaults, the installation errors and the drawn marks. */
+interface CheckSettings extends ReturnType<typeof checkSampling> {
+  readonly tiltErrorDeg: number;
+  readonly azimuthErrorDeg: number;
+  readonly drawn: readonly DrawnMark[];
+  readonly source: 'layout' | 'plate';
+}
+
+/** Gather the marks and settings: options over the spec's `check:` section; no marks at all is a SpecError. */
+function checkSettings(layout: DialLayout, options: CheckOptions): CheckSettings {
+  const sampling = checkSampling(layout.spec, options);
+  const c = layout.spec.check;
   const tiltErrorDeg = options.tiltErrorDeg ?? c.tiltError;
   const azimuthErrorDeg = options.azimuthErrorDeg ?? c.azimuthError;
   const drawn = options.drawn ?? drawnMarksFromLayout(layout);
   if (drawn.length === 0) throw new SpecError('marks', 0, 'allowed: at least one mark to check');
+  return { ...sampling, tiltErrorDeg, azimuthErrorDeg, drawn, source: options.source ?? 'layout' };
+}
 
+/** The gnomon that casts the shadow: its part, the style height h (mm) and its top style edges on each side. */
+interface CastingStyle {
+  readonly part: ReturnType<typeof gnomonForLayout>;
+  readonly h: number;
+  readonly edges: { readonly minusX: readonly Edge3[]; readonly plusX: readonly Edge3[] };
+  /** the edges that cast a mark's line, by the mark's style side */
+  readonly edgesOf: (style: StyleEdge) => readonly Edge3[];
+}
+
+/** Build the casting style from the gnomon mesh: only the straight style at full height reads the hours. */
+function castingStyle(layout: DialLayout): CastingStyle {
   const part = gnomonForLayout(layout);
   // The hour lines read the straight style at full height; a nodus notch's
   // flanks (lower, sloping) are left out: they are meant to mark the date.
   const { h, edges } = topStyleEdges(part.mesh);
-  const lat = spec.site.latitude;
-  const frame = dialFrame({ latitudeDeg: lat, tiltErrorDeg, azimuthErrorDeg });
-  const frameTilt = dialFrame({ latitudeDeg: lat, tiltErrorDeg: tiltErrorDeg + 1, azimuthErrorDeg });
-  const frameAz = dialFrame({ latitudeDeg: lat, tiltErrorDeg, azimuthErrorDeg: azimuthErrorDeg + 1 });
-  const hemiSign = layout.hemisphere === 'north' ? 1 : -1;
   const edgesOf = (style: StyleEdge): readonly Edge3[] => (eastToFaceX(style === 'east' ? 1 : -1, layout.hemisphere) > 0 ? edges.plusX : edges.minusX);
+  return { part, h, edges, edgesOf };
+}
 
+/** The installed dial frame, and the same frame 1° steeper and 1° turned clockwise (the installation tolerances). */
+interface CheckFrames {
+  readonly frame: DialFrame;
+  readonly frameTilt: DialFrame;
+  readonly frameAz: DialFrame;
+}
+
+/** The three dial frames a check projects the Sun into. */
+function checkFrames(lat: number, tiltErrorDeg: number, azimuthErrorDeg: number): CheckFrames {
+  return {
+    frame: dialFrame({ latitudeDeg: lat, tiltErrorDeg, azimuthErrorDeg }),
+    frameTilt: dialFrame({ latitudeDeg: lat, tiltErrorDeg: tiltErrorDeg + 1, azimuthErrorDeg }),
+    frameAz: dialFrame({ latitudeDeg: lat, tiltErrorDeg, azimuthErrorDeg: azimuthErrorDeg + 1 }),
+  };
+}
+
+/** What the run over the year leaves: one accumulator per drawn mark, the days and the Sun positions computed. */
+interface DaysRun {
+  readonly acc: readonly Accumulator[];
+  readonly days: readonly CheckDay[];
+  readonly sunPositions: number;
+}
+
+/** Run the days: each day's sweep, then every mark measured at its own instant. */
+function runDays(layout: DialLayout, settings: CheckSettings, caster: CastingStyle, frames: CheckFrames): DaysRun {
+  const { drawn, track, stepMinutes } = settings;
   const hours = drawn.map((d) => d.mark.hourAngleDeg * DEG);
   const hMin = Math.min(...hours);
   const hMax = Math.max(...hours);
@@ -189,120 +242,173 @@ export function checkDial(layout: DialLayout, options: CheckOptions = {}): Check
   const acc = drawn.map(() => newAccumulator());
   const days: CheckDay[] = [];
   let sunPositions = 0;
+  const scoring: Scoring = { caster, frames, toleranceMm: settings.toleranceMm, hemiSign: layout.hemisphere === 'north' ? 1 : -1 };
 
   for (const day of track.days) {
-    // The sweep: every stepMinutes from the first mark's hour angle to the last.
-    const t0 = instantAtHourAngle(track, day, hMin);
-    const t1 = instantAtHourAngle(track, day, hMax);
-    const n = Math.floor((t1 - t0) / stepMs + 1e-9) + 1;
-    const sweepH = new Float64Array(n);
-    let lit = 0;
-    for (let k = 0; k < n; k++) {
-      const s = sunOnDay(track, day, t0 + k * stepMs);
-      sweepH[k] = s.hourAngleRad;
-      if (isFaceLit(s, toDialFrame(frame, s.enu))) lit++;
-    }
-    sunPositions += n;
-    const noon = sunOnDay(track, day, instantAtHourAngle(track, day, 0));
-    days.push({ date: day.date, declinationDeg: noon.declinationRad / DEG, equationOfTimeMin: noon.equationOfTimeMin, litMinutes: lit * stepMinutes });
-
+    const sweep = sweepDay(track, day, hMin, hMax, stepMs, frames.frame);
+    sunPositions += sweep.hourAnglesRad.length;
+    days.push(checkDay(track, day, sweep.litSamples * stepMinutes));
     drawn.forEach((d, i) => {
-      const a = acc[i];
       const H = hours[i];
-      const t = instantAtHourAngle(track, day, H, seedFromSweep(sweepH, H, t0, stepMs));
-      const s = sunOnDay(track, day, t);
+      const t = instantAtHourAngle(track, day, H, seedFromSweep(sweep.hourAnglesRad, H, sweep.t0, stepMs));
       sunPositions++;
-      const sun = toDialFrame(frame, s.enu);
-      if (!isFaceLit(s, sun)) {
-        a.errors.push(null);
-        return;
-      }
-      a.lit++;
-      const penumbra = penumbraWidthMm({ heightMm: h, hourAngleRad: H, declinationRad: s.declinationRad, sunRadiusRad: Math.asin(SUN_RADIUS_KM / (s.distanceAu * KM_PER_AU)) });
-      a.penumbra = widen(a.penumbra, penumbra);
-      a.clock = widen(a.clock, (t - day.startMs) / 60_000 - d.mark.minutes);
-      const cast = shadowOnLine(edgesOf(d.mark.style), sun, d.a, d.b);
-      if (!cast) {
-        a.errors.push(null);
-        return;
-      }
-      // Face-x speed of the shadow: dx/dH = h / cos² H (tan law), signed by hemisphere.
-      const speedMmPerS = (hemiSign * h * HOUR_ANGLE_RAD_PER_S) / Math.cos(H) ** 2;
-      const errS = -cast.errorMm / speedMmPerS;
-      a.reached++;
-      a.errors.push(cast.errorMm);
-      a.sumAbsMm += Math.abs(cast.errorMm);
-      a.sumAbsS += Math.abs(errS);
-      if (Math.abs(cast.errorMm) > toleranceMm) a.over++;
-      if (a.worstDate === null || Math.abs(cast.errorMm) > Math.abs(a.worstMm)) {
-        a.worstMm = cast.errorMm;
-        a.worstS = errS;
-        a.worstDate = day.date;
-      }
-      for (const [f, key] of [[frameTilt, 'tilt'], [frameAz, 'az']] as const) {
-        const moved = shadowOnLine(edgesOf(d.mark.style), toDialFrame(f, s.enu), d.a, d.b);
-        if (!moved) continue;
-        const shiftMin = -(moved.shadowXMm - cast.shadowXMm) / speedMmPerS / 60;
-        const w = key === 'tilt' ? a.tilt : a.az;
-        w.n++;
-        w.sumAbs += Math.abs(shiftMin);
-        if (Math.abs(shiftMin) > Math.abs(w.worst)) w.worst = shiftMin;
-      }
+      scoreMarkOnDay(acc[i], scoring, { d, H, day, t, s: sunOnDay(track, day, t) });
     });
   }
+  return { acc, days, sunPositions };
+}
 
-  const marks: MarkCheck[] = drawn.map((d, i) => {
-    const a = acc[i];
-    return {
-      label: d.mark.label,
-      kind: d.mark.kind,
-      style: d.mark.style,
-      hourAngleDeg: d.mark.hourAngleDeg,
-      xMm: (d.a[0] + d.b[0]) / 2,
-      litDays: a.lit,
-      reachedDays: a.reached,
-      errorMm: { worst: a.worstMm, meanAbs: a.reached ? a.sumAbsMm / a.reached : 0 },
-      errorS: { worst: a.worstS, meanAbs: a.reached ? a.sumAbsS / a.reached : 0 },
-      worstDate: a.worstDate,
-      daysOverTolerance: a.over,
-      penumbraMm: a.penumbra ?? { min: 0, max: 0 },
-      clockOffsetMin: a.clock ?? { min: 0, max: 0 },
-      tiltShiftMinPerDeg: { worst: a.tilt.worst, meanAbs: a.tilt.n ? a.tilt.sumAbs / a.tilt.n : 0 },
-      azimuthShiftMinPerDeg: { worst: a.az.worst, meanAbs: a.az.n ? a.az.sumAbs / a.az.n : 0 },
-      errorsMm: a.errors,
-    };
-  });
+/** One day's sweep: every stepMinutes from the first mark's hour angle to the last, and how many samples light the face. */
+function sweepDay(track: SunTrack, day: SunDay, hMin: number, hMax: number, stepMs: number, frame: DialFrame): { t0: number; hourAnglesRad: Float64Array; litSamples: number } {
+  const t0 = instantAtHourAngle(track, day, hMin);
+  const t1 = instantAtHourAngle(track, day, hMax);
+  const n = Math.floor((t1 - t0) / stepMs + 1e-9) + 1;
+  const hourAnglesRad = new Float64Array(n);
+  let litSamples = 0;
+  for (let k = 0; k < n; k++) {
+    const s = sunOnDay(track, day, t0 + k * stepMs);
+    hourAnglesRad[k] = s.hourAngleRad;
+    if (isFaceLit(s, toDialFrame(frame, s.enu))) litSamples++;
+  }
+  return { t0, hourAnglesRad, litSamples };
+}
 
+/** A simulated day's record: declination and equation of time at local apparent noon, and its lit minutes. */
+function checkDay(track: SunTrack, day: SunDay, litMinutes: number): CheckDay {
+  const noon = sunOnDay(track, day, instantAtHourAngle(track, day, 0));
+  return { date: day.date, declinationDeg: noon.declinationRad / DEG, equationOfTimeMin: noon.equationOfTimeMin, litMinutes };
+}
+
+/** What scoring needs besides the mark and day: the casting style, the frames, the tolerance (mm) and the hemisphere's sign. */
+interface Scoring {
+  readonly caster: CastingStyle;
+  readonly frames: CheckFrames;
+  readonly toleranceMm: number;
+  readonly hemiSign: number;
+}
+
+/** One mark on one day: the drawn mark, its hour angle H (rad), the instant t (UTC ms) and the Sun there. */
+interface MarkDay {
+  readonly d: DrawnMark;
+  readonly H: number;
+  readonly day: SunDay;
+  readonly t: number;
+  readonly s: SunSample;
+}
+
+/** Score a mark on a day into its accumulator: lit test, penumbra, clock offset, shadow error and the installation shifts. */
+function scoreMarkOnDay(a: Accumulator, g: Scoring, m: MarkDay): void {
+  const { d, H, t, day, s } = m;
+  const { caster } = g;
+  const h = caster.h;
+  const sun = toDialFrame(g.frames.frame, s.enu);
+  if (!isFaceLit(s, sun)) {
+    a.errors.push(null);
+    return;
+  }
+  a.lit++;
+  const penumbra = penumbraWidthMm({ heightMm: h, hourAngleRad: H, declinationRad: s.declinationRad, sunRadiusRad: Math.asin(SUN_RADIUS_KM / (s.distanceAu * KM_PER_AU)) });
+  a.penumbra = widen(a.penumbra, penumbra);
+  a.clock = widen(a.clock, (t - day.startMs) / 60_000 - d.mark.minutes);
+  const cast = shadowOnLine(caster.edgesOf(d.mark.style), sun, d.a, d.b);
+  if (!cast) {
+    a.errors.push(null);
+    return;
+  }
+  // Face-x speed of the shadow: dx/dH = h / cos² H (tan law), signed by hemisphere.
+  const speedMmPerS = (g.hemiSign * h * HOUR_ANGLE_RAD_PER_S) / Math.cos(H) ** 2;
+  const errS = -cast.errorMm / speedMmPerS;
+  a.reached++;
+  a.errors.push(cast.errorMm);
+  a.sumAbsMm += Math.abs(cast.errorMm);
+  a.sumAbsS += Math.abs(errS);
+  if (Math.abs(cast.errorMm) > g.toleranceMm) a.over++;
+  if (a.worstDate === null || Math.abs(cast.errorMm) > Math.abs(a.worstMm)) {
+    a.worstMm = cast.errorMm;
+    a.worstS = errS;
+    a.worstDate = day.date;
+  }
+  scoreInstallShifts(a, g, m, cast.shadowXMm, speedMmPerS);
+}
+
+/** The installation tolerances on a reached day: how far the shadow's time moves with the plate 1° steeper and 1° turned clockwise. */
+function scoreInstallShifts(a: Accumulator, g: Scoring, m: MarkDay, shadowXMm: number, speedMmPerS: number): void {
+  const { d, s } = m;
+  for (const [f, w] of [[g.frames.frameTilt, a.tilt], [g.frames.frameAz, a.az]] as const) {
+    const moved = shadowOnLine(g.caster.edgesOf(d.mark.style), toDialFrame(f, s.enu), d.a, d.b);
+    if (!moved) continue;
+    const shiftMin = -(moved.shadowXMm - shadowXMm) / speedMmPerS / 60;
+    w.n++;
+    w.sumAbs += Math.abs(shiftMin);
+    if (Math.abs(shiftMin) > Math.abs(w.worst)) w.worst = shiftMin;
+  }
+}
+
+/** A mark's year, from its accumulator: worst and mean errors, days over tolerance, ranges and shifts. */
+function markCheck(d: DrawnMark, a: Accumulator): MarkCheck {
+  return {
+    label: d.mark.label,
+    kind: d.mark.kind,
+    style: d.mark.style,
+    hourAngleDeg: d.mark.hourAngleDeg,
+    xMm: (d.a[0] + d.b[0]) / 2,
+    litDays: a.lit,
+    reachedDays: a.reached,
+    errorMm: { worst: a.worstMm, meanAbs: a.reached ? a.sumAbsMm / a.reached : 0 },
+    errorS: { worst: a.worstS, meanAbs: a.reached ? a.sumAbsS / a.reached : 0 },
+    worstDate: a.worstDate,
+    daysOverTolerance: a.over,
+    penumbraMm: a.penumbra ?? { min: 0, max: 0 },
+    clockOffsetMin: a.clock ?? { min: 0, max: 0 },
+    tiltShiftMinPerDeg: { worst: a.tilt.worst, meanAbs: a.tilt.n ? a.tilt.sumAbs / a.tilt.n : 0 },
+    azimuthShiftMinPerDeg: { worst: a.az.worst, meanAbs: a.az.n ? a.az.sumAbs / a.az.n : 0 },
+    errorsMm: a.errors,
+  };
+}
+
+/** The single worst (mark, day) over all marks, or null if no mark is ever reached (the first of equals wins). */
+function worstOfMarks(marks: readonly MarkCheck[]): CheckResult['worst'] {
   let worst: CheckResult['worst'] = null;
   for (const m of marks) {
     if (m.worstDate !== null && (worst === null || Math.abs(m.errorMm.worst) > Math.abs(worst.errorMm))) {
       worst = { label: m.label, style: m.style, date: m.worstDate, errorMm: m.errorMm.worst, errorS: m.errorS.worst };
     }
   }
-  const failures: CheckFailure[] = marks
+  return worst;
+}
+
+/** The marks beyond the tolerance on some day, worst first (then by label). */
+function failuresOfMarks(marks: readonly MarkCheck[]): CheckFailure[] {
+  return marks
     .filter((m) => m.daysOverTolerance > 0 && m.worstDate !== null)
     .map((m) => ({ label: m.label, style: m.style, date: m.worstDate as string, errorMm: m.errorMm.worst, errorS: m.errorS.worst, daysOverTolerance: m.daysOverTolerance }))
     .sort((p, q) => Math.abs(q.errorMm) - Math.abs(p.errorMm) || p.label.localeCompare(q.label));
+}
 
+/** Assemble the result: the settings it ran with, the gnomon, the days, the marks, the worst and the failures. */
+function assembleResult(layout: DialLayout, settings: CheckSettings, caster: CastingStyle, run: DaysRun, marks: readonly MarkCheck[]): CheckResult {
+  const { spec } = layout;
+  const { edges, part } = caster;
+  const failures = failuresOfMarks(marks);
   return {
-    year,
-    site: { latitudeDeg: lat, longitudeDeg: spec.site.longitude, timezone: spec.site.timezone },
+    year: settings.year,
+    site: { latitudeDeg: spec.site.latitude, longitudeDeg: spec.site.longitude, timezone: spec.site.timezone },
     hemisphere: layout.hemisphere,
     reads: layout.time.reads,
-    source: options.source ?? 'layout',
-    toleranceMm,
-    stepMinutes,
-    everyDays,
-    refraction,
-    tiltErrorDeg,
-    azimuthErrorDeg,
+    source: settings.source,
+    toleranceMm: settings.toleranceMm,
+    stepMinutes: settings.stepMinutes,
+    everyDays: settings.everyDays,
+    refraction: settings.refraction,
+    tiltErrorDeg: settings.tiltErrorDeg,
+    azimuthErrorDeg: settings.azimuthErrorDeg,
     gnomon: { heightMm: part.styleHeightMm, thicknessMm: part.thicknessMm, styleEdges: edges.minusX.length + edges.plusX.length },
-    sunPositions,
-    ephemerisCalls: track.ephemerisCalls,
-    method: CHECK_METHOD(refraction),
-    days,
+    sunPositions: run.sunPositions,
+    ephemerisCalls: settings.track.ephemerisCalls,
+    method: CHECK_METHOD(settings.refraction),
+    days: run.days,
     marks,
-    worst,
+    worst: worstOfMarks(marks),
     failures,
     pass: failures.length === 0,
   };
