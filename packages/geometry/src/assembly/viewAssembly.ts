@@ -4,7 +4,7 @@ import { cross3, dot3, normalize3 } from '../parts/vec3.ts';
 import type { PlateDrawing } from '../plate/plateDrawing.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { Vec2 } from '../types.ts';
-import type { AssemblyView, Facet, PictureItem } from './assemblyTypes.ts';
+import type { AssemblyView, FaceFrame, Facet, PictureItem, PlacedPart } from './assemblyTypes.ts';
 import { shoelaceArea } from '../parts/ring2d.ts';
 import { clipPolygonAbovePlane, clipPolygonConvex } from './clipPolygon.ts';
 import { gnomonShadowOnFace, type FaceShadow } from './gnomonShadowOnFace.ts';
@@ -67,22 +67,49 @@ export function projectToPicture(view: AssemblyView, p: Vec3): Vec2 {
 export function viewAssembly(layout: DialLayout, drawing: PlateDrawing, sun: PictureSun, options: Partial<AssemblyViewOptions> = {}): AssemblyPicture {
   const o = { ...ASSEMBLY_VIEW_DEFAULTS, ...options };
   const assembly = placeAssembly(layout);
-  const north = assembly.hemisphere === 'north';
-  const azDeg = north ? 180 - o.viewAzimuthDeg : o.viewAzimuthDeg;
+  const basis = viewBasis(assembly.hemisphere, o.viewAzimuthDeg, o.viewElevationDeg);
+  const s = sun.direction;
+  const sunFace = worldToFaceDirection(assembly.face, s);
+  const P = (p: Vec3): Vec2 => [dot3(p, basis.right), -dot3(p, basis.up)];
+  const ground = groundRect(assembly, o.groundMm);
+  const painted: Placed[] = [...groundItems(ground, groundShadow(assembly, s, ground), P)];
+  for (const part of assembly.parts) {
+    painted.push(...partFaceItems(part, assembly.face, basis.toViewer, s, P));
+    if (part.name === 'plate') for (const it of faceEngraving(layout, drawing, assembly, basis.toViewer, P)) painted.push({ item: it, pts: [] });
+  }
+  const shadow = gnomonShadowOnFace(layout, sunFace, assembly.faceOutline);
+  const items = withFaceShadow(painted, shadow, assembly.face, P);
+  const frame = pictureFrame(items, o.marginMm);
+  const view: AssemblyView = { ...basis, left: frame.left, top: -frame.topEdge };
+  const shift = (p: Vec2): Vec2 => [p[0] - frame.left, p[1] - frame.topEdge];
+  const moved = items.map(({ item }) => moveItem(item, shift));
+  return { widthMm: frame.widthMm, heightMm: frame.heightMm, view, items: moved, assembly, sun, sunFace, shadow };
+}
+
+/** A picture item before the frame is known, with the unshifted points that size the frame (none for shadows and engraving). */
+interface Placed {
+  readonly item: PictureItem;
+  readonly pts: readonly Vec2[];
+}
+
+/** The viewer's axes: toward the viewer (from the view azimuth, mirrored in the south, and elevation), picture right and up. */
+function viewBasis(hemisphere: Assembly['hemisphere'], viewAzimuthDeg: number, viewElevationDeg: number): { toViewer: Vec3; right: Vec3; up: Vec3 } {
+  const azDeg = hemisphere === 'north' ? 180 - viewAzimuthDeg : viewAzimuthDeg;
   const az = azDeg * DEG;
-  const el = o.viewElevationDeg * DEG;
+  const el = viewElevationDeg * DEG;
   const toViewer: Vec3 = [Math.sin(az) * Math.cos(el), Math.cos(az) * Math.cos(el), Math.sin(el)];
   const forward: Vec3 = [-toViewer[0], -toViewer[1], -toViewer[2]];
   const right = normalize3(cross3(forward, [0, 0, 1]));
   const up = cross3(right, forward);
-  const s = sun.direction;
-  const sunFace = worldToFaceDirection(assembly.face, s);
+  return { toViewer, right, up };
+}
 
-  // Ground: the wedge's footprint grown by groundMm (world, Z = 0), CCW seen from above.
+/** The ground: the wedge's footprint grown by groundMm (world, Z = 0), CCW seen from above. */
+function groundRect(assembly: Assembly, groundMm: number): Vec2[] {
   const fp = assembly.footprint;
-  const g = o.groundMm;
-  const sign = north ? 1 : -1;
-  const groundRect: Vec2[] = (
+  const g = groundMm;
+  const sign = assembly.hemisphere === 'north' ? 1 : -1;
+  return (
     [
       [fp.xMinMm - g, fp.yMinMm - g],
       [fp.xMaxMm + g, fp.yMinMm - g],
@@ -90,9 +117,11 @@ export function viewAssembly(layout: DialLayout, drawing: PlateDrawing, sun: Pic
       [fp.xMinMm - g, fp.yMaxMm + g],
     ] as Vec2[]
   ).map(([x, y]) => [sign * x, sign * y]);
+}
 
-  // Ground shadow: every sun-facing facet projected along −s onto Z = 0, CCW, clipped to the ground.
-  const groundShadow: Vec2[][] = [];
+/** The ground shadow: every sun-facing facet projected along −s onto Z = 0, CCW, clipped to the ground. */
+function groundShadow(assembly: Assembly, s: Vec3, ground: readonly Vec2[]): Vec2[][] {
+  const out: Vec2[][] = [];
   for (const part of assembly.parts) {
     for (const f of part.facets) {
       if (dot3(f.normal, s) <= 1e-9) continue;
@@ -100,67 +129,68 @@ export function viewAssembly(layout: DialLayout, drawing: PlateDrawing, sun: Pic
       const a = shoelaceArea(q);
       if (Math.abs(a) < 1e-9) continue;
       if (a < 0) q = q.reverse();
-      q = clipPolygonConvex(q, groundRect);
-      if (q.length >= 3) groundShadow.push(q);
+      q = clipPolygonConvex(q, ground);
+      if (q.length >= 3) out.push(q);
     }
   }
+  return out;
+}
 
-  const P = (p: Vec3): Vec2 => [dot3(p, right), -dot3(p, up)];
-  const items: { item: PictureItem; pts: Vec2[] }[] = [];
-  const push = (item: PictureItem, pts: Vec2[]) => items.push({ item, pts });
-  const ground3 = groundRect.map(([x, y]) => [x, y, 0] as Vec3);
-  push({ kind: 'ground', polygon: ground3.map(P) }, ground3.map(P));
-  const gs = groundShadow.map((poly) => poly.map(([x, y]) => P([x, y, 0])));
-  push({ kind: 'shadow', on: 'ground', polygons: gs }, []);
+/** The ground and the dial's shadow on it, the first two items painted (the shadow does not size the frame). */
+function groundItems(ground: readonly Vec2[], shadow: readonly Vec2[][], P: (p: Vec3) => Vec2): Placed[] {
+  const ground3 = ground.map(([x, y]) => [x, y, 0] as Vec3);
+  const gs = shadow.map((poly) => poly.map(([x, y]) => P([x, y, 0])));
+  return [
+    { item: { kind: 'ground', polygon: ground3.map(P) }, pts: ground3.map(P) },
+    { item: { kind: 'shadow', on: 'ground', polygons: gs }, pts: [] },
+  ];
+}
 
-  const face = assembly.face;
+/** One part's faces toward the viewer (the gnomon's clipped at the face), grouped by plane, far to near, shaded by the sun. */
+function partFaceItems(part: PlacedPart, face: FaceFrame, toViewer: Vec3, s: Vec3, P: (p: Vec3) => Vec2): Placed[] {
   const heightOverFace = (p: Vec3) => dot3([p[0] - face.origin[0], p[1] - face.origin[1], p[2] - face.origin[2]], face.normal) + 1e-9;
-  for (const part of assembly.parts) {
-    const facets: Facet[] = [];
-    for (const f of part.facets) {
-      if (dot3(f.normal, toViewer) <= 1e-9) continue;
-      const pts = part.name === 'gnomon' ? clipPolygonAbovePlane(f.points, heightOverFace) : [...f.points];
-      if (pts.length >= 3) facets.push({ points: pts, normal: f.normal });
-    }
-    const depth = (group: Facet[]) => {
-      let sum = 0;
-      let count = 0;
-      for (const f of group) for (const p of f.points) (sum += dot3(p, toViewer)), count++;
-      return sum / count;
-    };
-    const groups = coplanarGroups(facets)
-      .map((group) => ({ group, d: depth(group) }))
-      .sort((a, b) => a.d - b.d);
-    for (const { group } of groups) {
-      const n = group[0].normal;
-      const shade = AMBIENT + (1 - AMBIENT) * Math.max(0, dot3(n, s));
-      const polys = group.map((f) => f.points.map(P));
-      push({ kind: 'face', part: part.name, shade: round6(shade), polygons: polys }, polys.flat());
-    }
-    if (part.name === 'plate') {
-      for (const it of faceEngraving(layout, drawing, assembly, toViewer, P)) push(it, []);
-    }
+  const facets: Facet[] = [];
+  for (const f of part.facets) {
+    if (dot3(f.normal, toViewer) <= 1e-9) continue;
+    const pts = part.name === 'gnomon' ? clipPolygonAbovePlane(f.points, heightOverFace) : [...f.points];
+    if (pts.length >= 3) facets.push({ points: pts, normal: f.normal });
   }
-  // The gnomon's shadow on the face goes just before the gnomon's own faces.
-  const shadow = gnomonShadowOnFace(layout, sunFace, assembly.faceOutline);
-  const firstGnomon = items.findIndex((e) => e.item.kind === 'face' && e.item.part === 'gnomon');
-  const shadowItem = { item: { kind: 'shadow', on: 'face', polygons: shadow.polygons.map((poly) => poly.map(([x, y]) => P(faceToWorld(face, [x, y, 0])))) } as PictureItem, pts: [] as Vec2[] };
-  items.splice(firstGnomon < 0 ? items.length : firstGnomon, 0, shadowItem);
+  const groups = coplanarGroups(facets)
+    .map((group) => ({ group, d: meanDepth(group, toViewer) }))
+    .sort((a, b) => a.d - b.d);
+  return groups.map(({ group }) => {
+    const shade = AMBIENT + (1 - AMBIENT) * Math.max(0, dot3(group[0].normal, s));
+    const polys = group.map((f) => f.points.map(P));
+    return { item: { kind: 'face', part: part.name, shade: round6(shade), polygons: polys }, pts: polys.flat() };
+  });
+}
 
-  // Picture frame from everything but the (clipped) shadows.
+/** The mean distance toward the viewer of a group's points (larger is nearer). */
+function meanDepth(group: readonly Facet[], toViewer: Vec3): number {
+  let sum = 0;
+  let count = 0;
+  for (const f of group) for (const p of f.points) (sum += dot3(p, toViewer)), count++;
+  return sum / count;
+}
+
+/** The items with the gnomon's shadow on the face put just before the gnomon's own faces (or last without a gnomon). */
+function withFaceShadow(items: readonly Placed[], shadow: FaceShadow, face: FaceFrame, P: (p: Vec3) => Vec2): Placed[] {
+  const firstGnomon = items.findIndex((e) => e.item.kind === 'face' && e.item.part === 'gnomon');
+  const shadowItem: Placed = { item: { kind: 'shadow', on: 'face', polygons: shadow.polygons.map((poly) => poly.map(([x, y]) => P(faceToWorld(face, [x, y, 0])))) }, pts: [] };
+  const at = firstGnomon < 0 ? items.length : firstGnomon;
+  return [...items.slice(0, at), shadowItem, ...items.slice(at)];
+}
+
+/** The picture frame from everything but the (clipped) shadows and engraving, with the margin, on whole mm. */
+function pictureFrame(items: readonly Placed[], marginMm: number): { left: number; topEdge: number; widthMm: number; heightMm: number } {
   const all = items.flatMap((e) => e.pts);
-  const minX = Math.min(...all.map((p) => p[0])) - o.marginMm;
-  const maxX = Math.max(...all.map((p) => p[0])) + o.marginMm;
-  const minY = Math.min(...all.map((p) => p[1])) - o.marginMm;
-  const maxY = Math.max(...all.map((p) => p[1])) + o.marginMm;
+  const minX = Math.min(...all.map((p) => p[0])) - marginMm;
+  const maxX = Math.max(...all.map((p) => p[0])) + marginMm;
+  const minY = Math.min(...all.map((p) => p[1])) - marginMm;
+  const maxY = Math.max(...all.map((p) => p[1])) + marginMm;
   const left = Math.floor(minX);
   const topEdge = Math.floor(minY);
-  const widthMm = Math.ceil(maxX) - left;
-  const heightMm = Math.ceil(maxY) - topEdge;
-  const view: AssemblyView = { toViewer, right, up, left, top: -topEdge };
-  const shift = (p: Vec2): Vec2 => [p[0] - left, p[1] - topEdge];
-  const moved = items.map(({ item }) => moveItem(item, shift));
-  return { widthMm, heightMm, view, items: moved, assembly, sun, sunFace, shadow };
+  return { left, topEdge, widthMm: Math.ceil(maxX) - left, heightMm: Math.ceil(maxY) - topEdge };
 }
 
 /** Holes, slots, marks and text of the plate drawing, on the face in the picture. */
