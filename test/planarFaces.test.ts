@@ -41,6 +41,10 @@ describe('every planar face type: build, read back, check on the real gnomon', (
       expect(check.pass).toBe(true);
       expect(reached.length).toBe(check.marks.length);
       for (const m of check.marks) expect(Math.abs(m.errorMm.worst)).toBeLessThanOrEqual(0.001);
+      // With a nodus: every date line and mean-time curve drawn is checked, each within 0.001 mm of the simulated nodus shadow.
+      expect(check.curves.length).toBe(layout.curves.length);
+      if (spec.gnomon.nodus) expect(check.curves.length).toBeGreaterThan(0);
+      for (const c of check.curves) expect(c.worstMm, c.label).toBeLessThanOrEqual(0.001);
       expect(check.stepMinutes).toBe(1);
       expect(check.everyDays).toBe(1);
     });
@@ -61,6 +65,45 @@ describe('every planar face type: build, read back, check on the real gnomon', (
     expect(check.failures.map((f) => f.label)).toEqual(['15:00']);
     expect(Math.abs(check.failures[0].errorMm)).toBeGreaterThan(0.0099);
     expect(Math.abs(check.failures[0].errorMm)).toBeLessThan(0.0101);
+  });
+
+  // The same faces given a nodus, date lines and mean-time curves (the
+  // declining wall has them in its fixture): the check's curves against the
+  // project's own simulated nodus shadow, the Sun from astronomy-engine
+  // (sunTrack, topocentric, every day of the year).
+  for (const name of ['garden-horizontal', 'wall-reclining', 'meridian-east']) {
+    it(`${name} with a nodus: every date line and mean-time curve within 0.001 mm of the simulated shadow`, () => {
+      const raw = parse(readFileSync(new URL(`../fixtures/planar/${name}.yaml`, import.meta.url), 'utf8'));
+      const layout = layoutPlanar(parseSpec({ ...raw, gnomon: { ...raw.gnomon, nodus: true }, dial: { ...raw.dial, meanTimeCurves: true }, calendar: { ...raw.calendar, lines: ['solstices', 'equinox'] } }));
+      const check = checkPlanar(layout, { toleranceMm: 0.001 });
+      console.log(`${name} + nodus: ${check.curves.map((c) => `${c.label} ${c.worstMm.toExponential(2)} mm / ${c.worstS.toFixed(3)} s over ${c.samples}`).join('; ')}`);
+      expect(check.curves.filter((c) => c.kind === 'meanTime').length).toBeGreaterThan(3);
+      expect(check.curves.filter((c) => c.kind === 'date').length).toBeGreaterThan(0);
+      for (const c of check.curves) expect(c.worstMm, c.label).toBeLessThanOrEqual(0.001);
+      expect(check.pass).toBe(true);
+    });
+  }
+
+  it('a stretch of a mean-time curve moved by 0.05 mm is caught, the other curves still pass (tolerance 0.001 mm)', () => {
+    const layout = layoutPlanar(specOf('wall-declining'));
+    const k = layout.curves.findIndex((c) => c.label === '12:00 mean time');
+    const curve = layout.curves[k];
+    const path = curve.paths[0];
+    // Move ten vertices from the middle of the first run square to the run, by 0.05 mm.
+    const i0 = Math.floor(path.length / 2) - 5;
+    const moved = path.map((p, i): readonly [number, number] => {
+      if (i < i0 || i >= i0 + 10) return p;
+      const [a, b] = [path[i0 - 1], path[i0 + 10]];
+      const l = Math.hypot(b[0] - a[0], b[1] - a[1]);
+      return [p[0] - ((b[1] - a[1]) / l) * 0.05, p[1] + ((b[0] - a[0]) / l) * 0.05];
+    });
+    const curves = layout.curves.map((c, j) => (j === k ? { ...c, paths: [moved, ...c.paths.slice(1)] } : c));
+    const check = checkPlanar(layout, { curves, toleranceMm: 0.001 });
+    expect(check.pass).toBe(false);
+    expect(check.curves.filter((c) => !c.pass).map((c) => c.label)).toEqual(['12:00 mean time']);
+    const hit = check.curves.find((c) => c.label === '12:00 mean time')!;
+    expect(hit.worstMm).toBeGreaterThan(0.04);
+    expect(hit.worstMm).toBeLessThan(0.0502);
   });
 
   it('a declining wall leaves out the hours it cannot see and says so', () => {

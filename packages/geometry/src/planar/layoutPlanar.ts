@@ -400,7 +400,7 @@ function planarCurves(spec: DialSpec, face: PlanarFace, model: PlanarGnomon, gno
     const whole = [...new Set(marks.filter((m) => m.kind === 'hour').map((m) => m.minutes))];
     for (const minutes of whole) {
       const label = formatClock(minutes);
-      const runs = planarMeanTimeCurve(face, model, { clockMinutes: minutes, year: spec.calendar.year, shiftDeg: spec.site.longitude - time.standardMeridianDeg, standardMeridianDeg: time.standardMeridianDeg, stepDays: 2, alongStyleMm: along });
+      const runs = planarMeanTimeCurve(face, model, { clockMinutes: minutes, year: spec.calendar.year, shiftDeg: spec.site.longitude - time.standardMeridianDeg, standardMeridianDeg: time.standardMeridianDeg, alongStyleMm: along });
       const paths = runs.flatMap((r) => clip(r.points));
       if (paths.length) out.push({ label: `${label} mean time`, kind: 'meanTime', widthMm: width, paths });
     }

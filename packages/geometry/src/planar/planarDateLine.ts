@@ -33,24 +33,44 @@ export function planarDateLine(face: PlanarFace, gnomon: PlanarGnomon, declinati
   );
 }
 
+/** One Sun position of a date line or mean-time curve. */
+export interface NodusSample {
+  readonly sun: readonly [number, number, number];
+  readonly hourAngleRad: number;
+}
+
+/**
+ * The nodus shadow of one Sun position: the point cast by the nodus on the
+ * edge that casts at its hour angle (`hourLine`), or null when the face does
+ * not see the Sun.
+ */
+export function nodusShadowOf(face: PlanarFace, gnomon: PlanarGnomon, sample: NodusSample, alongStyleMm?: number): { readonly edge: FinEdge; readonly point: Vec2 } | null {
+  const set = faceSeesSun(face, sample.sun) ? hourLine(face, gnomon, sample.hourAngleRad) : null;
+  const edge = set?.lines[0]?.edge;
+  const X = edge ? nodusShadow(face, nodusPoint(face, gnomon, edge, alongStyleMm), sample.sun) : null;
+  return edge && X ? { edge, point: X } : null;
+}
+
 /** Nodus shadows for a sequence of (Sun, hour angle) samples, split into runs (shared by date lines and mean-time curves). */
-export function nodusTraces(face: PlanarFace, gnomon: PlanarGnomon, samples: readonly { readonly sun: readonly [number, number, number]; readonly hourAngleRad: number }[], alongStyleMm?: number): readonly NodusTrace[] {
+export function nodusTraces(face: PlanarFace, gnomon: PlanarGnomon, samples: readonly NodusSample[], alongStyleMm?: number): readonly NodusTrace[] {
+  return shadowRuns(samples.map((s) => nodusShadowOf(face, gnomon, s, alongStyleMm)));
+}
+
+/** Shadow points in order (null where the face is dark) split into runs wherever the casting edge changes or the Sun leaves the face; single points dropped. */
+export function shadowRuns(shadows: readonly ({ readonly edge: FinEdge; readonly point: Vec2 } | null)[]): readonly NodusTrace[] {
   const runs: NodusTrace[] = [];
   let current: { edge: FinEdge; points: Vec2[] } | null = null;
-  for (const { sun, hourAngleRad } of samples) {
-    const set = faceSeesSun(face, sun) ? hourLine(face, gnomon, hourAngleRad) : null;
-    const edge = set?.lines[0]?.edge;
-    const X = edge ? nodusShadow(face, nodusPoint(face, gnomon, edge, alongStyleMm), sun) : null;
-    if (!edge || !X) {
+  for (const x of shadows) {
+    if (!x) {
       if (current && current.points.length > 1) runs.push(current);
       current = null;
       continue;
     }
-    if (!current || current.edge !== edge) {
+    if (!current || current.edge !== x.edge) {
       if (current && current.points.length > 1) runs.push(current);
-      current = { edge, points: [] };
+      current = { edge: x.edge, points: [] };
     }
-    current.points.push(X);
+    current.points.push(x.point);
   }
   if (current && current.points.length > 1) runs.push(current);
   return runs;

@@ -1,12 +1,13 @@
+import { DEG } from '../guards.ts';
+import { lineHourAngleDeg } from '../clock/lineHourAngle.ts';
 import { equationOfTimeMin } from '../sun/equationOfTimeMin.ts';
 import { MS_PER_DAY } from '../sun/localDate.ts';
-import { sunDeclinationRad } from '../sun/sunDeclinationRad.ts';
-import { DEG } from '../guards.ts';
-import { nodusTraces, type NodusTrace } from './planarDateLine.ts';
+import { sunEquatorOfDate } from '../sun/sunEquatorOfDate.ts';
+import { observerMeridianAu, topocentricSun } from '../sun/topocentricSun.ts';
+import type { Vec2 } from '../types.ts';
+import { nodusShadowOf, shadowRuns, type NodusTrace } from './planarDateLine.ts';
 import type { PlanarFace } from './planarTypes.ts';
 import type { PlanarGnomon } from './styleEdgeAnchor.ts';
-import { sunDirectionEnu } from './sunDirectionEnu.ts';
-import { lineHourAngleDeg } from '../clock/lineHourAngle.ts';
 
 /** Options of `planarMeanTimeCurve`. */
 export interface PlanarMeanTimeOptions {
@@ -17,29 +18,84 @@ export interface PlanarMeanTimeOptions {
   readonly shiftDeg: number;
   /** the zone's standard meridian λs, degrees east (sets the UTC instant of the clock time) */
   readonly standardMeridianDeg: number;
-  /** days between samples (default 1) */
+  /** days between the first samples, before refinement (default 2) */
   readonly stepDays?: number;
+  /** largest distance of the true curve from a drawn chord, mm (default 0.0005: half the 0.001 mm the check holds every curve to) */
+  readonly chordToleranceMm?: number;
   readonly alongStyleMm?: number;
 }
 
+/** Defaults of `planarMeanTimeCurve`. */
+export const PLANAR_MEAN_TIME_DEFAULTS = { stepDays: 2, chordToleranceMm: 0.0005 } as const;
+
+/** Halvings of a first step at most (2 days / 2¹² ≈ 42 s of date). */
+const MAX_HALVINGS = 12;
+
 /**
  * The mean-time (figure-of-eight) curve of one standard clock time on any
- * planar face (DESIGN §3, §8): for each day, at that clock time,
+ * planar face (DESIGN §3, §8): at that clock time T on each date,
  * H = 15°·(T − 12 h) + (λ − λs) + E/4 min·° with E the equation of time and
- * δ the declination of that instant (astronomy-engine, via
- * `equationOfTimeMin` and `sunDeclinationRad`), then the nodus shadow, split
- * where the Sun leaves the face or the casting edge changes.
+ * δ, r the Sun's declination and distance of that instant (astronomy-engine,
+ * via `equationOfTimeMin` and `sunEquatorOfDate`), turned into the Sun seen
+ * from the site (`topocentricSun`: the diurnal parallax, up to 8.8″, moves
+ * the shadow by a few µm, as the real Sun does), then the nodus shadow,
+ * split where the Sun leaves the face or the casting edge changes.
+ *
+ * Sampling: every `stepDays` from 1 January at T to 1 January of the next
+ * year at T (the loop closes), each step halved while the curve's point at
+ * the step's middle lies more than `chordToleranceMm` from the chord (at
+ * most 12 halvings). Between the days the same formulas run on the
+ * fractional date (E, δ and r vary smoothly), so each chord follows the
+ * curve the real shadow draws day by day.
+ *
+ * @example planarMeanTimeCurve(face, gnomon, { clockMinutes: 720, year: 2027, shiftDeg: 0, standardMeridianDeg: 0 })[0].points.length
  */
-export function planarMeanTimeCurve(face: PlanarFace, gnomon: PlanarGnomon, o: PlanarMeanTimeOptions): readonly NodusTrace[] {
-  const step = o.stepDays ?? 1;
-  const start = Date.UTC(o.year, 0, 1);
-  const end = Date.UTC(o.year + 1, 0, 1);
+export function planarMeanTimeCurve(face: PlanarFace, gnomon: PlanarGnomon, options: PlanarMeanTimeOptions): readonly NodusTrace[] {
+  const o = { ...PLANAR_MEAN_TIME_DEFAULTS, ...options };
   const phi = face.orientation.latitudeRad;
-  const samples = [];
-  for (let ms = start; ms <= end; ms += step * MS_PER_DAY) {
-    const instant = new Date(Math.round(ms + o.clockMinutes * 60_000 - (o.standardMeridianDeg / 15) * 3_600_000));
-    const H = (lineHourAngleDeg(o.clockMinutes, o.shiftDeg) + equationOfTimeMin(instant) / 4) * DEG;
-    samples.push({ sun: sunDirectionEnu(phi, H, sunDeclinationRad(instant)), hourAngleRad: H });
+  const observer = observerMeridianAu(phi / DEG, 0);
+  const lineDeg = lineHourAngleDeg(o.clockMinutes, o.shiftDeg);
+  const shadowAt = (ms: number) => {
+    const instant = new Date(Math.round(ms));
+    const eq = sunEquatorOfDate(instant);
+    const hGeo = (lineDeg + equationOfTimeMin(instant) / 4) * DEG;
+    const topo = topocentricSun(hGeo, eq.declinationRad, eq.distanceAu, phi, observer);
+    return nodusShadowOf(face, gnomon, { sun: topo.enu, hourAngleRad: topo.hourAngleRad }, o.alongStyleMm);
+  };
+  const offsetMs = o.clockMinutes * 60_000 - (o.standardMeridianDeg / 15) * 3_600_000;
+  const start = Date.UTC(o.year, 0, 1) + offsetMs;
+  const end = Date.UTC(o.year + 1, 0, 1) + offsetMs;
+  const times: number[] = [];
+  for (let ms = start; ms < end; ms += o.stepDays * MS_PER_DAY) times.push(ms);
+  times.push(end);
+
+  type Shadow = ReturnType<typeof shadowAt>;
+  const out: Shadow[] = [];
+  const refine = (ta: number, a: Shadow, tb: number, b: Shadow, depth: number) => {
+    if (!a || !b || a.edge !== b.edge || depth >= MAX_HALVINGS) return;
+    const tm = (ta + tb) / 2;
+    const m = shadowAt(tm);
+    if (!m || m.edge !== a.edge || chordSag(a.point, m.point, b.point) <= o.chordToleranceMm) return;
+    refine(ta, a, tm, m, depth + 1);
+    out.push(m);
+    refine(tm, m, tb, b, depth + 1);
+  };
+  let prev = shadowAt(times[0]);
+  out.push(prev);
+  for (let i = 1; i < times.length; i++) {
+    const next = shadowAt(times[i]);
+    refine(times[i - 1], prev, times[i], next, 0);
+    out.push(next);
+    prev = next;
   }
-  return nodusTraces(face, gnomon, samples, o.alongStyleMm);
+  return shadowRuns(out);
+}
+
+/** Distance of m from the segment a–b, mm. */
+function chordSag(a: Vec2, m: Vec2, b: Vec2): number {
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const l2 = dx * dx + dy * dy;
+  const u = l2 > 0 ? Math.max(0, Math.min(1, ((m[0] - a[0]) * dx + (m[1] - a[1]) * dy) / l2)) : 0;
+  return Math.hypot(m[0] - a[0] - u * dx, m[1] - a[1] - u * dy);
 }

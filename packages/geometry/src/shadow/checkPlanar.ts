@@ -7,7 +7,7 @@ import { parseClock } from '../spec/parseClock.ts';
 import { instantAtHourAngle, sunOnDay, sunTrack, type RefractionModel, type SunDay, type SunSample } from '../sun/sunTrack.ts';
 import type { Vec2 } from '../types.ts';
 import { edgeSign } from '../planar/styleEdgeAnchor.ts';
-import type { PlanarLayout, PlanarMark } from '../planar/layoutPlanar.ts';
+import type { PlanarCurve, PlanarLayout, PlanarMark } from '../planar/layoutPlanar.ts';
 import { planarGnomonSolid } from '../planar/planarGnomonSolid.ts';
 import type { FinEdge } from '../planar/planarTypes.ts';
 import { sunDirectionEnu } from '../planar/sunDirectionEnu.ts';
@@ -16,8 +16,6 @@ import { styleEdges, type Edge3 } from './styleEdges.ts';
 
 /** Rate of the hour angle, rad per second of time (one turn per solar day, as the polar check). */
 const HOUR_ANGLE_RAD_PER_S = (2 * Math.PI) / 86_400;
-/** Curves (date lines, mean-time curves) are drawn as polylines of sampled points: their own tolerance, mm. */
-export const CURVE_TOLERANCE_MM = 0.05;
 
 export interface PlanarCheckOptions {
   /** largest accepted shadow-to-line distance, mm (default spec.check.tolerance) */
@@ -29,6 +27,8 @@ export interface PlanarCheckOptions {
   readonly year?: number;
   /** the lines as drawn (default: the layout's marks), e.g. one moved on purpose */
   readonly marks?: readonly PlanarMark[];
+  /** the date lines and mean-time curves as drawn (default: the layout's curves), e.g. one moved on purpose */
+  readonly curves?: readonly PlanarCurve[];
 }
 
 export interface PlanarMarkCheck {
@@ -65,6 +65,7 @@ export interface PlanarCheckResult {
   readonly faceType: PlanarLayout['faceType'];
   readonly year: number;
   readonly toleranceMm: number;
+  /** tolerance of the date lines and mean-time curves, mm: the same as the lines' (they are sampled finely enough, `planarMeanTimeCurve`) */
   readonly curveToleranceMm: number;
   readonly stepMinutes: number;
   readonly everyDays: number;
@@ -172,7 +173,7 @@ export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = 
     };
   });
 
-  const curves = checkCurves(layout, track.days, frame, nodusOf, (s) => lit(s, frame(s.enu)), track);
+  const curves = checkCurves(layout, options.curves ?? layout.curves, toleranceMm, track.days, frame, nodusOf, (s) => lit(s, frame(s.enu)), track);
   sunPositions += curves.reduce((n, cv) => n + cv.samples, 0);
 
   let worst: PlanarCheckResult['worst'] = null;
@@ -189,7 +190,7 @@ export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = 
     faceType: layout.faceType,
     year,
     toleranceMm,
-    curveToleranceMm: Math.max(toleranceMm, CURVE_TOLERANCE_MM),
+    curveToleranceMm: toleranceMm,
     stepMinutes,
     everyDays,
     refraction,
@@ -202,7 +203,7 @@ export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = 
       'instant: topocentric hour angle = the line\'s hour angle (Newton on the track)',
       part.kind === 'rod' ? 'shadow: the centre of the rod mesh\'s top, projected along the rays onto the face' : 'shadow: the style edges found in the fin mesh (planarGnomonSolid), projected along the rays onto the face',
       'error: perpendicular distance of the shadow from the drawn line where they overlap; seconds: that distance over the shadow\'s motion in one second of hour angle',
-      `curves: nodus on the mesh's style edge; date lines at the line's declination on its date; mean-time curves with the real Sun at the clock time; tolerance ${Math.max(toleranceMm, CURVE_TOLERANCE_MM)} mm (polylines of sampled points)`,
+      `curves: nodus on the mesh's style edge; date lines at the line's declination on its date; mean-time curves with the real Sun at the clock time; distance to the drawn polyline, tolerance ${toleranceMm} mm as for the lines`,
     ],
     marks,
     curves,
@@ -308,6 +309,8 @@ function turnSun(enu: Vec3, latitudeRad: number, dH: number): Vec3 {
 
 function checkCurves(
   layout: PlanarLayout,
+  drawnCurves: readonly PlanarCurve[],
+  tol: number,
   days: readonly SunDay[],
   frame: (v: Vec3) => Vec3,
   nodusOf: (edge: FinEdge) => Vec3 | null,
@@ -315,13 +318,12 @@ function checkCurves(
   track: ReturnType<typeof sunTrack>,
 ): PlanarCurveCheck[] {
   const spec = layout.spec;
-  if (layout.curves.length === 0) return [];
+  if (drawnCurves.length === 0) return [];
   const phi = spec.site.latitude * DEG;
-  const tol = Math.max(spec.check.tolerance, CURVE_TOLERANCE_MM);
   const entries = dateLineEntries(spec);
   const hs = layout.marks.map((m) => m.hourAngleDeg);
   const out: PlanarCurveCheck[] = [];
-  for (const curve of layout.curves) {
+  for (const curve of drawnCurves) {
     let worstMm = 0;
     let worstS = 0;
     let worstDate: string | null = null;

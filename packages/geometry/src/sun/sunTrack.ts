@@ -1,10 +1,10 @@
-import { KM_PER_AU, MakeTime, Refraction, SiderealTime } from 'astronomy-engine';
+import { MakeTime, Refraction, SiderealTime } from 'astronomy-engine';
 import { SpecError } from '../errors.ts';
 import { DEG, assertRange } from '../guards.ts';
 import type { Vec3 } from '../parts/mesh.ts';
-import { EARTH_EQUATORIAL_RADIUS_KM, EARTH_FLATTENING } from './earthFigure.ts';
 import { MS_PER_DAY, formatIsoDate } from './localDate.ts';
 import { sunEquatorOfDate } from './sunEquatorOfDate.ts';
+import { observerMeridianAu, topocentricSun } from './topocentricSun.ts';
 import { assertZone, zoneYearOffsets } from './zoneOffsets.ts';
 
 /**
@@ -169,14 +169,7 @@ export function sunTrack(options: SunTrackOptions): SunTrack {
     });
   }
 
-  // Geocentric position of the observer (astronomy-engine terra(), from
-  // NOVAS): c = 1/√(cos²φ + f²sin²φ), s = f²c, distance from the axis
-  // (a·c + h)·cos φ, height above the equator (a·s + h)·sin φ.
-  const phi = lat * DEG;
-  const c = 1 / Math.hypot(Math.cos(phi), EARTH_FLATTENING * Math.sin(phi));
-  const s = EARTH_FLATTENING * EARTH_FLATTENING * c;
-  const hKm = heightM / 1000;
-  const observerAu: [number, number] = [((EARTH_EQUATORIAL_RADIUS_KM * c + hKm) * Math.cos(phi)) / KM_PER_AU, ((EARTH_EQUATORIAL_RADIUS_KM * s + hKm) * Math.sin(phi)) / KM_PER_AU];
+  const observerAu = observerMeridianAu(lat, heightM);
 
   return { latitudeDeg: lat, longitudeDeg: lon, heightM, timezone: zone, standardOffsetHours: std, refraction, observerAu, days, ephemerisCalls: cache.size };
 }
@@ -202,22 +195,8 @@ export function sunOnDay(track: SunTrack, day: SunDay, utcMs: number): SunSample
   const gast = w0 * S[0] + w1 * S[1] + w2 * S[2] + SIDEREAL_DEG_PER_DAY * DEG * tau;
   const hGeo = gast + track.longitudeDeg * DEG - ra;
 
-  // Geocentric Sun in the local meridian frame (toward the equator on the
-  // meridian, east, north), minus the observer: the topocentric Sun.
-  const cd = Math.cos(dec);
-  const vx = dist * cd * Math.cos(hGeo) - track.observerAu[0];
-  const vy = -dist * cd * Math.sin(hGeo);
-  const vz = dist * Math.sin(dec) - track.observerAu[1];
-  const r = Math.sqrt(vx * vx + vy * vy + vz * vz);
-  const mx = vx / r;
-  const my = vy / r;
-  const mz = vz / r;
-  const phi = track.latitudeDeg * DEG;
-  const sp = Math.sin(phi);
-  const cp = Math.cos(phi);
-  let e = my;
-  let n = -sp * mx + cp * mz;
-  let u = cp * mx + sp * mz;
+  const topo = topocentricSun(hGeo, dec, dist, track.latitudeDeg * DEG, track.observerAu);
+  let [e, n, u] = topo.enu;
   const alt = Math.asin(Math.max(-1, Math.min(1, u)));
   if (track.refraction === 'normal') {
     const lifted = alt + Refraction('normal', alt / DEG) * DEG;
@@ -231,8 +210,8 @@ export function sunOnDay(track: SunTrack, day: SunDay, utcMs: number): SunSample
   const eDeg = wrapPi(gast - ra + Math.PI - utHours * 15 * DEG) / DEG;
   return {
     utcMs,
-    hourAngleRad: Math.atan2(-my, mx),
-    declinationRad: Math.asin(Math.max(-1, Math.min(1, mz))),
+    hourAngleRad: topo.hourAngleRad,
+    declinationRad: topo.declinationRad,
     altitudeRad: alt,
     enu: [e, n, u],
     distanceAu: dist,
