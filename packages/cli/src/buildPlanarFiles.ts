@@ -3,6 +3,7 @@ import {
   mapMesh,
   meshBounds,
   planarGnomonSolid,
+  pillarFixing,
   planarInstallSheet,
   planarPlateDrawing,
   standSolid,
@@ -79,6 +80,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   files.push(...extras.files);
   files.push({ name: 'install.md', bytes: utf8(toPlanarInstallMd(planarInstallSheet(layout), extras.templateGuide)) });
 
+  const pillar = pillarFixing(layout);
   const names = [...files.map((f) => f.name), 'report.json'];
   const report: PlanarReport = {
     generator,
@@ -109,6 +111,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
     ...(finCut ? { parts: { gnomonDxf: finCut.report } } : {}),
     ...(mount.report ? { mount: mount.report } : {}),
     ...(stand.report ? { stand: stand.report } : {}),
+    ...(pillar ? { pillar } : {}),
     ...extras.report,
     time: layout.time,
     engraving: engraving.report,

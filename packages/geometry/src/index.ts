@@ -97,6 +97,7 @@ export type { FaceType } from './spec/sections/faceSection.ts';
 export { planarPlateDrawing } from './planar/planarPlateDrawing.ts';
 export { planarGnomonSolid, type PlanarGnomonPart } from './planar/planarGnomonSolid.ts';
 export { planarInstallSheet, type PlanarInstallSheet } from './planar/planarInstallSheet.ts';
+export { pillarFixing, PILLAR_LEVELLING_GAP_MM, type PillarFixing } from './planar/pillarFixing.ts';
 export { wallDeclinationFromShadow, type ShadowReading } from './planar/wallDeclinationFromShadow.ts';
 export { wallMount, WALL_MOUNT_RIM_MM, WALL_ANCHOR_HOLE_MM, type WallMountFixing } from './planar/wallMount.ts';
 export { equatorialStand, equatorialStandApplies, type EquatorialStand, type EquatorialFixing } from './planar/equatorialStand.ts';

@@ -1,4 +1,4 @@
-import type { FaceType, FastenerRow, FinEdge, Hemisphere, LeftOutHour, MarkKind, PlanarGnomonLayout, TimeLayout, Vec2, Vec3, WallMountFixing } from '@umbrafab/geometry';
+import type { FaceType, FastenerRow, FinEdge, Hemisphere, LeftOutHour, MarkKind, PillarFixing, PlanarGnomonLayout, TimeLayout, Vec2, Vec3, WallMountFixing } from '@umbrafab/geometry';
 import type { EngravingReport } from '@umbrafab/fabricate';
 import type { CutFileSection } from './cutParts.ts';
 import type { MeshFigures } from './partsOutputs.ts';
@@ -37,6 +37,8 @@ export interface PlanarSections {
   readonly mount?: WallMountSection;
   /** an equatorial face's stand (stand.dxf, stand.stl); absent for other faces */
   readonly stand?: EquatorialStandSection;
+  /** a horizontal face's fixing to its pillar top (studs set in resin, levelling nuts); absent for other faces or a plate without holes */
+  readonly pillar?: PillarFixing;
   /** how the dial reads and the corrections to clock time */
   readonly time: TimeLayout;
   readonly engraving: EngravingReport;

@@ -1,6 +1,7 @@
 import type { InstallSheet } from '@umbrafab/geometry';
 import { roundTo } from '../process/roundTo.ts';
 import { escapeMarkdownText as md } from './markdownText.ts';
+import { fastenerSectionMd } from './fastenerSectionMd.ts';
 
 /** Fixed decimals, rounded through roundTo (no −0). */
 function fx(v: number, decimals: number): string {
@@ -44,13 +45,7 @@ export function toInstallMd(sheet: InstallSheet): string {
   for (const w of a.weights.parts) out.push(`| ${w.part} | ${w.material} | ${w.quantity} | ${fx(w.massKgEach, 2)} | ${fx(w.massKg, 2)} |`);
   out.push(`| **total to lift and ship** | | | | **${fx(a.weights.totalKg, 2)}** |`, '');
   out.push(`Heaviest piece ${fx(a.weights.heaviestPieceKg, 2)} kg; ${a.weights.note}.`, '');
-  out.push('## Fasteners', '');
-  if (a.fasteners.length === 0) out.push('None listed.', '');
-  else {
-    out.push('| for | item | size | length (mm) | count | countersink |', '|---|---|---|---|---|---|');
-    for (const f of a.fasteners) out.push(`| ${f.use} | ${f.item} | ${f.size} | ${f.lengthMm === null ? '–' : fx(f.lengthMm, 0)} | ${f.count} | ${f.countersink} |`);
-    out.push('');
-  }
+  out.push(...fastenerSectionMd(a.fasteners));
   out.push('## Assembly', '');
   a.steps.forEach((st, i) => out.push(`${i + 1}. **${st.title}.** ${st.text}`));
   out.push('');

@@ -1,5 +1,6 @@
 import type { PlanarInstallSheet } from '@umbrafab/geometry';
 import { escapeMarkdownText } from './markdownText.ts';
+import { fastenerSectionMd } from './fastenerSectionMd.ts';
 
 /** Which sheets of template.pdf show what (for install.md's template section). */
 export interface PlanarTemplateGuide {
@@ -14,7 +15,7 @@ export interface PlanarTemplateGuide {
 /**
  * install.md for a horizontal, wall, meridian or equatorial face: the
  * cautions first, then the paper template (when template.pdf is written),
- * the numbered steps, the hours left out and the face's figures (CommonMark).
+ * the fasteners to buy (when the face's carrier has them), the numbered steps, the hours left out and the face's figures (CommonMark).
  */
 export function toPlanarInstallMd(sheet: PlanarInstallSheet, template?: PlanarTemplateGuide): string {
   const out: string[] = [`# Installing ${escapeMarkdownText(sheet.title)} (${sheet.faceType} face)`, ''];
@@ -22,6 +23,7 @@ export function toPlanarInstallMd(sheet: PlanarInstallSheet, template?: PlanarTe
   for (const c of sheet.cautions) out.push(`- ${c}`);
   out.push('- Work on a wall from a secured ladder or scaffold; check for buried cables and pipes before drilling.', '');
   if (template) out.push(...templateSection(template));
+  if (sheet.fasteners.length) out.push(...fastenerSectionMd(sheet.fasteners));
   out.push('## Steps', '');
   sheet.steps.forEach((s, i) => out.push(`${i + 1}. ${s}`));
   out.push('', '## The face', '');

@@ -1,8 +1,12 @@
 import { INSTALL_CAUTIONS } from '../install/installSheet.ts';
 import type { PlanarLayout } from './layoutPlanar.ts';
 import { wallMount } from './wallMount.ts';
-import { equatorialStandApplies } from './equatorialStand.ts';
+import { equatorialStand, equatorialStandApplies } from './equatorialStand.ts';
+import type { FastenerRow } from '../stand/fastenerTable.ts';
 import { equatorialStandSteps } from './equatorialStandSteps.ts';
+import { pillarFixing } from './pillarFixing.ts';
+import { compassSentence } from './compassSentence.ts';
+import { jointFixing } from '../install/assemblyGuide.ts';
 
 /** The installation sheet of a planar face: plain data, every length mm, angle degrees. */
 export interface PlanarInstallSheet {
@@ -15,6 +19,8 @@ export interface PlanarInstallSheet {
   /** the steps in order, plain sentences */
   readonly steps: readonly string[];
   readonly leftOut: readonly string[];
+  /** what to buy to fix the face: its pillar studs, its wall mount's screws and anchors, or its stand's (empty when none is sized) */
+  readonly fasteners: readonly FastenerRow[];
   readonly cautions: readonly string[];
 }
 
@@ -40,11 +46,7 @@ export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
   const rootAt = `${f1(layout.plate.substyleX)} mm from the plate's left edge and ${f1(layout.plate.faceOriginY)} mm from its lower edge`;
   switch (layout.faceType) {
     case 'horizontal':
-      steps.push(
-        `Set the plate level in both directions with a spirit level on a firm pillar (a digital level should read 0.0°).`,
-        `Turn it so the substyle (the reference line under the fin, through the root at ${rootAt}) lies on the true meridian, the fin rising toward the true ${pole}. Find the meridian from a plumb line's shadow at local apparent noon, never from the Sun itself.`,
-        `Fit the fin in its slots: its style must rise at ${f2(psi)}° from the plate (the site's |latitude|) toward the ${pole}.`,
-      );
+      steps.push(...horizontalSteps(layout, rootAt));
       break;
     case 'vertical': {
       const f = spec.face!;
@@ -93,6 +95,7 @@ export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
     substyleHourAngleDeg: layout.substyleHourAngleDeg,
     steps,
     leftOut: layout.leftOut.map((l) => `${l.label}: ${l.reason}`),
+    fasteners: faceFasteners(layout),
     cautions: INSTALL_CAUTIONS,
   };
 }
@@ -114,4 +117,47 @@ function mountSteps(layout: PlanarLayout, direct: string): string[] {
     `Drill the wall and fix the mount through its ${wall.count} anchor holes: wall plugs and stainless screws with washers (timber: coach screws), ${wall.lengthMm} mm long as a first figure; the plug maker's data and the wall rule.`,
     `Screw the dial plate to the mount with ${dial.count} ${dial.size} × ${dial.lengthMm} mm stainless pan-head screws.`,
   ];
+}
+
+/**
+ * Setting a horizontal face on its pillar (common practice): fix the fin in
+ * its slots first and square it; mark the true meridian on the pillar top
+ * from a plumb line's noon shadow; lay the plate (or its 1:1 template sheet)
+ * with the substyle on that mark and mark the holes; set the studs of
+ * `pillarFixing` in resin; level the plate on nuts under it; nut it down.
+ * Without corner holes the plate is bedded on the pillar instead.
+ */
+function horizontalSteps(layout: PlanarLayout, rootAt: string): string[] {
+  const spec = layout.spec;
+  const pole = spec.site.latitude >= 0 ? 'north' : 'south';
+  const psi = f2(layout.gnomon.styleHeightDeg);
+  const tabs = layout.gnomon.tabs.length;
+  const steps = [
+    tabs > 0
+      ? `Fix the fin: push its ${tabs} tabs through the plate's slots from the face side until its foot sits flat on the face, the style edge rising toward the ${pole}; check with a try square that it stands at 90° to the face, then ${jointFixing(spec.plate.material)}. Its style must rise at ${psi}° from the plate (the site's |latitude|).`
+      : `Fix the fin on the substyle, square to the face, its style rising at ${psi}° from the plate (the site's |latitude|) toward the ${pole}.`,
+    `Mark the true meridian on the pillar top (true ${pole}, not magnetic: ${compassSentence(layout)}); refine it with the shadow of a plumb line at local apparent noon (the longitude correction and the equation of time in report.json, time). Never look at the Sun to find it.`,
+  ];
+  const p = pillarFixing(layout);
+  if (!p) {
+    steps.push(
+      `Lay the plate on the pillar with its substyle (the reference line under the fin, through the root at ${rootAt}) on the meridian mark, the fin rising toward the true ${pole}, and bed it level in both directions (a digital level should read 0.0°) on an exterior adhesive or mortar for the pillar's stone.`,
+    );
+    return steps;
+  }
+  const d = (2 * layout.plate.holes[0].radiusMm).toFixed(1);
+  steps.push(
+    `Lay the plate (or its 1:1 paper template) on the pillar top with its substyle (the reference line under the fin, through the root at ${rootAt}) on the meridian mark, the fin rising toward the true ${pole}, and mark the ${p.studCount} hole centres through its Ø ${d} mm holes.`,
+    `Drill each mark for the resin anchor of an ${p.size} stud, ${p.embedMm} mm deep as a first figure (the resin maker's data give the drill size and the depth), clean the dust out, and set the ${p.studCount} ${p.size} × ${p.studLengthMm} mm studs in the resin, upright, ${p.embedMm} mm in; leave it to cure as the maker says.`,
+    `Run a levelling nut and a washer down each stud to about ${p.levellingGapMm} mm above the pillar top, lay the plate on them face up, and turn the nuts until a spirit level reads level in both directions (a digital level should read 0.0°); the gap lets rain run off under the plate.`,
+    `Put a washer and a nylon-insert nut on each stud and tighten them evenly, holding the levelling nuts; check the level and the noon shadow once more. Cut any stud standing proud of its nut and file the end smooth.`,
+  );
+  return steps;
+}
+
+/** The fasteners of whatever carries the face: the horizontal plate's pillar studs, a wall mount's, or an equatorial stand's. */
+function faceFasteners(layout: PlanarLayout): readonly FastenerRow[] {
+  if (layout.faceType === 'horizontal') return pillarFixing(layout)?.fasteners ?? [];
+  if (layout.faceType === 'equatorial') return equatorialStandApplies(layout) ? equatorialStand(layout).fasteners : [];
+  return wallMount(layout)?.fasteners ?? [];
 }
