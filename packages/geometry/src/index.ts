@@ -54,7 +54,7 @@ export { meshVolumeMm3 } from './parts/meshVolumeMm3.ts';
 export { meshBounds } from './parts/meshBounds.ts';
 export { validateMesh } from './parts/validateMesh.ts';
 export { gnomonLaidFlat } from './parts/gnomonLaidFlat.ts';
-export { gnomonSolid } from './parts/gnomonSolid.ts';
+export { gnomonSolid, type GnomonPart } from './parts/gnomonSolid.ts';
 export { wedgeSolid, WEDGE_MAX_TILT_DEG, type WedgePart } from './parts/wedgeSolid.ts';
 export { partsPlan, type PartsPlan } from './parts/partsPlan.ts';
 export { dialGnomon, dialWedge, gnomonOnPlate, faceToWedge, mapMesh } from './parts/dialParts.ts';
@@ -64,6 +64,7 @@ export { partMass, totalMass, type PartMass } from './parts/partMass.ts';
 export { filamentUse, type FilamentUse } from './parts/filamentUse.ts';
 export { fitsBed, type SplitPart } from './parts/splitForBed.ts';
 export { printedPlate, printedWedge, fitToBed } from './parts/printedParts.ts';
+export { printedBody } from './parts/printedBody.ts';
 export { sheetPlateVolumeMm3 } from './parts/sheetPlateVolume.ts';
 
 export { dialFrame, toDialFrame } from './shadow/dialFrame.ts';

@@ -1,7 +1,7 @@
 import type { FaceType, FastenerRow, FinEdge, Hemisphere, LeftOutHour, MarkKind, PillarFixing, PlanarGnomonLayout, TimeLayout, Vec2, Vec3, WallMountFixing } from '@umbrafab/geometry';
 import type { EngravingReport } from '@umbrafab/fabricate';
 import type { CutFileSection } from './cutParts.ts';
-import type { MeshFigures } from './partsOutputs.ts';
+import type { MeshFigures } from './meshFigures.ts';
 import type { PlanarExtras } from './planarExtras.ts';
 import type { EquatorialStandSection } from './planarStandOutputs.ts';
 import type { PlateSection } from './plateOutputs.ts';

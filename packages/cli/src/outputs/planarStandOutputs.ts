@@ -19,7 +19,7 @@ import { assertToolFits, piecesDrawing, stlHeader, toDxf, toStl } from '@umbrafa
 import { STAND_PART_LABELS } from './standOutputs.ts';
 import { utf8 } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
-import type { MeshFigures } from './partsOutputs.ts';
+import type { MeshFigures } from './meshFigures.ts';
 
 /** report.json `stand` of an equatorial face: the stand that holds the plate square to the Earth's axis and the rod on it. */
 export interface EquatorialStandSection {

@@ -1,7 +1,7 @@
 import type { DialSpec } from '@umbrafab/geometry';
 import type { CutSections } from './cutOutputs.ts';
 import type { EngraveSections } from './engraveOutputs.ts';
-import type { PartsSections } from './partsOutputs.ts';
+import type { PartsSections } from './partsSections.ts';
 import type { PicturesSections } from './picturesOutputs.ts';
 import type { PlanarReport } from './planarReport.ts';
 import type { PlateSections } from './plateOutputs.ts';

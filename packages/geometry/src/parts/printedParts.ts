@@ -13,7 +13,7 @@ import { wedgeShell, type SolidBand, type WedgeShellPart } from './wedgeShell.ts
 import type { WedgePart } from './wedgeSolid.ts';
 
 /** Free stock kept between a cut (or its key) and a hole, slot or pocket, mm. */
-const CUT_CLEAR_MM = 2;
+export const CUT_CLEAR_MM = 2;
 /** Least plastic under an insert pocket, mm. */
 const POCKET_FLOOR_MM = 2;
 
