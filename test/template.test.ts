@@ -5,7 +5,7 @@ import { join, resolve } from 'node:path';
 import { parse as parseYaml } from 'yaml';
 import { describe, expect, it } from 'vitest';
 import { layoutDial, parseSpec, plateDrawing } from '@umbrafab/geometry';
-import { CALIBRATION_BAR_RGB, templateTiles, toTemplatePdf } from '@umbrafab/fabricate';
+import { CALIBRATION_BAR_RGB, TEMPLATE_BORDER_MM, templateTiles, toTemplatePdf } from '@umbrafab/fabricate';
 import { expectClose } from './helpers/closeTo.ts';
 
 // pdfjs-dist 6 wants two Node 22 built-ins; Node 20 lacks them (plain equivalents, test-only).
@@ -139,6 +139,35 @@ describe('template.pdf read back', () => {
     // The 09:00 line of the demo lies |x| − t/2 from its style edge.
     const nine = layout.marks.find((m) => m.label === '09:00')!;
     expect(text).toContain((Math.abs(nine.xMm) - layout.gnomon.thicknessMm / 2).toFixed(2));
+  });
+
+  it('keeps every drill label inside the plate outline on its sheet (pdftotext -bbox)', async () => {
+    const { file, tiles, layout } = await templateOf({}, 'A4');
+    const xml = execFileSync('pdftotext', ['-bbox', file, '-'], { encoding: 'utf8' });
+    const pages = xml.split('<page ').slice(1);
+    const { widthMm: W, lengthMm: L } = layout.plate;
+    let labels = 0;
+    for (let c = 0; c < tiles.columns; c++) {
+      for (let r = 0; r < tiles.rows; r++) {
+        const page = pages[r * tiles.columns + c];
+        expect(page).toMatch(new RegExp(`>column</word>\\s*<word[^>]*>${c + 1}</word>`));
+        // The plate's rectangle on this sheet, mm (the same mapping as the drawing: plate y up, sheet y down).
+        const x0 = tiles.window.x + TEMPLATE_BORDER_MM - tiles.colStartMm[c];
+        const yTop = tiles.window.y + TEMPLATE_BORDER_MM - tiles.rowStartMm[r];
+        const words = [...page.matchAll(/<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)<\/word>/g)];
+        words.forEach((w, i) => {
+          if (w[5] !== 'drill') return;
+          const mm = (k: number, j: number) => Number(words[k][j]) / PT_PER_MM;
+          const box = [mm(i, 1), mm(i, 2), mm(i + 1, 3), mm(i + 1, 4)];
+          labels++;
+          expect(box[0], `drill label left edge on sheet ${c + 1},${r + 1}`).toBeGreaterThan(x0);
+          expect(box[2], `drill label right edge on sheet ${c + 1},${r + 1}`).toBeLessThan(x0 + W);
+          expect(box[1]).toBeGreaterThan(yTop);
+          expect(box[3]).toBeLessThan(yTop + L);
+        });
+      }
+    }
+    expect(labels).toBeGreaterThanOrEqual(layout.plate.holes.length);
   });
 
   it('tiles a plate larger than the sheet with overlapping sheets', async () => {

@@ -41,6 +41,7 @@ export {
   PRINT_AT_FULL_SIZE,
   type TemplatePart,
 } from './template/toTemplatePdf.ts';
+export { BORDER_MM as TEMPLATE_BORDER_MM } from './template/templatePages.ts';
 
 export { toPng, toPngAsync, svgWidthMm, svgHeightMm } from './pictures/toPng.ts';
 export { toAssemblySvg } from './pictures/toAssemblySvg.ts';

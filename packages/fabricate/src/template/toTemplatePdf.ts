@@ -346,7 +346,11 @@ function drawTile(doc: Doc, d: TiledShape, t: TileLayout, c: number, r: number):
     doc.circle(X(h.cx), Y(h.cy), h.radiusMm).stroke();
     const k = h.radiusMm * 1.6;
     doc.moveTo(X(h.cx) - k, Y(h.cy)).lineTo(X(h.cx) + k, Y(h.cy)).moveTo(X(h.cx), Y(h.cy) - k).lineTo(X(h.cx), Y(h.cy) + k).stroke();
-    doc.fillColor(INK).fontSize(2.4).text(`drill ${fmt(2 * h.radiusMm)}`, X(h.cx) + k + 0.6, Y(h.cy) + 0.6, { lineBreak: false });
+    // The label beside the cross's arm on the side toward the part's middle, so it stays inside the outline.
+    const label = `drill ${fmt(2 * h.radiusMm)}`;
+    doc.fillColor(INK).fontSize(2.4);
+    const lx = h.cx > d.widthMm / 2 ? X(h.cx) - k - 0.6 - doc.widthOfString(label) : X(h.cx) + k + 0.6;
+    doc.text(label, lx, Y(h.cy) + 0.6, { lineBreak: false });
   }
   // Slots: outline and centre cross.
   for (const s of d.slots) {
