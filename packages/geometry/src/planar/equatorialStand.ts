@@ -9,7 +9,9 @@ import { reliefToolRadius } from '../sheet/sheetParts.ts';
 import { groundAnchorRow, seatRailScrewRows, type FastenerRow } from '../stand/fastenerTable.ts';
 import { METRIC_SIZES, screwForHole } from '../stand/metricFasteners.ts';
 import { assertStandSlots, FOOT_MIN_WIDTH_MM, FOOTPRINT_PER_HEIGHT, RAIL_MIN_WIDTH_MM, SPANNER_ROOM_MM } from '../stand/standDimensions.ts';
-import { indexOf, path, rectPath, relieveAlong, slotCut, turnedSlotCut, type NominalSlot } from '../stand/standJoinery.ts';
+import { crossMemberOutline } from '../stand/crossMember.ts';
+import { standFoot } from '../stand/standFoot.ts';
+import { cheekTabSlots, indexOf, path, rectPath, relieveAlong, slotCut, tabCorners, turnedSlotCut, type NominalSlot } from '../stand/standJoinery.ts';
 import type { PartPlacement, StandInstance, StandJoint } from '../stand/standTypes.ts';
 import type { Circle, Path, Vec2 } from '../types.ts';
 import type { PlanarLayout } from './layoutPlanar.ts';
@@ -236,7 +238,7 @@ export function equatorialStand(layout: PlanarLayout, options: Partial<Equatoria
     const sc = r.lowerEdgeMm + r.widthMm / 2;
     const [p, q] = ascending ? [S(sc - r.widthMm / 4), S(sc + r.widthMm / 4)] : [S(sc + r.widthMm / 4), S(sc - r.widthMm / 4)];
     railTabRoot[k] = p;
-    outer.push(p, [p[0] + T * n2[0], p[1] + T * n2[1]], [q[0] + T * n2[0], q[1] + T * n2[1]], q);
+    outer.push(...tabCorners(p, q, T, n2));
   };
   let footU: [number, number];
   let seatStart: Vec2;
@@ -279,14 +281,12 @@ export function equatorialStand(layout: PlanarLayout, options: Partial<Equatoria
   const aWasher = anchor?.washerOdMm ?? 0;
   const anchorOffset = anchor ? xc + T / 2 + Math.max(aWasher / 2, st.anchorDiameter) + SPANNER_ROOM_MM : 0;
   const Lf = anchor ? 2 * (anchorOffset + Math.max(1.5 * st.anchorDiameter, aWasher / 2 + SPANNER_ROOM_MM)) : 2 * (xc + T / 2 + 10);
-  const footSlots = [-1, 1].map((s): NominalSlot => ({ centre: [Lf / 2 + s * xc, fb / 2], axis: [0, 1], lengthMm: fb / 2 + 2 * c, widthMm: T + 2 * c }));
-  const footInner: (Path | Circle)[] = footSlots.map((sl) => slotCut(sl, tool, tol));
-  if (anchor) for (const s of [-1, 1]) footInner.push({ kind: 'circle', cx: Lf / 2 + s * anchorOffset, cy: fb / 2, radiusMm: st.anchorDiameter / 2 });
-  const foot: SheetPart = { name: 'stand-foot', material, thicknessMm: T, quantity: 2, outer: rectPath(Lf, fb), inner: footInner };
+  const anchors = anchor ? { offsetMm: anchorOffset, diameterMm: st.anchorDiameter } : null;
+  const { part: foot, slots: footSlots } = standFoot({ material, thicknessMm: T, clearanceMm: c, lengthMm: Lf, widthMm: fb, cheekOffsetMm: xc, anchors }, tool, tol);
 
   // ---- seat rails, drilled at the plate's holes (the rod's too)
   const fixings: EquatorialFixing[] = [];
-  const railSlots = rails.map((r) => [-1, 1].map((s): NominalSlot => ({ centre: [W / 2 + s * xc, r.widthMm / 2], axis: [0, upper ? -1 : 1], lengthMm: r.widthMm / 2 + 2 * c, widthMm: T + 2 * c })));
+  const railSlots = rails.map((r) => cheekTabSlots(W, r.widthMm, xc, T, c, upper ? -1 : 1));
   const railParts = rails.map((r, k): SheetPart => {
     const inner: (Path | Circle)[] = railSlots[k].map((sl) => slotCut(sl, tool, tol));
     for (const h of plate.holes) {
@@ -300,12 +300,7 @@ export function equatorialStand(layout: PlanarLayout, options: Partial<Equatoria
   fixings.sort((p, q) => p.index - q.index);
 
   // ---- hub: body between the cheeks' inner faces, end tabs through their slots, the rod's hole
-  const Lh = 2 * xc + T;
-  const y0 = hw / 4;
-  const y1 = (3 * hw) / 4;
-  const hubOuter: Vec2[] = [[T, 0], [2 * xc, 0], [2 * xc, y0], [Lh, y0], [Lh, y1], [2 * xc, y1], [2 * xc, hw], [T, hw], [T, y1], [0, y1], [0, y0], [T, y0]];
-  const hubOutline = relieveAlong(relieveAlong(hubOuter, [T, 0], [0, -1], tool, tol), [2 * xc, 0], [0, 1], tool, tol);
-  const hubTabVertex = [indexOf(hubOutline, [T, y1]), indexOf(hubOutline, [2 * xc, y0])];
+  const { outline: hubOutline, tabVertex: hubTabVertex } = crossMemberOutline(xc, T, hw, tool, tol);
   const xH0 = W / 2 - xc - T / 2;
   const hub: SheetPart = { name: 'stand-hub', material, thicknessMm: T, outer: path(hubOutline), inner: [{ kind: 'circle', cx: xR - xH0, cy: hw / 2, radiusMm: rr }] };
 

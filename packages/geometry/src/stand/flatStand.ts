@@ -4,7 +4,9 @@ import type { SheetPart } from '../sheet/sheetPart.ts';
 import { CHORD_TOLERANCE_MM } from '../sheet/arcPoints.ts';
 import { reliefToolRadius } from '../sheet/sheetParts.ts';
 import type { Circle, Path, Vec2 } from '../types.ts';
-import { indexOf, path, rectPath, relieveAlong, slotCut, type NominalSlot } from './standJoinery.ts';
+import { crossMemberOutline } from './crossMember.ts';
+import { standFoot } from './standFoot.ts';
+import { cheekTabSlots, indexOf, path, rectPath, relieveAlong, slotCut, tabCorners, type NominalSlot } from './standJoinery.ts';
 import { mountingFixings } from './mountingFixings.ts';
 import { standDimensions, type StandSizing } from './standDimensions.ts';
 import type { FlatStand, PartPlacement, StandInstance, StandJoint } from './standTypes.ts';
@@ -92,7 +94,7 @@ export function flatStand(layout: DialLayout, options: Partial<FlatStandOptions>
     const hi = seatLine(sc + half);
     const lo = seatLine(sc - half);
     railTabRoot[k] = hi;
-    outer.push(hi, [hi[0] + T * n2[0], hi[1] + T * n2[1]], [lo[0] + T * n2[0], lo[1] + T * n2[1]], lo);
+    outer.push(...tabCorners(hi, lo, T, n2));
   }
   // A toe steps down by one sheet thickness from the seat's lower corner, so
   // that corner stays convex and the first seat tab keeps its relief room.
@@ -126,14 +128,12 @@ export function flatStand(layout: DialLayout, options: Partial<FlatStandOptions>
 
   // ---- feet
   const Lf = z.footLengthMm;
-  const footSlots = [-1, 1].map((s): NominalSlot => ({ centre: [Lf / 2 + s * xc, fb / 2], axis: [0, 1], lengthMm: footTab + 2 * c, widthMm: T + 2 * c }));
-  const footInner: (Path | Circle)[] = footSlots.map((sl) => slotCut(sl, tool, tol));
-  if (z.anchor) for (const s of [-1, 1]) footInner.push({ kind: 'circle', cx: Lf / 2 + s * z.anchorOffsetMm, cy: fb / 2, radiusMm: z.anchorDiameterMm / 2 });
-  const foot: SheetPart = { name: 'stand-foot', material, thicknessMm: T, quantity: 2, outer: rectPath(Lf, fb), inner: footInner };
+  const anchors = z.anchor ? { offsetMm: z.anchorOffsetMm, diameterMm: z.anchorDiameterMm } : null;
+  const { part: foot, slots: footSlots } = standFoot({ material, thicknessMm: T, clearanceMm: c, lengthMm: Lf, widthMm: fb, cheekOffsetMm: xc, anchors }, tool, tol);
 
   // ---- seat rails, drilled at the plate's own hole centres
   const fixings = mountingFixings(layout);
-  const railSlots = z.rails.map((r) => [-1, 1].map((s): NominalSlot => ({ centre: [W / 2 + s * xc, r.widthMm / 2], axis: [0, -1], lengthMm: r.widthMm / 2 + 2 * c, widthMm: T + 2 * c })));
+  const railSlots = z.rails.map((r) => cheekTabSlots(W, r.widthMm, xc, T, c, -1));
   const railParts = z.rails.map((r, k): SheetPart => {
     const inner: (Path | Circle)[] = railSlots[k].map((sl) => slotCut(sl, tool, tol));
     for (const f of fixings) {
@@ -153,13 +153,7 @@ export function flatStand(layout: DialLayout, options: Partial<FlatStandOptions>
   const railPartName = keys.map(railName);
 
   // ---- cross member: body between the cheeks' inner faces, tabs through them
-  const Lc = 2 * xc + T;
-  const y0 = hs / 4;
-  const y1 = (3 * hs) / 4;
-  const crossOuter: Vec2[] = [[T, 0], [2 * xc, 0], [2 * xc, y0], [Lc, y0], [Lc, y1], [2 * xc, y1], [2 * xc, hs], [T, hs], [T, y1], [0, y1], [0, y0], [T, y0]];
-  // Its tabs' inside corners lie on the cheeks' inner faces: x = T (walked down) and x = 2·xc (walked up).
-  const crossOutline = relieveAlong(relieveAlong(crossOuter, [T, 0], [0, -1], tool, tol), [2 * xc, 0], [0, 1], tool, tol);
-  const crossTabVertex = [indexOf(crossOutline, [T, y1]), indexOf(crossOutline, [2 * xc, y0])];
+  const { outline: crossOutline, tabVertex: crossTabVertex } = crossMemberOutline(xc, T, hs, tool, tol);
   const cross: SheetPart = { name: 'stand-cross', material, thicknessMm: T, outer: path(crossOutline), inner: [] };
 
   // ---- intended placements (stand frame: x across, y toward the pole, z up)

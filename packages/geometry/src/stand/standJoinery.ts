@@ -73,3 +73,24 @@ export function turnedSlotCut(slot: NominalSlot, toolRadiusMm: number, tolerance
   const flat = slotCut({ ...slot, axis: [1, 0] }, toolRadiusMm, toleranceMm);
   return { ...flat, points: flat.points.map(([x, y]): Vec2 => [cx + (x - cx) * c - (y - cy) * s, cy + (x - cx) * s + (y - cy) * c]) };
 }
+
+/**
+ * The two slots a cross part (foot, seat rail) takes the cheeks' tabs
+ * through: `cheekOffsetMm` either side of its middle, across its width,
+ * each half that width long plus the clearance at each end, the sheet plus
+ * the clearance each side wide.
+ * @param axisY the tab's direction across the part: +1 or −1
+ * @example cheekTabSlots(200, 40, 60, 6, 0.1, 1)[0].centre // [40, 20]
+ */
+export function cheekTabSlots(partLengthMm: number, partWidthMm: number, cheekOffsetMm: number, thicknessMm: number, clearanceMm: number, axisY: 1 | -1): NominalSlot[] {
+  return [-1, 1].map((s): NominalSlot => ({ centre: [partLengthMm / 2 + s * cheekOffsetMm, partWidthMm / 2], axis: [0, axisY], lengthMm: partWidthMm / 2 + 2 * clearanceMm, widthMm: thicknessMm + 2 * clearanceMm }));
+}
+
+/**
+ * A tab standing out of an outline's edge from root `p` to root `q`: the
+ * four corners p, p + depth·n, q + depth·n, q (n the unit outward normal).
+ * @example tabCorners([0, 0], [10, 0], 6, [0, 1]) // [[0, 0], [0, 6], [10, 6], [10, 0]]
+ */
+export function tabCorners(p: Vec2, q: Vec2, depthMm: number, n: Vec2): Vec2[] {
+  return [p, [p[0] + depthMm * n[0], p[1] + depthMm * n[1]], [q[0] + depthMm * n[0], q[1] + depthMm * n[1]], q];
+}
