@@ -112,6 +112,20 @@ describe('every planar face type: build, read back, check on the real gnomon', (
     expect(layout.notes.join(' ')).toMatch(/left out: 06:00, 06:30, 07:00/);
   });
 
+  it('a date line whose nodus shadow falls beyond the hour lines is named in the notes, not dropped unsaid (wall and level faces at one site)', () => {
+    const raw = parse(readFileSync(new URL('../fixtures/planar/wall-declining.yaml', import.meta.url), 'utf8'));
+    const short = layoutPlanar(parseSpec(raw));
+    // On a wall at 47.4° N the summer Sun stands high: the June nodus shadow lies well below lines of the default length.
+    expect(short.curves.map((c) => c.label)).not.toContain('June solstice');
+    expect(short.curves.map((c) => c.label)).toContain('December solstice');
+    expect(short.notes.join(' ')).toMatch(/not drawn: the nodus shadow falls beyond the hour lines' field all along them \(June solstice/);
+    // Laid level at the same site the proportions turn round: the high June Sun's short shadow falls among the lines, the low Sun's long ones beyond them.
+    const level = layoutPlanar(parseSpec({ ...raw, face: { type: 'horizontal' } }));
+    expect(level.curves.map((c) => c.label)).toContain('June solstice');
+    expect(level.curves.map((c) => c.label)).not.toContain('December solstice');
+    expect(level.notes.join(' ')).toMatch(/not drawn: the nodus shadow falls beyond the hour lines' field all along them \(March equinox, December solstice/);
+  });
+
   it('the polar default is untouched: a spec without face builds the polar plate; a planar spec is refused by polar-only paths', async () => {
     const raw = parse(readFileSync(new URL('../fixtures/demo.yaml', import.meta.url), 'utf8'));
     const polar = await buildAnyFiles(parseSpec(raw));

@@ -241,7 +241,7 @@ export function layoutPlanar(spec: DialSpec): PlanarLayout {
 
   // Date lines and mean-time curves, clipped to the marks' field.
   const field = boundsOf(marks.flatMap((m) => [m.a, m.b]));
-  const curves = spec.gnomon.nodus ? planarCurves(spec, face, model, gnomon, marks, time, field) : [];
+  const curves = spec.gnomon.nodus ? planarCurves(spec, face, model, gnomon, marks, time, field, notes) : [];
   if (!spec.gnomon.nodus && spec.dial.meanTimeCurves) {
     throw new SpecError('dial.meanTimeCurves', true, 'allowed: false unless gnomon.nodus is true (the curves are read off the nodus shadow)');
   }
@@ -379,7 +379,14 @@ function hourNumerals(spec: DialSpec, marks: readonly PlanarMark[], heightMm: nu
   return out;
 }
 
-function planarCurves(spec: DialSpec, face: PlanarFace, model: PlanarGnomon, gnomon: PlanarGnomonLayout, marks: readonly PlanarMark[], time: TimeLayout, field: Box): PlanarCurve[] {
+/**
+ * The date lines and mean-time curves of a face with a nodus, clipped to the
+ * hour lines' field; one asked for that is not drawn is named in `notes`
+ * with the reason (its nodus shadow falls wholly beyond that field, as a
+ * summer date line below a wall dial's lines; or the face never sees the Sun
+ * at that clock time), so no line goes missing unsaid.
+ */
+function planarCurves(spec: DialSpec, face: PlanarFace, model: PlanarGnomon, gnomon: PlanarGnomonLayout, marks: readonly PlanarMark[], time: TimeLayout, field: Box, notes: string[]): PlanarCurve[] {
   const along = gnomon.nodusAlongStyleMm ?? undefined;
   const hs = marks.map((m) => m.hourAngleDeg);
   const hMin = Math.min(...hs);
@@ -387,24 +394,29 @@ function planarCurves(spec: DialSpec, face: PlanarFace, model: PlanarGnomon, gno
   const hours: number[] = [];
   for (let d = hMin; d <= hMax + 1e-9; d += DATE_LINE_STEP_DEG) hours.push(d * DEG);
   const width = spec.marks.quarter.width;
-  const clip = (pts: readonly Vec2[]) => clipPolyline(pts, field);
   const out: PlanarCurve[] = [];
+  const beyond: string[] = [];
+  const unlit: string[] = [];
+  const keep = (label: string, kind: PlanarCurve['kind'], runs: readonly { readonly points: readonly Vec2[] }[]) => {
+    const paths = runs.flatMap((r) => clipPolyline(r.points, field));
+    if (paths.length) out.push({ label, kind, widthMm: width, paths });
+    else (runs.some((r) => r.points.length > 1) ? beyond : unlit).push(label);
+  };
   const seen: number[] = [];
   for (const e of dateLineEntries(spec)) {
     if (seen.some((d) => Math.abs(d - e.declinationRad) < 0.1 * DEG)) continue;
     seen.push(e.declinationRad);
-    const paths = planarDateLine(face, model, e.declinationRad, hours, along).flatMap((r) => clip(r.points));
-    if (paths.length) out.push({ label: e.label, kind: 'date', widthMm: width, paths });
+    keep(e.label, 'date', planarDateLine(face, model, e.declinationRad, hours, along));
   }
   if (spec.dial.meanTimeCurves) {
     const whole = [...new Set(marks.filter((m) => m.kind === 'hour').map((m) => m.minutes))];
     for (const minutes of whole) {
-      const label = formatClock(minutes);
       const runs = planarMeanTimeCurve(face, model, { clockMinutes: minutes, year: spec.calendar.year, shiftDeg: spec.site.longitude - time.standardMeridianDeg, standardMeridianDeg: time.standardMeridianDeg, alongStyleMm: along });
-      const paths = runs.flatMap((r) => clip(r.points));
-      if (paths.length) out.push({ label: `${label} mean time`, kind: 'meanTime', widthMm: width, paths });
+      keep(`${formatClock(minutes)} mean time`, 'meanTime', runs);
     }
   }
+  if (beyond.length) notes.push(`${beyond.length} date line(s) or curve(s) not drawn: the nodus shadow falls beyond the hour lines' field all along them (${beyond.join(', ')})`);
+  if (unlit.length) notes.push(`${unlit.length} mean-time curve(s) not drawn: the face never sees the Sun at that clock time (${unlit.join(', ')})`);
   return out;
 }
 
