@@ -6,7 +6,8 @@ import { DEG } from '../guards.ts';
 import { clipPolyline } from '../polar/clipPolyline.ts';
 import { dateLineEntries } from '../polar/calendarLines.ts';
 import { timeLayout, type TimeLayout } from '../polar/layoutDial.ts';
-import { numeralText } from '../polar/numeralText.ts';
+import { numeralText } from '../text/numeralText.ts';
+import { numeralBlock, numeralStrokeMm } from '../text/numeralBlock.ts';
 import { formatClock, parseClock } from '../spec/parseClock.ts';
 import type { DialSpec } from '../spec/schema.ts';
 import type { FaceType } from '../spec/sections/faceSection.ts';
@@ -356,7 +357,7 @@ function fitNumerals(spec: DialSpec, marks: readonly PlanarMark[], parallel: boo
 }
 
 function hourNumerals(spec: DialSpec, marks: readonly PlanarMark[], heightMm: number, parallel: boolean): TextBlock[] {
-  const stroke = Math.min(spec.marks.hour.width, Math.max(0.2, heightMm / 12));
+  const stroke = numeralStrokeMm(spec.marks.hour.width, heightMm);
   const byMinutes = new Map<number, PlanarMark[]>();
   for (const m of marks) if (m.kind === 'hour') byMinutes.set(m.minutes, [...(byMinutes.get(m.minutes) ?? []), m]);
   const out: TextBlock[] = [];
@@ -374,7 +375,7 @@ function hourNumerals(spec: DialSpec, marks: readonly PlanarMark[], heightMm: nu
     const reach = BAND_GAP_MM + Math.abs(ux) * half + Math.abs(uy) * (heightMm / 2);
     const cx = ex + ux * reach;
     const cy = ey + uy * reach;
-    out.push({ role: 'numeral', text, heightMm, strokeWidthMm: stroke, strokes: strokeText(text, { heightMm, at: [cx, cy - heightMm / 2], align: 'center' }) });
+    out.push(numeralBlock(text, heightMm, stroke, [cx, cy - heightMm / 2]));
   }
   return out;
 }

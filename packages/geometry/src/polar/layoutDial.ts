@@ -9,7 +9,9 @@ import { standardMeridianDeg, zoneYearOffsets } from '../sun/zoneOffsets.ts';
 import { strokeText, strokeTextWidthMm } from '../text/strokeText.ts';
 import type { Circle, Hemisphere, Mark, MarkKind, TextBlock } from '../types.ts';
 import { castingEdge, eastToFaceX, markOffsetEastMm } from './markOffset.ts';
-import { numeralText } from './numeralText.ts';
+import { numeralText } from '../text/numeralText.ts';
+import { hourCentres } from './hourCentres.ts';
+import { numeralBlock, numeralStrokeMm } from '../text/numeralBlock.ts';
 import { penumbraMarkWidths } from './penumbraWidths.ts';
 import { summerNumerals } from './summerNumerals.ts';
 import { markKindAt } from '../clock/markKind.ts';
@@ -337,26 +339,17 @@ function fitNumeralHeight(spec: DialSpec, marks: readonly Mark[], notes: string[
   return want;
 }
 
+/** The hour numerals' centres across the face and their text, left to right. */
 function numeralCentres(spec: DialSpec, marks: readonly Mark[]): { x: number; text: string }[] {
-  const byLabel = new Map<string, Mark[]>();
-  for (const m of marks) if (m.kind === 'hour') byLabel.set(m.label, [...(byLabel.get(m.label) ?? []), m]);
-  const out: { x: number; text: string }[] = [];
-  for (const [label, ms] of byLabel) {
-    const x = ms.reduce((s, m) => s + m.xMm, 0) / ms.length;
-    out.push({ x, text: numeralText(Number(label.slice(0, 2)), spec.dial.numerals) });
-  }
-  return out.sort((a, b) => a.x - b.x);
+  return hourCentres(marks)
+    .map(({ label, xMm }) => ({ x: xMm, text: numeralText(Number(label.slice(0, 2)), spec.dial.numerals) }))
+    .sort((a, b) => a.x - b.x);
 }
 
+/** One numeral per whole hour on the band's baseline `baseY`. */
 function hourNumerals(spec: DialSpec, marks: readonly Mark[], heightMm: number, baseY: number): TextBlock[] {
-  const stroke = Math.min(spec.marks.hour.width, Math.max(0.2, heightMm / 12));
-  return numeralCentres(spec, marks).map((c) => ({
-    role: 'numeral' as const,
-    text: c.text,
-    heightMm,
-    strokeWidthMm: stroke,
-    strokes: strokeText(c.text, { heightMm, at: [c.x, baseY], align: 'center' }),
-  }));
+  const stroke = numeralStrokeMm(spec.marks.hour.width, heightMm);
+  return numeralCentres(spec, marks).map((c) => numeralBlock(c.text, heightMm, stroke, [c.x, baseY]));
 }
 
 function halfExtentX(block: TextBlock): number {

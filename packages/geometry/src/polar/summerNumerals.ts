@@ -1,9 +1,10 @@
 import { SpecError } from '../errors.ts';
 import type { DialSpec } from '../spec/schema.ts';
 import { zoneYearOffsets } from '../sun/zoneOffsets.ts';
-import { strokeText } from '../text/strokeText.ts';
+import { numeralBlock, numeralStrokeMm } from '../text/numeralBlock.ts';
+import { hourCentres } from './hourCentres.ts';
 import type { Mark, TextBlock } from '../types.ts';
-import { numeralText } from './numeralText.ts';
+import { numeralText } from '../text/numeralText.ts';
 
 /** Summer numerals' height as a fraction of the main numerals'. */
 export const SUMMER_NUMERAL_SCALE = 0.65;
@@ -39,13 +40,7 @@ export function summerNumerals(spec: DialSpec, marks: readonly Mark[], numeralHe
   }
   const heightMm = Math.round(numeralHeightMm * SUMMER_NUMERAL_SCALE * 10) / 10;
   const baseY = numeralBaseY - ROW_GAP_FRACTION * numeralHeightMm - heightMm;
-  const stroke = Math.min(spec.marks.half.width, Math.max(0.2, heightMm / 12));
-  const byLabel = new Map<string, number[]>();
-  for (const m of marks) if (m.kind === 'hour') byLabel.set(m.label, [...(byLabel.get(m.label) ?? []), m.xMm]);
-  const blocks = [...byLabel].map(([label, xs]): TextBlock => {
-    const x = xs.reduce((s, v) => s + v, 0) / xs.length;
-    const text = numeralText((Number(label.slice(0, 2)) + shift) % 24, spec.dial.numerals);
-    return { role: 'numeral', text, heightMm, strokeWidthMm: stroke, strokes: strokeText(text, { heightMm, at: [x, baseY], align: 'center' }) };
-  });
+  const stroke = numeralStrokeMm(spec.marks.half.width, heightMm);
+  const blocks = hourCentres(marks).map(({ label, xMm }): TextBlock => numeralBlock(numeralText((Number(label.slice(0, 2)) + shift) % 24, spec.dial.numerals), heightMm, stroke, [xMm, baseY]));
   return { blocks, bottomY: baseY };
 }
