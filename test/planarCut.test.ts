@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
-import { finSheetPart, layoutPlanar, parseSpec, planarGnomonSolid, planarPlateDrawing, plateSheetPart, reliefToolRadius, wallMount, type SheetPart } from '@umbrafab/geometry';
+import { equatorialStand, equatorialStandApplies, finSheetPart, layoutPlanar, parseSpec, planarGnomonSolid, planarPlateDrawing, plateSheetPart, reliefToolRadius, wallMount, type SheetPart } from '@umbrafab/geometry';
 import { buildAnyFiles } from '@umbrafab/cli';
 import { expectClose } from './helpers/closeTo.ts';
 import { feedRuns, motions, runRs274 } from './helpers/rs274.ts';
@@ -15,10 +15,11 @@ const ROOT = resolve(import.meta.dirname, '..');
 const ROUTER = { plate: { thickness: 3, material: 'aluminium' }, process: { method: 'router', kerf: 3.175 } };
 
 describe('cut.ngc of planar faces on a router: plate, sheet fin and wall mount', () => {
-  for (const name of ['garden-horizontal', 'meridian-east', 'wall-declining']) {
+  for (const name of ['garden-horizontal', 'meridian-east', 'wall-declining', 'equatorial']) {
     it(`${name}: rs274 reads it, depth = thickness + breakthrough, every part's tool path one tool radius off its nominal edges, never inside a part (shapely)`, async () => {
       const raw = parse(readFileSync(join(ROOT, `fixtures/planar/${name}.yaml`), 'utf8'));
-      const spec = parseSpec({ ...raw, ...ROUTER, gnomon: { ...raw.gnomon, thickness: 3 } });
+      // A sheet fin of the plate's stock (3 mm); an equatorial rod keeps its own diameter (a 3 mm rod's hole would be drilled with the tool itself).
+      const spec = parseSpec({ ...raw, ...ROUTER, gnomon: raw.face.type === 'equatorial' ? raw.gnomon : { ...raw.gnomon, thickness: 3 } });
       const built = await buildAnyFiles(spec);
       const f = built.files.find((x) => x.name === 'cut.ngc');
       expect(f, 'cut.ngc').toBeDefined();
@@ -27,7 +28,10 @@ describe('cut.ngc of planar faces on a router: plate, sheet fin and wall mount',
       const o = { material: spec.plate.material, thicknessMm: 3, reliefToolRadiusMm: reliefToolRadius(spec), chordToleranceMm: spec.cutFiles.chordTolerance };
       const gnomon = planarGnomonSolid(layout);
       const mount = wallMount(layout)?.part;
-      const parts: SheetPart[] = [plateSheetPart(planarPlateDrawing(layout), o), ...(gnomon.kind === 'fin' ? [finSheetPart(gnomon.profile, o)] : []), ...(mount ? [mount] : [])];
+      const stand = equatorialStandApplies(layout) ? equatorialStand(layout, { reliefToolRadiusMm: o.reliefToolRadiusMm }).parts : [];
+      const listed: SheetPart[] = [plateSheetPart(planarPlateDrawing(layout), o), ...(gnomon.kind === 'fin' ? [finSheetPart(gnomon.profile, o)] : []), ...(mount ? [mount] : []), ...stand];
+      // A part cut more than once (the stand's two cheeks) is each copy in turn, named "<part>-<copy>".
+      const parts = listed.flatMap((p) => ((p.quantity ?? 1) > 1 ? Array.from({ length: p.quantity! }, (_, i) => ({ ...p, name: `${p.name}-${i + 1}` })) : [p]));
       expect(report.parts.map((p: { name: string }) => p.name)).toEqual(parts.map((p) => p.name));
       expect(report.otherStock).toEqual([]);
       const { commands } = runRs274(new TextDecoder().decode(f!.bytes), 'cut.ngc'); // throws on an rs274 error

@@ -13,7 +13,7 @@ const FIXTURES = ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meri
 const specOf = (name: string, patch: Record<string, unknown> = {}) => parseSpec({ ...parse(readFileSync(join(ROOT, `fixtures/planar/${name}.yaml`), 'utf8')), ...patch });
 
 
-describe('sheet.dxf of every planar face: plate, sheet fin and wall mount nested on the stock', () => {
+describe('sheet.dxf of every planar face: plate, sheet fin, wall mount and equatorial stand nested on the stock', () => {
   for (const name of FIXTURES) {
     it(`${name}: ezdxf audit clean, every part once, none overlapping, kerf plus margin apart, all inside the sheet (shapely)`, async () => {
       const spec = specOf(name);
@@ -28,7 +28,9 @@ describe('sheet.dxf of every planar face: plate, sheet fin and wall mount nested
       const cut = ['plate', 'gnomon', 'mount'].filter((p) => names.includes(`${p}.dxf`));
       const report = built.report as { gnomon: { thicknessMm: number }; plate: { thicknessMm: number } };
       const other = report.gnomon.thicknessMm === report.plate.thicknessMm ? [] : ['gnomon'];
-      const own = cut.filter((p) => !other.includes(p));
+      // An equatorial stand cut from sheet (stand.dxf) joins them, each part as many times as stand.dxf lists it.
+      const stand = names.includes('stand.dxf') ? (built.report as PlanarReport).stand!.parts.flatMap((p) => Array<string>(p.quantity).fill(p.name)) : [];
+      const own = [...cut.filter((p) => !other.includes(p)), ...stand];
       expect(sheet.pieces.map((p) => p.part).sort()).toEqual(own.sort());
       expect(sheet.otherStock).toEqual(other.filter((p) => cut.includes(p)));
       // ezdxf (Debian python3-ezdxf) reads and audits it.

@@ -4,6 +4,7 @@ import { utf8 } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import type { TemplateSection } from './picturesOutputs.ts';
 import { sheetFiles, type SheetSections } from './sheetOutputs.ts';
+import { equatorialStandSheetParts } from './planarStandOutputs.ts';
 
 /** The outputs a planar face shares with the polar plate beyond its own cut files: template.pdf, sheet.dxf and cut.ngc. */
 export interface PlanarExtras {
@@ -24,16 +25,19 @@ export interface PlanarTemplateSection extends TemplateSection {
 /**
  * The outputs of a horizontal, wall, meridian or equatorial face that
  * polar builds write too: template.pdf (`planarTemplate`) and, for the
- * cutting processes, sheet.dxf (`sheetFiles`: the plate, the sheet fin and
- * the wall mount nested on one stock sheet, as cut, each with the relief
- * its own DXF has). `cutParts` are the face's parts as plate.dxf and
- * gnomon.dxf draw them; the wall mount is added here.
+ * cutting processes, sheet.dxf (`sheetFiles`: the plate, the sheet fin,
+ * the wall mount and the equatorial stand's parts nested on one stock
+ * sheet, as cut, each with the relief its own DXF has). `cutParts` are the
+ * face's parts as plate.dxf and gnomon.dxf draw them; the wall mount and
+ * the stand are added here.
  */
 export async function planarExtraOutputs(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing, gnomon: PlanarGnomonPart, cutParts: readonly SheetPart[]): Promise<PlanarExtras> {
   const template = await planarTemplate(spec, layout, drawing, gnomon);
   const mount = wallMount(layout)?.part;
-  const sheet = spec.process.method === 'print' ? undefined : await sheetFiles(spec, layout.plate.thicknessMm, [...cutParts, ...(mount ? [mount] : [])]);
-  const cut = await planarCutProgram(spec, layout, drawing, gnomon, [...cutParts, ...(mount ? [mount] : [])]);
+  const stand = equatorialStandSheetParts(spec, layout);
+  const all = [...cutParts, ...(mount ? [mount] : []), ...stand];
+  const sheet = spec.process.method === 'print' ? undefined : await sheetFiles(spec, layout.plate.thicknessMm, all);
+  const cut = await planarCutProgram(spec, layout, drawing, gnomon, all);
   return {
     files: [...(sheet?.files ?? []), ...(cut ? [{ name: cut.file.name, bytes: utf8(cut.file.text) }] : []), ...(template?.files ?? [])],
     report: { ...(sheet?.report ?? {}), ...(cut ? { cutting: cut.report } : {}), ...(template ? { template: template.report } : {}) },
@@ -44,7 +48,7 @@ export async function planarExtraOutputs(spec: DialSpec, layout: PlanarLayout, d
 /**
  * cut.ngc of a planar face for a router job with engrave.cut.write
  * (`cutFromParts`, the polar writer): the parts of the plate's stock and
- * thickness (plate, sheet fin, wall mount), the plate at the work origin;
+ * thickness (plate, sheet fin, wall mount, equatorial stand), the plate at the work origin;
  * a part of other stock (a fin thicker than the plate) is listed in
  * `otherStock`, cut separately. Null when no cut.ngc is written.
  */
@@ -53,7 +57,13 @@ async function planarCutProgram(spec: DialSpec, layout: PlanarLayout, drawing: P
   const same = (p: SheetPart) => p.material === spec.plate.material && Math.abs(p.thicknessMm - layout.plate.thicknessMm) < 1e-9;
   const o = { material: spec.plate.material, reliefToolRadiusMm: 0, chordToleranceMm: spec.cutFiles.chordTolerance };
   // The same parts before their inside-corner relief, for the tool-fit check.
-  const bare = parts.map((p) => (p.name === 'plate' ? plateSheetPart(drawing, { ...o, thicknessMm: p.thicknessMm }) : p.name === 'gnomon' ? finSheetPart(gnomon.profile, { ...o, thicknessMm: p.thicknessMm }) : p));
+  const standBare = equatorialStandSheetParts(spec, layout, { reliefToolRadiusMm: 0 });
+  const bareOf = (p: SheetPart): SheetPart => {
+    if (p.name === 'plate') return plateSheetPart(drawing, { ...o, thicknessMm: p.thicknessMm });
+    if (p.name === 'gnomon') return finSheetPart(gnomon.profile, { ...o, thicknessMm: p.thicknessMm });
+    return standBare.find((q) => q.name === p.name) ?? p;
+  };
+  const bare = parts.map(bareOf);
   const r = await cutFromParts(spec, bare.filter(same), parts.filter(same));
   return { file: r.file, report: { ...r.report, otherStock: parts.filter((p) => !same(p)).map((p) => p.name) } };
 }

@@ -13,6 +13,7 @@ import {
   type EquatorialFixing,
   type FastenerRow,
   type PlanarLayout,
+  type SheetPart,
   type Vec3,
 } from '@umbrafab/geometry';
 import { assertToolFits, piecesDrawing, stlHeader, toDxf, toStl } from '@umbrafab/fabricate';
@@ -78,6 +79,23 @@ export const EQUATORIAL_STAND_LABELS: Readonly<Record<string, string>> = {
 
 const r6 = (x: number) => Math.round(x * 1e6) / 1e6;
 
+/** Whether the build cuts the equatorial stand from sheet (stand.dxf): parts.write "auto" for the cutting processes, or named. */
+function standDxfWanted(spec: DialSpec): boolean {
+  const write = spec.parts.write;
+  return write === 'auto' ? spec.process.method !== 'print' : write.includes('stand.dxf');
+}
+
+/**
+ * The equatorial stand's flat parts for the job's sheet (sheet.dxf) and
+ * router program (cut.ngc), when the build cuts the stand: relieved for the
+ * tool as in stand.dxf, or nominal with `reliefToolRadiusMm: 0`. Empty for
+ * other faces, a printed stand, or a stand not written.
+ */
+export function equatorialStandSheetParts(spec: DialSpec, layout: PlanarLayout, options: { readonly reliefToolRadiusMm?: number } = {}): readonly SheetPart[] {
+  if (!equatorialStandApplies(layout) || !standDxfWanted(spec)) return [];
+  return equatorialStand(layout, options).parts;
+}
+
 /**
  * The stand of an equatorial face (`equatorialStand`): for the sheet
  * processes stand.dxf (every piece nominal, CUT_PROFILE and
@@ -94,7 +112,7 @@ export async function planarStandFiles(spec: DialSpec, layout: PlanarLayout): Pr
   if (!equatorialStandApplies(layout)) return { files: [] };
   const write = spec.parts.write;
   const print = spec.process.method === 'print';
-  const wantDxf = write === 'auto' ? !print : write.includes('stand.dxf');
+  const wantDxf = standDxfWanted(spec);
   const wantStl = write === 'auto' || write.includes('stand.stl');
   if (!wantDxf && !wantStl) return { files: [] };
   const stand = equatorialStand(layout);
