@@ -12,7 +12,7 @@ import { assertStandSlots, FOOT_MIN_WIDTH_MM, FOOTPRINT_PER_HEIGHT, RAIL_MIN_WID
 import { crossMemberOutline } from '../stand/crossMember.ts';
 import { standFoot } from '../stand/standFoot.ts';
 import { cheekTabSlots, indexOf, path, rectPath, relieveAlong, slotCut, tabCorners, turnedSlotCut, type NominalSlot } from '../stand/standJoinery.ts';
-import type { PartPlacement, StandInstance, StandJoint } from '../stand/standTypes.ts';
+import type { JoinedStand, PartPlacement, StandInstance, StandJoint } from '../stand/standTypes.ts';
 import type { Circle, Path, Vec2 } from '../types.ts';
 import type { PlanarLayout } from './layoutPlanar.ts';
 
@@ -47,12 +47,12 @@ export interface EquatorialFixing {
   readonly diameterMm: number;
 }
 
-/** The equatorial stand: its flat parts, where each lies (site frame), how they join, and the plate and rod on it. */
-export interface EquatorialStand {
-  readonly parts: readonly SheetPart[];
-  /** placements in the site frame: x east, y north, z up (mm), the ground z = 0 */
-  readonly instances: readonly StandInstance[];
-  readonly joints: readonly StandJoint[];
+/**
+ * The equatorial stand: its flat parts, where each lies, how they join
+ * (`JoinedStand`; its placements in the site frame: x east, y north, z up,
+ * mm, the ground z = 0), and the plate and rod on it.
+ */
+export interface EquatorialStand extends JoinedStand {
   /** where the plate lies: drawing (plate.dxf x, y) and depth w from the face (w = 0 the engraved face, −thickness its back) along the face normal */
   readonly plate: PartPlacement;
   /** the face origin (the rod's axis on the engraved face), site frame, mm */

@@ -81,11 +81,16 @@ export interface StandDimensions {
   readonly heightMm: number;
 }
 
-/** The flat-pack stand: its drawn parts, where they go, how they join. */
-export interface FlatStand {
+/** What every flat-pack stand is (the polar `FlatStand`, the `EquatorialStand`): its drawn parts, where each goes, how they join. */
+export interface JoinedStand {
   readonly parts: readonly SheetPart[];
+  /** the parts' intended placements, in the stand's own frame (each stand names it) */
   readonly instances: readonly StandInstance[];
   readonly joints: readonly StandJoint[];
+}
+
+/** The flat-pack stand of a polar dial (stand frame: x across, y toward the pole, z up): its parts, placements and joints, and its sizes. */
+export interface FlatStand extends JoinedStand {
   readonly dims: StandDimensions;
   /**
    * the seat (the plate's underside): the point under the plate's lower-left
