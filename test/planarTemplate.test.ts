@@ -119,7 +119,7 @@ describe('template.pdf of every planar face, read back as the shop prints it', (
     });
   }
 
-  it('the plate and the fin profile print at 1:1: rendered at 10 px/mm (pdftoppm) their ink spans their size within 0.2 mm, the bar 100 mm', async () => {
+  it('the plate, the fin profile and the stand parts print at 1:1: rendered at 10 px/mm (pdftoppm) their ink spans their size within 0.2 mm, the bar 100 mm', async () => {
     const measured: string[] = [];
     for (const name of ['equatorial', 'garden-horizontal', 'meridian-east']) {
       const { spec, dir, report } = await built(name, { template: { paper: 'Letter' } });
@@ -133,6 +133,8 @@ describe('template.pdf of every planar face, read back as the shop prints it', (
       const expected: Record<string, [number, number]> = {
         plate: [report.plate.widthMm, report.plate.lengthMm],
         'gnomon fin profile': [Math.max(...finXs) - Math.min(...finXs), Math.max(...finZs) - Math.min(...finZs)],
+        // An equatorial stand's parts, each at its size as report.json's stand section gives it.
+        ...Object.fromEntries(((report.stand?.parts ?? []) as { label: string; sizeMm: [number, number] }[]).map((p) => [`stand ${p.label}`, p.sizeMm])),
       };
       let checked = 0;
       for (const d of report.template.drawings) {
@@ -148,6 +150,8 @@ describe('template.pdf of every planar face, read back as the shop prints it', (
         checked++;
       }
       expect(checked, `${name}: a drawing on a single sheet to measure`).toBeGreaterThan(0);
+      // Every stand part cut from sheet has its own 1:1 drawing in the template.
+      for (const p of (report.stand?.parts ?? []) as { label: string }[]) expect(report.template.drawings.map((d: { label: string }) => d.label)).toContain(`stand ${p.label}`);
     }
     console.log(measured.join('\n'));
   });

@@ -4,7 +4,7 @@ import { utf8 } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import type { TemplateSection } from './picturesOutputs.ts';
 import { sheetFiles, type SheetSections } from './sheetOutputs.ts';
-import { equatorialStandSheetParts } from './planarStandOutputs.ts';
+import { EQUATORIAL_STAND_LABELS, equatorialStandSheetParts } from './planarStandOutputs.ts';
 
 /** The outputs a planar face shares with the polar plate beyond its own cut files: template.pdf, sheet.dxf and cut.ngc. */
 export interface PlanarExtras {
@@ -70,8 +70,8 @@ async function planarCutProgram(spec: DialSpec, layout: PlanarLayout, drawing: P
 
 /**
  * template.pdf of a planar face (`toPartsTemplatePdf`: the plate at 1:1,
- * the table of line ends and holes, the gnomon fin's profile and the wall
- * mount at 1:1, each nominal), its report section and install.md's guide
+ * the table of line ends and holes, the gnomon fin's profile, the wall
+ * mount and an equatorial stand's parts at 1:1, each nominal), its report section and install.md's guide
  * to its sheets; null when template.write is false.
  */
 async function planarTemplate(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing, gnomon: PlanarGnomonPart): Promise<{ files: OutputFile[]; report: PlanarTemplateSection; guide: PlanarTemplateGuide } | null> {
@@ -81,6 +81,8 @@ async function planarTemplate(spec: DialSpec, layout: PlanarLayout, drawing: Pla
   if (gnomon.kind === 'fin') parts.push({ label: 'gnomon fin profile', part: finSheetPart(gnomon.profile, { ...nominal, thicknessMm: gnomon.thicknessMm }) });
   const mount: SheetPart | undefined = wallMount(layout)?.part;
   if (mount) parts.push({ label: 'wall mount', part: mount });
+  // The equatorial stand's parts when they are cut from sheet, nominal, one drawing per part, named as stand.dxf names it.
+  for (const p of equatorialStandSheetParts(spec, layout, { reliefToolRadiusMm: 0 })) parts.push({ label: `stand ${EQUATORIAL_STAND_LABELS[p.name] ?? p.name}`, part: p });
   const g = layout.gnomon;
   const intro = [
     `${layout.faceType} face. Gnomon: ${g.kind === 'fin' ? `fin ${g.thicknessMm} mm thick` : `rod ${g.thicknessMm} mm across`}, style height ${g.styleHeightDeg.toFixed(2)}° to the face.`,
