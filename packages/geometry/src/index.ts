@@ -81,7 +81,8 @@ export { planarMarksFromPlate } from './shadow/planarMarksFromPlate.ts';
 export type { AssemblyPartName, PictureItem } from './assembly/assemblyTypes.ts';
 export { placeAssembly, faceToWorld } from './assembly/placeAssembly.ts';
 export { defaultPictureDate, sunForPicture } from './assembly/sunForPicture.ts';
-export { projectToPicture, viewAssembly, type AssemblyPicture } from './assembly/viewAssembly.ts';
+export { viewAssembly, type AssemblyPicture } from './assembly/viewAssembly.ts';
+export { projectToPicture, viewScene, type PlacedScene, type ScenePicture, type Backdrop } from './assembly/viewScene.ts';
 
 export type { FlatStand, PartPlacement } from './stand/standTypes.ts';
 export { METRIC_SIZES } from './stand/metricFasteners.ts';

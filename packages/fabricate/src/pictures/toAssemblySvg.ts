@@ -1,4 +1,4 @@
-import type { AssemblyPartName, AssemblyPicture, PictureItem, Vec2 } from '@umbrafab/geometry';
+import type { AssemblyPartName, PictureItem, ScenePicture, Vec2 } from '@umbrafab/geometry';
 import { roundTo } from '../process/roundTo.ts';
 
 /** Options of `toAssemblySvg`. */
@@ -11,10 +11,13 @@ export interface AssemblySvgOptions {
 
 export const ASSEMBLY_SVG_DEFAULTS: AssemblySvgOptions = { decimals: 2, title: '' };
 
-/** Base colours, sRGB, of fully lit faces (a light PLA wedge, a sheet stand, a bare aluminium plate and gnomon, steel fixings). */
+/** Base colours, sRGB, of fully lit faces (a light PLA wedge, a sheet stand, a stone pillar, a rendered wall, an aluminium mount, a bare aluminium plate and gnomon, steel fixings). */
 const PART_RGB: Readonly<Record<AssemblyPartName, readonly [number, number, number]>> = {
   wedge: [168, 186, 204],
   stand: [196, 198, 200],
+  pillar: [188, 182, 170],
+  wall: [206, 196, 180],
+  mount: [176, 180, 184],
   plate: [226, 224, 218],
   fixings: [120, 124, 130],
   gnomon: [214, 211, 203],
@@ -30,7 +33,7 @@ const PART_RGB: Readonly<Record<AssemblyPartName, readonly [number, number, numb
  *
  * @example toAssemblySvg(viewAssembly(layout, drawing, sun))
  */
-export function toAssemblySvg(picture: AssemblyPicture, options: Partial<AssemblySvgOptions> = {}): string {
+export function toAssemblySvg(picture: Pick<ScenePicture, 'widthMm' | 'heightMm' | 'items'>, options: Partial<AssemblySvgOptions> = {}): string {
   const o = { ...ASSEMBLY_SVG_DEFAULTS, ...options };
   const n = (v: number) => String(roundTo(v, o.decimals));
   const poly = (pts: readonly Vec2[]) => pts.map(([x, y], i) => `${i === 0 ? 'M' : 'L'}${n(x)} ${n(y)}`).join(' ') + ' Z';
@@ -51,14 +54,21 @@ function itemSvg(item: PictureItem, poly: (p: readonly Vec2[]) => string, line: 
   switch (item.kind) {
     case 'ground':
       return `<path id="ground" d="${poly(item.polygon)}" fill="#eceee6" stroke="#d6d9cf" stroke-width="0.3"/>`;
+    case 'wall':
+      return `<path id="wall" d="${poly(item.polygon)}" fill="${shaded(PART_RGB.wall, item.shade)}"/>`;
     case 'shadow':
       if (item.polygons.length === 0) return '';
-      return item.on === 'ground'
-        ? `<path id="ground-shadow" d="${item.polygons.map(poly).join(' ')}" fill="#bfc3b8" fill-rule="nonzero"/>`
-        : `<path id="face-shadow" d="${item.polygons.map(poly).join(' ')}" fill="#1d2430" fill-opacity="0.42"/>`;
+      switch (item.on) {
+        case 'ground':
+          return `<path id="ground-shadow" d="${item.polygons.map(poly).join(' ')}" fill="#bfc3b8" fill-rule="nonzero"/>`;
+        case 'wall':
+          return `<path id="wall-shadow" d="${item.polygons.map(poly).join(' ')}" fill="#1d2430" fill-opacity="0.3" fill-rule="nonzero"/>`;
+        case 'face':
+          return `<path id="face-shadow" d="${item.polygons.map(poly).join(' ')}" fill="#1d2430" fill-opacity="0.42"/>`;
+      }
+      return '';
     case 'face': {
-      const [r, g, b] = PART_RGB[item.part].map((c) => Math.round(Math.min(255, c * item.shade)));
-      const fill = `#${[r, g, b].map((c) => c.toString(16).padStart(2, '0')).join('')}`;
+      const fill = shaded(PART_RGB[item.part], item.shade);
       return `<path class="${item.part}" d="${item.polygons.map(poly).join(' ')}" fill="${fill}" stroke="${fill}" stroke-width="0.15" stroke-linejoin="round"/>`;
     }
     case 'engraving':
@@ -74,6 +84,11 @@ function itemSvg(item: PictureItem, poly: (p: readonly Vec2[]) => string, line: 
     case 'stroke':
       return `<path class="${item.role}" d="${line(item.points)}" fill="none" stroke="#1b1b1b" stroke-width="${n(item.widthMm)}" stroke-linecap="round" stroke-linejoin="round"/>`;
   }
+}
+
+/** A base colour times a shade, as #rrggbb. */
+function shaded(rgb: readonly [number, number, number], shade: number): string {
+  return `#${rgb.map((c) => Math.round(Math.min(255, c * shade)).toString(16).padStart(2, '0')).join('')}`;
 }
 
 function esc(s: string): string {

@@ -16,7 +16,8 @@ export interface Facet {
   readonly normal: Vec3;
 }
 
-export type AssemblyPartName = 'wedge' | 'stand' | 'plate' | 'fixings' | 'gnomon';
+/** The parts of the pictures: the polar dial's wedge or stand; a horizontal dial's pillar; a wall dial's wall and mount; every dial's plate, fixings and gnomon. */
+export type AssemblyPartName = 'wedge' | 'stand' | 'pillar' | 'wall' | 'mount' | 'plate' | 'fixings' | 'gnomon';
 
 /** A part placed in the world: its flat faces (triangles or polygons). */
 export interface PlacedPart {
@@ -39,6 +40,12 @@ export type PictureItem =
       readonly polygon: readonly Vec2[];
     }
   | {
+      /** the wall behind a wall dial (the plane its shadow falls on): `shade` as a face's */
+      readonly kind: 'wall';
+      readonly shade: number;
+      readonly polygon: readonly Vec2[];
+    }
+  | {
       /** a flat face of a part: `shade` is the lit fraction 0..1 (ambient + Lambert from the sun) */
       readonly kind: 'face';
       readonly part: AssemblyPartName;
@@ -48,7 +55,7 @@ export type PictureItem =
     }
   | {
       readonly kind: 'shadow';
-      readonly on: 'ground' | 'face';
+      readonly on: 'ground' | 'wall' | 'face';
       readonly polygons: readonly (readonly Vec2[])[];
     }
   | {

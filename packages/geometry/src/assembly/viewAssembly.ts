@@ -1,40 +1,16 @@
-import { DEG } from '../guards.ts';
 import type { Vec3 } from '../parts/mesh.ts';
-import { cross3, dot3, normalize3 } from '../parts/vec3.ts';
 import type { PlateDrawing } from '../plate/plateDrawing.ts';
 import type { DialLayout } from '../polar/layoutDial.ts';
 import type { Vec2 } from '../types.ts';
-import type { AssemblyView, FaceFrame, Facet, PictureItem, PlacedPart } from './assemblyTypes.ts';
-import { shoelaceArea } from '../parts/ring2d.ts';
-import { clipPolygonAbovePlane, clipPolygonConvex } from './clipPolygon.ts';
 import { gnomonShadowOnFace, type FaceShadow } from './gnomonShadowOnFace.ts';
-import { ASSEMBLY_CORNER_SEGMENTS, faceToWorld, placeAssembly, worldToFaceDirection, type Assembly } from './placeAssembly.ts';
-import { roundedRectPolygon } from '../outline/roundedRect.ts';
+import { placeAssembly, worldToFaceDirection, type Assembly } from './placeAssembly.ts';
 import type { PictureSun } from './sunForPicture.ts';
+import { ASSEMBLY_VIEW_DEFAULTS, viewScene, type AssemblyViewOptions, type Backdrop, type ScenePicture } from './viewScene.ts';
 
-/** Options of `viewAssembly`. */
-export interface AssemblyViewOptions {
-  /** viewpoint azimuth, degrees east of the equator-ward direction (default 35) */
-  readonly viewAzimuthDeg: number;
-  /** viewpoint elevation above the horizon, degrees (default 30) */
-  readonly viewElevationDeg: number;
-  /** free border around the picture, mm (default 6) */
-  readonly marginMm: number;
-  /** ground shown around the wedge's footprint, mm (default 30) */
-  readonly groundMm: number;
-}
+export { ASSEMBLY_VIEW_DEFAULTS, projectToPicture, type AssemblyViewOptions } from './viewScene.ts';
 
-export const ASSEMBLY_VIEW_DEFAULTS: AssemblyViewOptions = { viewAzimuthDeg: 35, viewElevationDeg: 30, marginMm: 6, groundMm: 30 };
-
-/** Share of the light a face gets when it faces away from the sun (sky light), 0..1. */
-const AMBIENT = 0.45;
-
-/** The assembly seen at an angle: everything to paint, in order, in picture mm (x right, y down). */
-export interface AssemblyPicture {
-  readonly widthMm: number;
-  readonly heightMm: number;
-  readonly view: AssemblyView;
-  readonly items: readonly PictureItem[];
+/** The polar assembly seen at an angle: everything to paint, in order, in picture mm (x right, y down). */
+export interface AssemblyPicture extends ScenePicture {
   readonly assembly: Assembly;
   readonly sun: PictureSun;
   /** the sun in face coordinates (unit vector) */
@@ -42,66 +18,35 @@ export interface AssemblyPicture {
   readonly shadow: FaceShadow;
 }
 
-/** A world point in picture mm. */
-export function projectToPicture(view: AssemblyView, p: Vec3): Vec2 {
-  return [dot3(p, view.right) - view.left, view.top - dot3(p, view.up)];
-}
-
 /**
- * The assembly picture: an orthographic view (true mm at the picture's
- * scale) of the placed dial from a viewpoint above the ground on the face's
- * side, with
- * - faces shaded by the sun: AMBIENT + (1 − AMBIENT)·max(0, n·s) (Lambert's
- *   cosine law), back faces culled;
- * - painter's order: ground, the whole dial's shadow on the ground (every
- *   sun-facing facet projected along the rays onto Z = 0 and painted in one
- *   colour: their union is the shadow), then the wedge, the plate, the face's
- *   engraving and the gnomon's shadow on it, then the gnomon (each part's
- *   faces far to near; from the face's side no later part can hide an earlier
- *   one except the wedge's small lip);
- * - the face engraving taken from the plate drawing (marks as their true
- *   width, numerals and title as strokes foreshortened by √|n·v|).
+ * The polar assembly picture (`viewScene`): the placed dial (`placeAssembly`)
+ * seen from above the ground on the face's side — the equator-ward
+ * direction turned by the view azimuth toward the east — on the ground
+ * around its footprint, with the gnomon's shadow on the face from
+ * `gnomonShadowOnFace`.
  *
  * @example viewAssembly(layout, plateDrawing(layout), sunForPicture(layout, '2027-06-21', '10:00')).items.length
  */
 export function viewAssembly(layout: DialLayout, drawing: PlateDrawing, sun: PictureSun, options: Partial<AssemblyViewOptions> = {}): AssemblyPicture {
   const o = { ...ASSEMBLY_VIEW_DEFAULTS, ...options };
   const assembly = placeAssembly(layout);
-  const basis = viewBasis(assembly.hemisphere, o.viewAzimuthDeg, o.viewElevationDeg);
-  const s = sun.direction;
-  const sunFace = worldToFaceDirection(assembly.face, s);
-  const P = (p: Vec3): Vec2 => [dot3(p, basis.right), -dot3(p, basis.up)];
-  const ground = groundRect(assembly, o.groundMm);
-  const painted: Placed[] = [...groundItems(ground, groundShadow(assembly, s, ground), P)];
-  for (const part of assembly.parts) {
-    painted.push(...partFaceItems(part, assembly.face, basis.toViewer, s, P));
-    if (part.name === 'plate') for (const it of faceEngraving(layout, drawing, assembly, basis.toViewer, P)) painted.push({ item: it, pts: [] });
-  }
+  const north = assembly.hemisphere === 'north';
+  const sunFace = worldToFaceDirection(assembly.face, sun.direction);
   const shadow = gnomonShadowOnFace(layout, sunFace, assembly.faceOutline);
-  const items = withFaceShadow(painted, shadow, assembly.face, P);
-  const frame = pictureFrame(items, o.marginMm);
-  const view: AssemblyView = { ...basis, left: frame.left, top: -frame.topEdge };
-  const shift = (p: Vec2): Vec2 => [p[0] - frame.left, p[1] - frame.topEdge];
-  const moved = items.map(({ item }) => moveItem(item, shift));
-  return { widthMm: frame.widthMm, heightMm: frame.heightMm, view, items: moved, assembly, sun, sunFace, shadow };
+  const scene = {
+    parts: assembly.parts,
+    face: assembly.face,
+    faceOutline: assembly.faceOutline,
+    frontAzimuthDeg: north ? 180 : 0,
+    azimuthSense: north ? 1 : -1,
+    backdrop: groundBackdrop(groundRect(assembly, o.groundMm)),
+  } as const;
+  return { ...viewScene(scene, drawing, sun.direction, shadow.polygons, o), assembly, sun, sunFace, shadow };
 }
 
-/** A picture item before the frame is known, with the unshifted points that size the frame (none for shadows and engraving). */
-interface Placed {
-  readonly item: PictureItem;
-  readonly pts: readonly Vec2[];
-}
-
-/** The viewer's axes: toward the viewer (from the view azimuth, mirrored in the south, and elevation), picture right and up. */
-function viewBasis(hemisphere: Assembly['hemisphere'], viewAzimuthDeg: number, viewElevationDeg: number): { toViewer: Vec3; right: Vec3; up: Vec3 } {
-  const azDeg = hemisphere === 'north' ? 180 - viewAzimuthDeg : viewAzimuthDeg;
-  const az = azDeg * DEG;
-  const el = viewElevationDeg * DEG;
-  const toViewer: Vec3 = [Math.sin(az) * Math.cos(el), Math.cos(az) * Math.cos(el), Math.sin(el)];
-  const forward: Vec3 = [-toViewer[0], -toViewer[1], -toViewer[2]];
-  const right = normalize3(cross3(forward, [0, 0, 1]));
-  const up = cross3(right, forward);
-  return { toViewer, right, up };
+/** The ground (Z = 0) as a backdrop, drawn over `outline` (X, Y, CCW seen from above). */
+export function groundBackdrop(outline: readonly Vec2[]): Backdrop {
+  return { kind: 'ground', origin: [0, 0, 0], uAxis: [1, 0, 0], vAxis: [0, 1, 0], normal: [0, 0, 1], outline };
 }
 
 /** The ground: the wedge's footprint grown by groundMm (world, Z = 0), CCW seen from above. */
@@ -117,145 +62,4 @@ function groundRect(assembly: Assembly, groundMm: number): Vec2[] {
       [fp.xMinMm - g, fp.yMaxMm + g],
     ] as Vec2[]
   ).map(([x, y]) => [sign * x, sign * y]);
-}
-
-/** The ground shadow: every sun-facing facet projected along −s onto Z = 0, CCW, clipped to the ground. */
-function groundShadow(assembly: Assembly, s: Vec3, ground: readonly Vec2[]): Vec2[][] {
-  const out: Vec2[][] = [];
-  for (const part of assembly.parts) {
-    for (const f of part.facets) {
-      if (dot3(f.normal, s) <= 1e-9) continue;
-      let q: Vec2[] = f.points.map((p) => [p[0] - (p[2] / s[2]) * s[0], p[1] - (p[2] / s[2]) * s[1]]);
-      const a = shoelaceArea(q);
-      if (Math.abs(a) < 1e-9) continue;
-      if (a < 0) q = q.reverse();
-      q = clipPolygonConvex(q, ground);
-      if (q.length >= 3) out.push(q);
-    }
-  }
-  return out;
-}
-
-/** The ground and the dial's shadow on it, the first two items painted (the shadow does not size the frame). */
-function groundItems(ground: readonly Vec2[], shadow: readonly Vec2[][], P: (p: Vec3) => Vec2): Placed[] {
-  const ground3 = ground.map(([x, y]) => [x, y, 0] as Vec3);
-  const gs = shadow.map((poly) => poly.map(([x, y]) => P([x, y, 0])));
-  return [
-    { item: { kind: 'ground', polygon: ground3.map(P) }, pts: ground3.map(P) },
-    { item: { kind: 'shadow', on: 'ground', polygons: gs }, pts: [] },
-  ];
-}
-
-/** One part's faces toward the viewer (the gnomon's clipped at the face), grouped by plane, far to near, shaded by the sun. */
-function partFaceItems(part: PlacedPart, face: FaceFrame, toViewer: Vec3, s: Vec3, P: (p: Vec3) => Vec2): Placed[] {
-  const heightOverFace = (p: Vec3) => dot3([p[0] - face.origin[0], p[1] - face.origin[1], p[2] - face.origin[2]], face.normal) + 1e-9;
-  const facets: Facet[] = [];
-  for (const f of part.facets) {
-    if (dot3(f.normal, toViewer) <= 1e-9) continue;
-    const pts = part.name === 'gnomon' ? clipPolygonAbovePlane(f.points, heightOverFace) : [...f.points];
-    if (pts.length >= 3) facets.push({ points: pts, normal: f.normal });
-  }
-  const groups = coplanarGroups(facets)
-    .map((group) => ({ group, d: meanDepth(group, toViewer) }))
-    .sort((a, b) => a.d - b.d);
-  return groups.map(({ group }) => {
-    const shade = AMBIENT + (1 - AMBIENT) * Math.max(0, dot3(group[0].normal, s));
-    const polys = group.map((f) => f.points.map(P));
-    return { item: { kind: 'face', part: part.name, shade: round6(shade), polygons: polys }, pts: polys.flat() };
-  });
-}
-
-/** The mean distance toward the viewer of a group's points (larger is nearer). */
-function meanDepth(group: readonly Facet[], toViewer: Vec3): number {
-  let sum = 0;
-  let count = 0;
-  for (const f of group) for (const p of f.points) (sum += dot3(p, toViewer)), count++;
-  return sum / count;
-}
-
-/** The items with the gnomon's shadow on the face put just before the gnomon's own faces (or last without a gnomon). */
-function withFaceShadow(items: readonly Placed[], shadow: FaceShadow, face: FaceFrame, P: (p: Vec3) => Vec2): Placed[] {
-  const firstGnomon = items.findIndex((e) => e.item.kind === 'face' && e.item.part === 'gnomon');
-  const shadowItem: Placed = { item: { kind: 'shadow', on: 'face', polygons: shadow.polygons.map((poly) => poly.map(([x, y]) => P(faceToWorld(face, [x, y, 0])))) }, pts: [] };
-  const at = firstGnomon < 0 ? items.length : firstGnomon;
-  return [...items.slice(0, at), shadowItem, ...items.slice(at)];
-}
-
-/** The picture frame from everything but the (clipped) shadows and engraving, with the margin, on whole mm. */
-function pictureFrame(items: readonly Placed[], marginMm: number): { left: number; topEdge: number; widthMm: number; heightMm: number } {
-  const all = items.flatMap((e) => e.pts);
-  const minX = Math.min(...all.map((p) => p[0])) - marginMm;
-  const maxX = Math.max(...all.map((p) => p[0])) + marginMm;
-  const minY = Math.min(...all.map((p) => p[1])) - marginMm;
-  const maxY = Math.max(...all.map((p) => p[1])) + marginMm;
-  const left = Math.floor(minX);
-  const topEdge = Math.floor(minY);
-  return { left, topEdge, widthMm: Math.ceil(maxX) - left, heightMm: Math.ceil(maxY) - topEdge };
-}
-
-/** Holes, slots, marks and text of the plate drawing, on the face in the picture. */
-function faceEngraving(layout: DialLayout, drawing: PlateDrawing, assembly: Assembly, toViewer: Vec3, P: (p: Vec3) => Vec2): PictureItem[] {
-  const face = assembly.face;
-  const dx = drawing.substyleX;
-  const dy = drawing.faceOriginY;
-  const onFace = (x: number, y: number): Vec2 => P(faceToWorld(face, [x - dx, y - dy, 0]));
-  const foreshorten = Math.sqrt(Math.abs(dot3(face.normal, toViewer)));
-  const out: PictureItem[] = [];
-  for (const c of drawing.holes) {
-    const poly = Array.from({ length: 32 }, (_, k) => onFace(c.cx + c.radiusMm * Math.cos((k * Math.PI) / 16), c.cy + c.radiusMm * Math.sin((k * Math.PI) / 16)));
-    out.push({ kind: 'engraving', role: 'hole', label: 'hole', polygon: poly });
-  }
-  for (const r of drawing.slots) {
-    const poly = roundedRectPolygon(r, ASSEMBLY_CORNER_SEGMENTS).map(([x, y]) => onFace(x, y));
-    out.push({ kind: 'engraving', role: 'slot', label: 'slot', polygon: poly });
-  }
-  for (const l of drawing.lines) {
-    const pts = l.path.points;
-    if (pts.length === 2) {
-      const [a, b] = pts;
-      const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
-      const nx = (-(b[1] - a[1]) / len) * (l.widthMm / 2);
-      const ny = ((b[0] - a[0]) / len) * (l.widthMm / 2);
-      out.push({ kind: 'engraving', role: 'mark', label: l.label, polygon: [onFace(a[0] - nx, a[1] - ny), onFace(b[0] - nx, b[1] - ny), onFace(b[0] + nx, b[1] + ny), onFace(a[0] + nx, a[1] + ny)] });
-    } else {
-      out.push({ kind: 'stroke', role: 'label', widthMm: round6(l.widthMm * foreshorten), points: pts.map(([x, y]) => onFace(x, y)) });
-    }
-  }
-  for (const t of drawing.text) {
-    for (const st of t.strokes) out.push({ kind: 'stroke', role: t.role, widthMm: round6(t.strokeWidthMm * foreshorten), points: st.points.map(([x, y]) => onFace(x, y)) });
-  }
-  void layout;
-  return out;
-}
-
-/** Facets grouped by plane (same normal and offset), in far-to-near order of their centroids. */
-function coplanarGroups(facets: readonly Facet[]): Facet[][] {
-  const groups = new Map<string, Facet[]>();
-  for (const f of facets) {
-    const n = f.normal;
-    const d = dot3(n, f.points[0]);
-    const key = `${n.map((c) => Math.round(c * 1e5)).join(',')}|${Math.round(d * 1e3)}`;
-    const list = groups.get(key);
-    if (list) list.push(f);
-    else groups.set(key, [f]);
-  }
-  return [...groups.values()];
-}
-
-function moveItem(item: PictureItem, m: (p: Vec2) => Vec2): PictureItem {
-  switch (item.kind) {
-    case 'ground':
-      return { ...item, polygon: item.polygon.map(m) };
-    case 'face':
-    case 'shadow':
-      return { ...item, polygons: item.polygons.map((p) => p.map(m)) };
-    case 'engraving':
-      return { ...item, polygon: item.polygon.map(m) };
-    case 'stroke':
-      return { ...item, points: item.points.map(m) };
-  }
-}
-
-function round6(v: number): number {
-  return Math.round(v * 1e6) / 1e6;
 }
