@@ -23,6 +23,7 @@ import { cutPartFiles } from './outputs/cutParts.ts';
 import { planarStandFiles } from './outputs/planarStandOutputs.ts';
 import { utf8 } from './outputs/outputTypes.ts';
 import { planarExtraOutputs } from './outputs/planarExtras.ts';
+import { planarPictureFiles } from './outputs/planarPictures.ts';
 import type { PlanarReport, WallMountSection } from './outputs/planarReport.ts';
 import { planarPreviewSvgOptions } from './planarViews.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
@@ -61,6 +62,8 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   const preview = toSvg(drawing, planarPreviewSvgOptions({ spec, layout }));
   files.push({ name: 'preview.svg', bytes: utf8(preview) });
   if (spec.pictures.write) files.push({ name: 'preview.png', bytes: toPng(preview, { pxPerMm: spec.pictures.pxPerMm }) });
+  const pictures = spec.pictures.write ? await planarPictureFiles(spec, layout, drawing) : { files: [], notes: [] };
+  files.push(...pictures.files);
   const engraving = await engraveFromSpec(spec, drawing);
   files.push(...engraving.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })));
 
@@ -112,10 +115,11 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
     ...(mount.report ? { mount: mount.report } : {}),
     ...(stand.report ? { stand: stand.report } : {}),
     ...(pillar ? { pillar } : {}),
+    ...(pictures.report ? { pictures: pictures.report } : {}),
     ...extras.report,
     time: layout.time,
     engraving: engraving.report,
-    notes: layout.notes,
+    notes: [...layout.notes, ...pictures.notes],
     files: names,
   };
   files.push({ name: 'report.json', bytes: utf8(toReportJson(report)) });

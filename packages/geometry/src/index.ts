@@ -80,8 +80,11 @@ export { planarMarksFromPlate } from './shadow/planarMarksFromPlate.ts';
 
 export type { AssemblyPartName, PictureItem } from './assembly/assemblyTypes.ts';
 export { placeAssembly, faceToWorld } from './assembly/placeAssembly.ts';
-export { defaultPictureDate, sunForPicture } from './assembly/sunForPicture.ts';
+export { defaultPictureDate, sunForPicture, type PictureSun } from './assembly/sunForPicture.ts';
 export { viewAssembly, type AssemblyPicture } from './assembly/viewAssembly.ts';
+export { placePlanarAssembly, type PlanarAssembly, type PlanarMounting } from './assembly/placePlanarAssembly.ts';
+export { viewPlanarAssembly, type PlanarAssemblyPicture } from './assembly/viewPlanarAssembly.ts';
+export { planarPictureSun } from './assembly/planarPictureSun.ts';
 export { projectToPicture, viewScene, type PlacedScene, type ScenePicture, type Backdrop } from './assembly/viewScene.ts';
 
 export type { FlatStand, PartPlacement } from './stand/standTypes.ts';

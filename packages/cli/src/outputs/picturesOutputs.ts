@@ -1,4 +1,4 @@
-import { defaultPictureDate, sunForPicture, viewAssembly } from '@umbrafab/geometry';
+import { defaultPictureDate, sunForPicture, viewAssembly, type PictureSun, type ScenePicture } from '@umbrafab/geometry';
 import { fitPixelBudget, svgHeightMm, svgWidthMm, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM, MAX_PICTURE_PIXELS } from '@umbrafab/fabricate';
 import { previewSvgText } from './plateOutputs.ts';
 import { perDrawing } from './perDrawing.ts';
@@ -22,25 +22,7 @@ export interface PicturesSection {
   /** preview.svg / preview.png: the face at 1:1; `pxPerMm` only when lowered to fit maxPixels */
   readonly preview: { readonly widthMm: number; readonly pxPerMm?: number; readonly widthPx: number; readonly heightPx: number };
   /** assembly.svg / assembly.png: the dial on its stand with the shadow at pictures.date / pictures.time */
-  readonly assembly: {
-    readonly widthMm: number;
-    readonly heightMm: number;
-    /** only when lowered to fit maxPixels */
-    readonly pxPerMm?: number;
-    readonly widthPx: number;
-    readonly heightPx: number;
-    /** local date 'YYYY-MM-DD' */
-    readonly date: string;
-    /** the dial reading shown, 'HH:MM' */
-    readonly dialTime: string;
-    /** the local clock then, 'HH:MM:SS' */
-    readonly clock: string;
-    readonly daylightSaving: boolean;
-    /** the instant, ISO 8601 UTC */
-    readonly utc: string;
-    readonly sunAltitudeDeg: number;
-    /** from true north toward the east, degrees */
-    readonly sunAzimuthDeg: number;
+  readonly assembly: AssemblyPictureSection & {
     /** 'west' or 'east': the style edge casting the shadow */
     readonly shadowStyle: string;
     /** face x of the shadow's edge on the face, mm */
@@ -48,6 +30,47 @@ export interface PicturesSection {
     readonly wedgeTiltDeg: number;
     readonly viewAzimuthDeg: number;
     readonly viewElevationDeg: number;
+  };
+}
+
+/** assembly.svg / assembly.png of any face type: its size and the moment it shows. */
+export interface AssemblyPictureSection {
+  readonly widthMm: number;
+  readonly heightMm: number;
+  /** only when lowered to fit maxPixels */
+  readonly pxPerMm?: number;
+  readonly widthPx: number;
+  readonly heightPx: number;
+  /** local date 'YYYY-MM-DD' */
+  readonly date: string;
+  /** the dial reading shown, 'HH:MM' */
+  readonly dialTime: string;
+  /** the local clock then, 'HH:MM:SS' */
+  readonly clock: string;
+  readonly daylightSaving: boolean;
+  /** the instant, ISO 8601 UTC */
+  readonly utc: string;
+  readonly sunAltitudeDeg: number;
+  /** from true north toward the east, degrees */
+  readonly sunAzimuthDeg: number;
+}
+
+/** The size and moment fields of an assembly picture's report section, in report order. */
+export function assemblyPictureFields(picture: ScenePicture, png: Uint8Array, fit: { pxPerMm: number; lowered: boolean }, date: string, sun: PictureSun): AssemblyPictureSection {
+  const r3 = (v: number) => Math.round(v * 1000) / 1000;
+  return {
+    widthMm: picture.widthMm,
+    heightMm: picture.heightMm,
+    ...(fit.lowered ? { pxPerMm: fit.pxPerMm } : {}),
+    widthPx: readU32(png, 16),
+    heightPx: readU32(png, 20),
+    date,
+    dialTime: sun.dialTime,
+    clock: sun.clock,
+    daylightSaving: sun.daylightSaving,
+    utc: sun.utc,
+    sunAltitudeDeg: r3(sun.altitudeDeg),
+    sunAzimuthDeg: r3(sun.azimuthDeg),
   };
 }
 
@@ -127,17 +150,7 @@ async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[];
       ...(note ? { maxPixels: MAX_PICTURE_PIXELS, note } : {}),
       preview: { widthMm: svgWidthMm(preview), ...fitted(previewFit), ...size(previewPng) },
       assembly: {
-        widthMm: picture.widthMm,
-        heightMm: picture.heightMm,
-        ...fitted(assemblyFit),
-        ...size(assemblyPng),
-        date,
-        dialTime: sun.dialTime,
-        clock: sun.clock,
-        daylightSaving: sun.daylightSaving,
-        utc: sun.utc,
-        sunAltitudeDeg: r3(sun.altitudeDeg),
-        sunAzimuthDeg: r3(sun.azimuthDeg),
+        ...assemblyPictureFields(picture, assemblyPng, assemblyFit, date, sun),
         shadowStyle: picture.shadow.style,
         shadowEdgeXMm: r3(picture.shadow.edgeXMm),
         wedgeTiltDeg: r3((picture.assembly.tiltRad * 180) / Math.PI),
@@ -170,6 +183,6 @@ async function templateOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]
 }
 
 /** Big-endian uint32 (PNG IHDR width at byte 16, height at 20). */
-function readU32(b: Uint8Array, at: number): number {
+export function readU32(b: Uint8Array, at: number): number {
   return ((b[at] << 24) >>> 0) + (b[at + 1] << 16) + (b[at + 2] << 8) + b[at + 3];
 }

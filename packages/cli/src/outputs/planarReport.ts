@@ -5,6 +5,7 @@ import type { MeshFigures } from './meshFigures.ts';
 import type { PlanarExtras } from './planarExtras.ts';
 import type { EquatorialStandSection } from './planarStandOutputs.ts';
 import type { PlateSection } from './plateOutputs.ts';
+import type { PlanarPicturesSection } from './planarPictures.ts';
 import type { ReportHead, ReportTail } from './report.ts';
 
 /**
@@ -39,6 +40,8 @@ export interface PlanarSections {
   readonly stand?: EquatorialStandSection;
   /** a horizontal face's fixing to its pillar top (studs set in resin, levelling nuts); absent for other faces or a plate without holes */
   readonly pillar?: PillarFixing;
+  /** assembly.svg / assembly.png as rendered (pictures.write; absent for a face with no placement) */
+  readonly pictures?: PlanarPicturesSection;
   /** how the dial reads and the corrections to clock time */
   readonly time: TimeLayout;
   readonly engraving: EngravingReport;

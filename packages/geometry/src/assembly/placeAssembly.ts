@@ -125,12 +125,13 @@ export function worldToFaceDirection(face: FaceFrame, d: Vec3): Vec3 {
   return [dot(face.xAxis), dot(face.yAxis), dot(face.normal)];
 }
 
-function rotate(face: FaceFrame, d: Vec3): Vec3 {
+/** A face-frame direction in the world. */
+export function rotate(face: FaceFrame, d: Vec3): Vec3 {
   return [0, 1, 2].map((i) => d[0] * face.xAxis[i] + d[1] * face.yAxis[i] + d[2] * face.normal[i]) as unknown as Vec3;
 }
 
 /** Every triangle of a mesh as a facet, moved by `move` (a rigid motion), normal from its winding. */
-function meshFacets(mesh: Mesh, move: (p: Vec3) => Vec3): Facet[] {
+export function meshFacets(mesh: Mesh, move: (p: Vec3) => Vec3): Facet[] {
   return mesh.triangles.map(([a, b, c]) => {
     const pts = [mesh.positions[a], mesh.positions[b], mesh.positions[c]].map(move);
     return { points: pts, normal: normalize3(cross3(sub3(pts[1], pts[0]), sub3(pts[2], pts[0]))) };
@@ -138,7 +139,7 @@ function meshFacets(mesh: Mesh, move: (p: Vec3) => Vec3): Facet[] {
 }
 
 /** Faces of a prism over a CCW outline from z0 to z1 (face frame), with outward normals. */
-function prismFacets(outline: readonly Vec2[], z0: number, z1: number): Facet[] {
+export function prismFacets(outline: readonly Vec2[], z0: number, z1: number): Facet[] {
   const top: Facet = { points: outline.map(([x, y]) => [x, y, z1] as Vec3), normal: [0, 0, 1] };
   const bottom: Facet = { points: [...outline].reverse().map(([x, y]) => [x, y, z0] as Vec3), normal: [0, 0, -1] };
   const sides: Facet[] = outline.map((a, i) => {

@@ -3,7 +3,8 @@ import type { DialLayout } from '../polar/layoutDial.ts';
 import type { SizedStand } from '../stand/flatStand.ts';
 import { placePoint } from '../stand/placeStandPart.ts';
 import { sheetPartFacets, type PartFacet } from '../stand/sheetPartMesh.ts';
-import type { PartPlacement } from '../stand/standTypes.ts';
+import type { PartPlacement, StandInstance } from '../stand/standTypes.ts';
+import type { SheetPart } from '../sheet/sheetPart.ts';
 
 /** Sides of the prisms standing for screw heads, nuts and anchors in the pictures. */
 const FIXING_SIDES = 12;
@@ -26,6 +27,20 @@ function prism(pl: PartPlacement, [x, y]: readonly [number, number], radiusMm: n
   return out;
 }
 
+/** Every face of every flat part at its placement (16 segments a hole), in the placements' frame. */
+export function placedPartFacets(parts: readonly SheetPart[], instances: readonly StandInstance[]): PartFacet[] {
+  const out: PartFacet[] = [];
+  const byName = new Map(parts.map((p) => [p.name, sheetPartFacets(p, 16)]));
+  for (const inst of instances) {
+    const facets = byName.get(inst.part) ?? [];
+    const pl = inst.placement;
+    for (const f of facets) {
+      out.push({ points: f.points.map((p) => placePoint(pl, p)), normal: [0, 1, 2].map((i) => pl.e1[i] * f.normal[0] + pl.e2[i] * f.normal[1] + pl.normal[i] * f.normal[2]) as unknown as Vec3 });
+    }
+  }
+  return out;
+}
+
 /**
  * The flat-pack stand as drawn in the pictures and the page (stand frame):
  * every part's faces at its placement, the ground anchors (a stud and nut
@@ -34,15 +49,7 @@ function prism(pl: PartPlacement, [x, y]: readonly [number, number], radiusMm: n
  * `mountingFixings` gives through the seat.
  */
 export function standFacets(layout: DialLayout, stand: SizedStand): { stand: PartFacet[]; fixings: PartFacet[] } {
-  const out: PartFacet[] = [];
-  const byName = new Map(stand.parts.map((p) => [p.name, sheetPartFacets(p, 16)]));
-  for (const inst of stand.instances) {
-    const facets = byName.get(inst.part) ?? [];
-    const pl = inst.placement;
-    for (const f of facets) {
-      out.push({ points: f.points.map((p) => placePoint(pl, p)), normal: [0, 1, 2].map((i) => pl.e1[i] * f.normal[0] + pl.e2[i] * f.normal[1] + pl.normal[i] * f.normal[2]) as unknown as Vec3 });
-    }
-  }
+  const out: PartFacet[] = placedPartFacets(stand.parts, stand.instances);
   const T = stand.dims.thicknessMm;
   const z = stand.sizing;
   if (z.anchor) {

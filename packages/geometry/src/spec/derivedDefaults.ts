@@ -35,7 +35,7 @@ export const DERIVED_DEFAULTS: readonly DerivedDefault[] = [
   { key: 'process.kerf', follows: ['process.method'], rule: 'laser 0.15 mm, waterjet 0.9 mm, router 3.175 mm (the tool), print 0 mm' },
   { key: 'process.clearance', follows: ['process.method'], rule: 'print 0.2 mm per side, other methods 0.1 mm' },
   { key: 'install.date', follows: ['calendar.year'], rule: 'April 1 of calendar.year' },
-  { key: 'pictures.date', follows: ['site.latitude', 'calendar.year'], rule: 'the local summer solstice of calendar.year (June 21 north, December 21 south)' },
+  { key: 'pictures.date', follows: ['site.latitude', 'calendar.year', 'face.side'], rule: 'the local summer solstice of calendar.year (June 21 north, December 21 south; the winter one for an equatorial lower face)' },
   { key: 'engrave.tool.flatMinWidthMm', follows: ['engrave.tool.flatEndMillMm'], rule: 'the flat end mill diameter' },
   { key: 'engrave.spindleRpm', follows: ['plate.material'], rule: PRESET('rev/min') },
   { key: 'engrave.feedMmPerMin', follows: ['plate.material'], rule: PRESET('mm/min') },

@@ -19,11 +19,11 @@ export const picturesSection = z
     pxPerMm: bounded(1, 20, 'px/mm').default(4).describe('pixels per millimetre of preview.png and assembly.png (4 px/mm is about 100 dpi)'),
     date: dateField('2027-06-21')
       .optional()
-      .describe('local date of the shadow in the assembly picture, "YYYY-MM-DD" (default: the local summer solstice of calendar.year, June 21 north, December 21 south)'),
+      .describe('local date of the shadow in the assembly picture, "YYYY-MM-DD" (default: the local summer solstice of calendar.year, June 21 north, December 21 south; the winter solstice for an equatorial dial\'s lower face)'),
     time: clockField('10:00')
       .default('10:00')
       .describe('dial reading the shadow shows in the assembly picture, "HH:MM" (the moment the real sun puts the shadow on that line; the report gives its clock time)'),
-    viewAzimuth: bounded(-80, 80, '°').default(35).describe('viewpoint of the assembly picture, degrees east of the equator-ward direction (negative: west)'),
+    viewAzimuth: bounded(-80, 80, '°').default(35).describe('viewpoint of the assembly picture, degrees east of the equator-ward direction (negative: west); a horizontal, wall or equatorial face is seen that far from its front, on the side away from the sun'),
     viewElevation: bounded(5, 85, '°').default(30).describe('viewpoint height above the horizon, degrees'),
   })
   .prefault({});
