@@ -1,6 +1,7 @@
 // Regenerates the README's pictures from the demo spec, so they never drift from the code:
 //   npx tsx scripts/readme-pictures.ts
-// writes docs/images/preview.png, docs/images/assembly.png, docs/images/stand-parts.png and docs/images/template-page1.png
+// writes docs/images/preview.png, docs/images/assembly.png, docs/images/stand-parts.png, docs/images/template-page1.png,
+// and for each planar type docs/images/face-<name>.png (its preview.png) and docs/images/assembly-<name>.png (its assembly.svg at 2 px/mm)
 // (the last one rasterised from template.pdf with poppler-utils' pdftoppm, when installed).
 import { execFileSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
@@ -10,7 +11,7 @@ import { buildFiles, readSpecFile, buildAnyFiles } from '@umbrafab/cli';
 import { flatStand, pieceRows } from '@umbrafab/geometry';
 import { piecesDrawing, toCutSvg, toPngAsync } from '@umbrafab/fabricate';
 
-/** One picture per planar face type, from fixtures/planar/ (docs/images/face-<name>.png). */
+/** Two pictures per planar face type, from fixtures/planar/ (docs/images/face-<name>.png and assembly-<name>.png). */
 const PLANAR_PICTURES = ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial'];
 
 const ROOT = resolve(import.meta.dirname, '..');
@@ -51,6 +52,11 @@ async function run(): Promise<void> {
     if (!png) throw new Error(`fixtures/planar/${name}.yaml wrote no preview.png`);
     writeFileSync(join(OUT, `face-${name}.png`), png.bytes);
     written.push(`face-${name}.png`);
+    // The face as it stands (assembly.png), rendered at 2 px/mm from build's own assembly.svg to keep the README light.
+    const svg = built.files.find((f) => f.name === 'assembly.svg');
+    if (!svg) throw new Error(`fixtures/planar/${name}.yaml wrote no assembly.svg`);
+    writeFileSync(join(OUT, `assembly-${name}.png`), await toPngAsync(new TextDecoder().decode(svg.bytes), { pxPerMm: 2 }));
+    written.push(`assembly-${name}.png`);
   }
   console.log(`readme-pictures: wrote ${written.map((n) => `docs/images/${n}`).join(', ')}`);
 }
