@@ -11,6 +11,7 @@ import { dialFrame, toDialFrame, type DialFrame } from './dialFrame.ts';
 import { drawnMarksFromLayout, type DrawnMark } from './drawnMarks.ts';
 import { gnomonForLayout } from './gnomonForLayout.ts';
 import { checkSampling } from './checkSampling.ts';
+import { markErrorSummary, newMarkErrorTally, tallyReached, type MarkErrorTally, type WorstMean } from './markErrorTally.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
 import { instantAtHourAngle, sunOnDay, type RefractionModel, type SunDay, type SunSample, type SunTrack } from '../sun/sunTrack.ts';
 import { KM_PER_AU } from 'astronomy-engine';
@@ -46,12 +47,6 @@ export interface CheckOptions {
 export interface Range {
   readonly min: number;
   readonly max: number;
-}
-
-/** Worst (largest magnitude, signed) and mean magnitude of a quantity over the lit days. */
-export interface WorstMean {
-  readonly worst: number;
-  readonly meanAbs: number;
 }
 
 /** The year's result for one mark. */
@@ -318,16 +313,8 @@ function scoreMarkOnDay(a: Accumulator, g: Scoring, m: MarkDay): void {
   // Face-x speed of the shadow: dx/dH = h / cos² H (tan law), signed by hemisphere.
   const speedMmPerS = (g.hemiSign * h * HOUR_ANGLE_RAD_PER_S) / Math.cos(H) ** 2;
   const errS = -cast.errorMm / speedMmPerS;
-  a.reached++;
   a.errors.push(cast.errorMm);
-  a.sumAbsMm += Math.abs(cast.errorMm);
-  a.sumAbsS += Math.abs(errS);
-  if (Math.abs(cast.errorMm) > g.toleranceMm) a.over++;
-  if (a.worstDate === null || Math.abs(cast.errorMm) > Math.abs(a.worstMm)) {
-    a.worstMm = cast.errorMm;
-    a.worstS = errS;
-    a.worstDate = day.date;
-  }
+  tallyReached(a, cast.errorMm, errS, g.toleranceMm, day.date);
   scoreInstallShifts(a, g, m, cast.shadowXMm, speedMmPerS);
 }
 
@@ -352,12 +339,7 @@ function markCheck(d: DrawnMark, a: Accumulator): MarkCheck {
     style: d.mark.style,
     hourAngleDeg: d.mark.hourAngleDeg,
     xMm: (d.a[0] + d.b[0]) / 2,
-    litDays: a.lit,
-    reachedDays: a.reached,
-    errorMm: { worst: a.worstMm, meanAbs: a.reached ? a.sumAbsMm / a.reached : 0 },
-    errorS: { worst: a.worstS, meanAbs: a.reached ? a.sumAbsS / a.reached : 0 },
-    worstDate: a.worstDate,
-    daysOverTolerance: a.over,
+    ...markErrorSummary(a),
     penumbraMm: a.penumbra ?? { min: 0, max: 0 },
     clockOffsetMin: a.clock ?? { min: 0, max: 0 },
     tiltShiftMinPerDeg: { worst: a.tilt.worst, meanAbs: a.tilt.n ? a.tilt.sumAbs / a.tilt.n : 0 },
@@ -438,15 +420,8 @@ function CHECK_METHOD(refraction: RefractionModel): string[] {
   ];
 }
 
-interface Accumulator {
-  lit: number;
-  reached: number;
-  over: number;
-  worstMm: number;
-  worstS: number;
-  worstDate: string | null;
-  sumAbsMm: number;
-  sumAbsS: number;
+/** A mark's tally over the days (`MarkErrorTally`) with what only the polar check measures. */
+interface Accumulator extends MarkErrorTally {
   penumbra: Range | null;
   clock: Range | null;
   tilt: { n: number; worst: number; sumAbs: number };
@@ -455,7 +430,7 @@ interface Accumulator {
 }
 
 function newAccumulator(): Accumulator {
-  return { lit: 0, reached: 0, over: 0, worstMm: 0, worstS: 0, worstDate: null, sumAbsMm: 0, sumAbsS: 0, penumbra: null, clock: null, tilt: { n: 0, worst: 0, sumAbs: 0 }, az: { n: 0, worst: 0, sumAbs: 0 }, errors: [] };
+  return { ...newMarkErrorTally(), penumbra: null, clock: null, tilt: { n: 0, worst: 0, sumAbs: 0 }, az: { n: 0, worst: 0, sumAbs: 0 }, errors: [] };
 }
 
 function widen(r: Range | null, v: number): Range {

@@ -12,6 +12,7 @@ import { planarGnomonSolid } from '../planar/planarGnomonSolid.ts';
 import type { FinEdge } from '../planar/planarTypes.ts';
 import { sunDirectionEnu } from '../planar/sunDirectionEnu.ts';
 import { checkSampling } from './checkSampling.ts';
+import { markErrorSummary, newMarkErrorTally, tallyReached } from './markErrorTally.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
 
 /** Rate of the hour angle, rad per second of time (one turn per solar day, as the polar check). */
@@ -118,7 +119,7 @@ export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = 
   const rodTop = part.kind === 'rod' ? rodTopCentre(part.mesh.positions) : null;
   const nodusOf = (edge: FinEdge): Vec3 | null => (layout.gnomon.nodusAlongStyleMm === null ? null : rodTop ?? nodusOnEdges(edgesOf(edge), layout));
 
-  const acc = drawn.map(() => ({ lit: 0, reached: 0, over: 0, worstMm: 0, worstS: 0, worstDate: null as string | null, sumMm: 0, sumS: 0 }));
+  const acc = drawn.map(() => newMarkErrorTally());
   const hours = drawn.map((m) => m.hourAngleDeg * DEG);
   let litMinutes = 0;
   let sunPositions = 0;
@@ -145,15 +146,7 @@ export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = 
       const next = rodTop ? rodShadowOnSegment(rodTop, moved, m.a, m.b) : shadowOnSegment(edgesOf(m.edge), moved, m.a, m.b);
       const speed = next ? next.meanOffsetMm - cast.meanOffsetMm : 0;
       const errS = speed !== 0 ? -cast.errorMm / speed : 0;
-      a.reached++;
-      a.sumMm += Math.abs(cast.errorMm);
-      a.sumS += Math.abs(errS);
-      if (Math.abs(cast.errorMm) > toleranceMm) a.over++;
-      if (a.worstDate === null || Math.abs(cast.errorMm) > Math.abs(a.worstMm)) {
-        a.worstMm = cast.errorMm;
-        a.worstS = errS;
-        a.worstDate = day.date;
-      }
+      tallyReached(a, cast.errorMm, errS, toleranceMm, day.date);
     });
   }
 
@@ -164,12 +157,7 @@ export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = 
       kind: m.kind,
       edge: m.edge,
       hourAngleDeg: m.hourAngleDeg,
-      litDays: a.lit,
-      reachedDays: a.reached,
-      errorMm: { worst: a.worstMm, meanAbs: a.reached ? a.sumMm / a.reached : 0 },
-      errorS: { worst: a.worstS, meanAbs: a.reached ? a.sumS / a.reached : 0 },
-      worstDate: a.worstDate,
-      daysOverTolerance: a.over,
+      ...markErrorSummary(a),
     };
   });
 
