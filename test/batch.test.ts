@@ -50,10 +50,10 @@ describe('umbrafab batch', () => {
     const summary = JSON.parse(readFileSync(join(out, 'report.json'), 'utf8'));
     expect(summary.plate.shared).toBe(true);
     expect(summary.latitudeRangeDeg).toEqual([30, 50]);
-    // Per latitude: its wedge, install sheet and report; the plate, its preview and the template once; pictures are left to build.
+    // Per latitude: its stand, install sheet, report and template (the template draws the stand's parts at 1:1); the plate and its preview once; pictures are left to build.
     expect(names.filter((n) => n.endsWith('.png'))).toEqual([]);
-    for (const lat of lats) for (const f of [`stand-N${lat}.stl`, `stand-N${lat}.dxf`, `install-N${lat}.md`, `report-N${lat}.json`]) expect(names, f).toContain(f);
-    for (const f of ['plate.dxf', 'preview.svg', 'gnomon.dxf', 'template.pdf']) expect(names, f).toContain(f);
+    for (const lat of lats) for (const f of [`stand-N${lat}.stl`, `stand-N${lat}.dxf`, `install-N${lat}.md`, `report-N${lat}.json`, `template-N${lat}.pdf`]) expect(names, f).toContain(f);
+    for (const f of ['plate.dxf', 'preview.svg', 'gnomon.dxf']) expect(names, f).toContain(f);
     expect(readFileSync(join(out, 'install-N45.md'), 'utf8')).toMatch(/45/);
     // The shared plate states the range it serves, not one latitude: it is build's plate for that range title.
     const spec30 = parseSpec({ ...parseYaml(readFileSync(DEMO, 'utf8')), site: { ...parseYaml(readFileSync(DEMO, 'utf8')).site, latitude: 30 } });

@@ -156,6 +156,32 @@ describe('template.pdf of every planar face, read back as the shop prints it', (
     console.log(measured.join('\n'));
   });
 
+  it('the polar demo: the gnomon fin and every stand part at 1:1 after the tables, on the sheets report.json names; a single-sheet part spans its size within 0.2 mm', async () => {
+    const spec = parseSpec({ ...parse(readFileSync(new URL('../fixtures/demo.yaml', import.meta.url), 'utf8')), pictures: { write: false } });
+    const b = await buildAnyFiles(spec);
+    const dir = mkdtempSync(join(tmpdir(), 'umbrafab-ptemplate-'));
+    const file = join(dir, 'template.pdf');
+    writeFileSync(file, b.files.find((f) => f.name === 'template.pdf')!.bytes);
+    const report = b.report as Record<string, any>;
+    expect(pdfinfoSizes(file).pages).toBe(report.template.pages);
+    const stand = report.stand.parts as { label: string; sizeMm: [number, number] }[];
+    const labels = report.template.drawings.map((d: { label: string }) => d.label);
+    expect(labels).toEqual(['plate', 'gnomon fin profile', ...stand.map((p) => `stand ${p.label}`)]);
+    const pages = execFileSync('pdftotext', ['-layout', file, '-'], { encoding: 'utf8' }).split('\f');
+    let measured = 0;
+    for (const d of report.template.drawings as { label: string; firstSheet: number; lastSheet: number }[]) {
+      for (let k = d.firstSheet; k <= d.lastSheet; k++) expect(pages[k - 1], `sheet ${k}`).toContain(`${d.label} at 1:1`);
+      const part = stand.find((p) => `stand ${p.label}` === d.label);
+      if (!part || d.firstSheet !== d.lastSheet) continue;
+      const pageH = report.template.orientation === 'portrait' ? 297 : 210;
+      const ink = inkExtentMm(renderPage(file, d.firstSheet, dir), 26, pageH - 28);
+      expectClose(ink.widthMm, part.sizeMm[0] + OUTLINE_MM, 0.2, `${d.label} width on paper`, ' mm');
+      expectClose(ink.heightMm, part.sizeMm[1] + OUTLINE_MM, 0.2, `${d.label} height on paper`, ' mm');
+      measured++;
+    }
+    expect(measured).toBeGreaterThan(0);
+  });
+
   it('a plate larger than the sheet is tiled over overlapping sheets, and the wall mount too', async () => {
     const { dir, report } = await built('wall-reclining');
     expect(report.template.sheets.columns * report.template.sheets.rows).toBeGreaterThan(1);

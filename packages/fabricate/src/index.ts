@@ -39,7 +39,9 @@ export {
   CALIBRATION_BAR_MM,
   CALIBRATION_BAR_RGB,
   PRINT_AT_FULL_SIZE,
+  templateDrawings,
   type TemplatePart,
+  type TemplateDrawingSheets,
 } from './template/toTemplatePdf.ts';
 export { BORDER_MM as TEMPLATE_BORDER_MM } from './template/templatePages.ts';
 

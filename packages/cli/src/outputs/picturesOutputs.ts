@@ -1,5 +1,6 @@
-import { defaultPictureDate, sunForPicture, viewAssembly, type PictureSun, type ScenePicture } from '@umbrafab/geometry';
-import { fitPixelBudget, svgHeightMm, svgWidthMm, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM, MAX_PICTURE_PIXELS } from '@umbrafab/fabricate';
+import { defaultPictureDate, sheetParts, sunForPicture, viewAssembly, type PictureSun, type ScenePicture } from '@umbrafab/geometry';
+import { fitPixelBudget, svgHeightMm, svgWidthMm, templateDrawings, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM, MAX_PICTURE_PIXELS, type TemplateDrawingSheets } from '@umbrafab/fabricate';
+import { STAND_PART_LABELS } from './standOutputs.ts';
 import { previewSvgText } from './plateOutputs.ts';
 import { perDrawing } from './perDrawing.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
@@ -84,6 +85,10 @@ export interface TemplateSection {
   /** length of the calibration bar, mm */
   readonly calibrationBarMm: number;
   readonly scale: string;
+  /** sheets in all */
+  readonly pages: number;
+  /** each drawing at 1:1 (the plate, the gnomon fin's profile, the stand's or wall mount's parts) and its sheets, in page order */
+  readonly drawings: readonly TemplateDrawingSheets[];
 }
 
 /**
@@ -165,10 +170,15 @@ async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[];
 async function templateOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: TemplateSection }> {
   const { spec, layout, drawing } = ctx;
   const tOpts = { paper: spec.template.paper, orientation: spec.template.orientation, overlapMm: spec.template.overlap, marginMm: spec.template.margin };
-  const input = { marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name };
-  // Once per drawing and input (every latitude of a batch that shares the plate gets the same template).
+  // The flat parts cut besides the plate (a sheet gnomon, the stand's parts), nominal, each at 1:1 after the tables.
+  const parts = sheetParts(layout, drawing, { reliefToolRadiusMm: 0 })
+    .filter((p) => p.name !== 'plate')
+    .map((p) => ({ label: p.name === 'gnomon' ? 'gnomon fin profile' : `stand ${STAND_PART_LABELS[p.name] ?? p.name}`, part: p }));
+  const input = { marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name, parts };
+  // Once per drawing and input (every latitude of a batch that shares the plate and parts gets the same template).
   const pdf = await perDrawing(drawing, `template ${JSON.stringify([input, tOpts])}`, () => toTemplatePdf({ drawing, ...input }, tOpts));
   const tiles = templateTiles(drawing, tOpts);
+  const plan = templateDrawings({ drawing, ...input }, tOpts);
   return {
     files: [{ name: 'template.pdf', bytes: pdf }],
     report: {
@@ -178,6 +188,8 @@ async function templateOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]
       overlapMm: tiles.overlapMm,
       calibrationBarMm: CALIBRATION_BAR_MM,
       scale: '1:1',
+      pages: plan.pages,
+      drawings: plan.drawings,
     },
   };
 }

@@ -15,12 +15,8 @@ export interface PlanarExtras {
   readonly templateGuide?: PlanarTemplateGuide;
 }
 
-/** report.json `template` of a planar face: the polar section's fields, and which sheets show which drawing. */
-export interface PlanarTemplateSection extends TemplateSection {
-  readonly pages: number;
-  /** each drawing at 1:1 (the plate, the fin profile, the wall mount) and its sheets, in page order */
-  readonly drawings: PlanarTemplateGuide['drawings'];
-}
+/** report.json `template` of a planar face: the same section as the polar plate's. */
+export type PlanarTemplateSection = TemplateSection;
 
 /**
  * The outputs of a horizontal, wall, meridian or equatorial face that

@@ -11,6 +11,8 @@ export interface TemplateInput {
   readonly gnomonThicknessMm: number;
   /** dial name, printed in the heading */
   readonly title: string;
+  /** further flat parts (the gnomon fin, the stand's parts) drawn at 1:1 after the check triangle, each on its own sheets */
+  readonly parts?: readonly TemplatePart[];
 }
 
 /** Options of `toTemplatePdf` (the spec's `template:` section). */
@@ -96,7 +98,45 @@ export async function toTemplatePdf(input: TemplateInput, options: Partial<Templ
     });
   }
   sheets.push({ heading: '45° check triangle at 1:1', draw: (doc) => checkTriangle(doc, tiles, input.gnomonHeightMm, input.gnomonThicknessMm) });
+  const parts = input.parts ?? [];
+  const partTiles = partsTiling(parts, tiles, o);
+  parts.forEach((tp, i) => sheets.push(...tileSheets(partShape(tp.part), partTiles[i], tp.label)));
   return renderSheets(input.title, tiles, o.marginMm, sheets);
+}
+
+/** One drawing of a template and the sheets it takes (1-based, in page order). */
+export interface TemplateDrawingSheets {
+  readonly label: string;
+  readonly firstSheet: number;
+  readonly lastSheet: number;
+}
+
+/**
+ * The page plan of `toTemplatePdf`: how many sheets in all, and which
+ * sheets show the plate and each further part (the offset tables and the
+ * check triangle lie between them). Exported for the report and install.md.
+ */
+export function templateDrawings(input: Pick<TemplateInput, 'drawing' | 'marks' | 'gnomonThicknessMm' | 'parts'>, options: Partial<TemplateOptions> = {}): { readonly pages: number; readonly drawings: readonly TemplateDrawingSheets[] } {
+  const o = { ...TEMPLATE_DEFAULTS, ...options };
+  const tiles = templateTiles(input.drawing, o);
+  const plateSheets = tiles.columns * tiles.rows;
+  const tablePages = Math.max(1, Math.ceil(markOffsetRows(input.marks, input.gnomonThicknessMm, input.drawing.faceOriginY).length / tableRowsPerSheet(tiles)));
+  const drawings: TemplateDrawingSheets[] = [{ label: 'plate', firstSheet: 1, lastSheet: plateSheets }];
+  let next = plateSheets + tablePages + 2;
+  const parts = input.parts ?? [];
+  partsTiling(parts, tiles, o).forEach((t, i) => {
+    drawings.push({ label: parts[i].label, firstSheet: next, lastSheet: next + t.columns * t.rows - 1 });
+    next += t.columns * t.rows;
+  });
+  return { pages: next - 1, drawings };
+}
+
+/** Each further part's sheet tiling: its own extent plus the border, on the plate's paper and orientation. */
+function partsTiling(parts: readonly TemplatePart[], plate: TileLayout, o: TemplateOptions): TileLayout[] {
+  return parts.map((tp) => {
+    const s = partShape(tp.part);
+    return tileLayout(s.widthMm + 2 * BORDER_MM, s.lengthMm + 2 * BORDER_MM, o.paper, plate.orientation, o.overlapMm, o.marginMm);
+  });
 }
 
 /** A further flat part on the template (a gnomon fin, a wall mount), drawn at 1:1 on its own sheets. */
@@ -154,10 +194,7 @@ export async function toPartsTemplatePdf(input: PartsTemplateInput, options: Par
 export function partsTemplateTiles(input: Pick<PartsTemplateInput, 'drawing' | 'parts'>, options: Partial<TemplateOptions> = {}): { readonly plate: TileLayout; readonly parts: readonly TileLayout[]; readonly pages: number } {
   const o = { ...TEMPLATE_DEFAULTS, ...options };
   const plate = templateTiles(input.drawing, o);
-  const parts = input.parts.map((tp) => {
-    const s = partShape(tp.part);
-    return tileLayout(s.widthMm + 2 * BORDER_MM, s.lengthMm + 2 * BORDER_MM, o.paper, plate.orientation, o.overlapMm, o.marginMm);
-  });
+  const parts = partsTiling(input.parts, plate, o);
   const tablePages = Math.max(1, Math.ceil(lineEndRows(input.drawing).length / tableRowsPerSheet(plate)));
   const pages = plate.columns * plate.rows + tablePages + parts.reduce((n, t) => n + t.columns * t.rows, 0);
   return { plate, parts, pages };
