@@ -6,7 +6,7 @@ import { buildFiles, parseSpecText, readSpecFile } from '@umbrafab/cli';
 
 /**
  * The assembly section of install.md: steps in order, wording right in both
- * hemispheres (DESIGN §4: the plate rises toward the elevated pole, true
+ * hemispheres (docs/design.md §4: the plate rises toward the elevated pole, true
  * south in the southern hemisphere), the weights from volume × density
  * (the density table of parts/materials.ts) and the fastener table.
  */

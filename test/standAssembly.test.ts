@@ -13,7 +13,7 @@ import { parseSpecText } from '@umbrafab/cli';
  * then read off the seat rails, and the plate, laid on the lower rail with
  * its lower-left corner on the rail's (the datum the installation sheet
  * gives), must find a rail hole under each of its holes. Expected values:
- * the seat angle equals |latitude| (DESIGN §4, the tilt of a polar dial),
+ * the seat angle equals |latitude| (docs/design.md §4, the tilt of a polar dial),
  * within 0.05°; holes within 0.05 mm.
  */
 

@@ -1,5 +1,5 @@
 /**
- * The hour angle of the line for clock time T, degrees (DESIGN §3): the
+ * The hour angle of the line for clock time T, degrees (docs/design.md §3): the
  * standard-time shift moves every line by λ − λs, so
  * H = 15°·(T − 12 h) + shift, shift = λ − λs for a standard-time dial and 0
  * for a solar one; rounded to 1e-9° so noon is exactly 0 and byte-stable.

@@ -5,7 +5,7 @@ import { poleAxisEnu } from './sunDirectionEnu.ts';
 
 /**
  * The outward unit normal of a dial face in the horizon frame (x east,
- * y north, z up), from DESIGN §8 (the standard face orientations of the
+ * y north, z up), from docs/design.md §8 (the standard face orientations of the
  * dialling handbooks: A. E. Waugh, "Sundials: Their Theory and
  * Construction", Dover 1973; R. R. J. Rohr, "Sundials: History, Theory and
  * Practice", Dover 1996 — memory):

@@ -4,7 +4,7 @@ import type { PlanarFace } from './planarTypes.ts';
 import { sunDirectionEnu } from './sunDirectionEnu.ts';
 import { OBLIQUITY_J2000_RAD } from '../calendar/obliquity.ts';
 
-/** The lit test of DESIGN §8: the Sun in front of the face (n · s > 0) and above the horizon (s_z > 0). */
+/** The lit test of docs/design.md §8: the Sun in front of the face (n · s > 0) and above the horizon (s_z > 0). */
 export function faceSeesSun(face: PlanarFace, sun: Vec3, marginRad = 0): boolean {
   const m = Math.sin(marginRad);
   return dot3(face.normal, sun) > m && sun[2] > m;
@@ -25,7 +25,7 @@ const DECLINATION_SAMPLES = 2345;
 /**
  * The range of declinations, within the year's ±ε (ε the obliquity, IAU 2006
  * at J2000), at which the face sees the Sun at hour angle H — the Sun's path
- * over the year reduced to one hour angle (DESIGN §8: a declining wall sees
+ * over the year reduced to one hour angle (docs/design.md §8: a declining wall sees
  * the Sun part of the day only). Both tests are linear in (cos δ, sin δ),
  * so the lit set at one H is an interval; it is found on a 0.02° grid.
  * Returns null when the face never sees the Sun at H.

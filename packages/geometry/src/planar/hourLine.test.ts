@@ -69,7 +69,7 @@ describe('hour lines by the general method against the handbook closed forms', (
     }
   });
 
-  it('style heights: horizontal ψ = |φ|, polar and meridian ψ = 0, equatorial ψ = 90° (DESIGN §8)', () => {
+  it('style heights: horizontal ψ = |φ|, polar and meridian ψ = 0, equatorial ψ = 90° (docs/design.md §8)', () => {
     const phi = 47.3 * DEG;
     expect(planarFace({ type: 'horizontal', latitudeRad: phi }).styleHeightRad).toBeCloseTo(phi, 12);
     expect(planarFace({ type: 'polar', latitudeRad: phi }).styleHeightRad).toBeLessThan(1e-12);
@@ -181,7 +181,7 @@ describe('declining and reclining faces: the style shadow (astronomy-engine Sun)
 });
 
 describe('the hours a face can show over the year', () => {
-  it('an equator-facing wall never sees the Sun at 6 h solar; a polar face sees it at noon all year (DESIGN §8)', () => {
+  it('an equator-facing wall never sees the Sun at 6 h solar; a polar face sees it at noon all year (docs/design.md §8)', () => {
     const wall = planarFace({ type: 'vertical', latitudeRad: 50 * DEG, declinationRad: 0 });
     expect(litDeclinations(wall, -90 * DEG)).toBeNull();
     expect(litDeclinations(wall, 90 * DEG)).toBeNull();

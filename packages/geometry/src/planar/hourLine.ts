@@ -26,7 +26,7 @@ export interface HourLineSet {
 }
 
 /**
- * The hour line(s) of hour angle H by the general method (DESIGN §8): the
+ * The hour line(s) of hour angle H by the general method (docs/design.md §8): the
  * hour plane holds the style edge (direction p, through its anchor A) and
  * the Sun's direction at the equator s(H, 0); its normal m = p × s(H, 0); the
  * line on the face runs along n × m. With ψ > 0 it passes through the edge's

@@ -132,7 +132,7 @@ export function faceOrientationOf(spec: DialSpec): FaceOrientation | null {
 
 /**
  * Lay out a horizontal, vertical (declining, reclining), meridian or
- * equatorial face from a validated spec, by the general method (DESIGN §8,
+ * equatorial face from a validated spec, by the general method (docs/design.md §8,
  * `hourLine`): every mark of the `hours` grid whose hour the face can see
  * at some time of the year (`litDeclinations`; the others are left out and
  * listed in `leftOut` and the notes), a thick fin's two roots, the noon band

@@ -6,7 +6,7 @@ import type { PlanarFace } from './planarTypes.ts';
 
 /**
  * The shadow of a point N (horizon frame, relative to the face origin O) on
- * the face along the Sun's direction s (DESIGN §8):
+ * the face along the Sun's direction s (docs/design.md §8):
  *
  *     X = N − s · (n · (N − O)) / (n · s)
  *

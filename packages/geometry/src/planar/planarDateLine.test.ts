@@ -7,7 +7,7 @@ import { planarMeanTimeCurve } from './planarMeanTimeCurve.ts';
 const hours = Array.from({ length: 141 }, (_, i) => (-70 + i) * DEG);
 
 describe('date lines of a nodus on any face', () => {
-  it('polar face: y = −tan δ · √(h² + (|x| − t/2)²) (DESIGN §2, the handbook formula)', () => {
+  it('polar face: y = −tan δ · √(h² + (|x| − t/2)²) (docs/design.md §2, the handbook formula)', () => {
     const face = planarFace({ type: 'polar', latitudeRad: 48 * DEG });
     const g = { thicknessMm: 3, heightMm: 50 };
     let worst = 0;

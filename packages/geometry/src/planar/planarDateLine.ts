@@ -15,7 +15,7 @@ export interface NodusTrace {
 
 /**
  * The date line (a conic) of declination δ: the nodus shadow over the given
- * hour angles (DESIGN §8: X = N − s (n · (N − O))/(n · s) at fixed δ), each
+ * hour angles (docs/design.md §8: X = N − s (n · (N − O))/(n · s) at fixed δ), each
  * point from the nodus on the edge that casts at that H (the edge of
  * `hourLine`; both edges at H₀, the first taken), kept only where the face
  * sees the Sun, and split into runs wherever the casting edge changes or

@@ -9,7 +9,7 @@ import { hourAngleOfEquatorVector } from './hourAngleOfEquatorVector.ts';
 const PARALLEL_EPS = 1e-12;
 
 /**
- * A face and its style by the general vector method (DESIGN §8; the
+ * A face and its style by the general vector method (docs/design.md §8; the
  * relations are the handbook ones, A. E. Waugh, "Sundials: Their Theory and
  * Construction", Dover 1973, ch. 7–10; R. R. J. Rohr, "Sundials", Dover 1996,
  * ch. 4 — memory):

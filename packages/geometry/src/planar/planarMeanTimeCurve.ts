@@ -33,7 +33,7 @@ const MAX_HALVINGS = 12;
 
 /**
  * The mean-time (figure-of-eight) curve of one standard clock time on any
- * planar face (DESIGN §3, §8): at that clock time T on each date,
+ * planar face (docs/design.md §3, §8): at that clock time T on each date,
  * H = 15°·(T − 12 h) + (λ − λs) + E/4 min·° with E the equation of time and
  * δ, r the Sun's declination and distance of that instant (astronomy-engine,
  * via `equationOfTimeMin` and `sunEquatorOfDate`), turned into the Sun seen

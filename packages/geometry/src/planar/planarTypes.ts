@@ -3,7 +3,7 @@ import type { Vec2 } from '../types.ts';
 
 /**
  * The kinds of planar dial (our names). Every one is a plane with a style
- * parallel to the Earth's axis (DESIGN §8):
+ * parallel to the Earth's axis (docs/design.md §8):
  * - `polar`: the face parallel to the axis, tilted by |latitude| (the default);
  * - `horizontal`: a level face (garden dial);
  * - `vertical`: a wall, facing the equator-ward horizon turned by the wall's
@@ -43,7 +43,7 @@ export type FinEdge = 'plusF' | 'minusF';
 
 /**
  * A face and its style, every vector a unit vector in the site's horizon
- * frame (x east, y north, z up; DESIGN §8).
+ * frame (x east, y north, z up; docs/design.md §8).
  */
 export interface PlanarFace {
   readonly orientation: FaceOrientation;

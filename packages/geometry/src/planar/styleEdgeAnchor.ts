@@ -34,7 +34,7 @@ export function edgeSign(edge: FinEdge): 1 | -1 {
 
 /**
  * A point of a fin's style edge, relative to the face origin, in the horizon
- * frame (DESIGN §8): the fin stands on the substyle, perpendicular to the
+ * frame (docs/design.md §8): the fin stands on the substyle, perpendicular to the
  * face, so its two style edges are lines parallel to p through
  * root ± (t/2)·f, f = unit(n × p). With ψ > 0 that point is the edge's root
  * (on the face, the origin being the middle root); with ψ = 0 it is the

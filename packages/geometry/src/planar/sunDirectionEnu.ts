@@ -2,7 +2,7 @@ import type { Vec3 } from '../parts/mesh.ts';
 
 /**
  * The celestial (north) pole axis in the horizon frame (x east, y north,
- * z up) at latitude φ: p = (0, cos φ, sin φ) (DESIGN §8; the standard
+ * z up) at latitude φ: p = (0, cos φ, sin φ) (docs/design.md §8; the standard
  * rotation from the equatorial to the horizon frame, e.g. J. Meeus,
  * "Astronomical Algorithms", 2nd ed. 1998, ch. 13).
  */
@@ -13,7 +13,7 @@ export function poleAxisEnu(latitudeRad: number): Vec3 {
 /**
  * Unit vector toward the Sun in the horizon frame from its hour angle H
  * (0 at apparent noon, negative in the morning) and declination δ (north
- * positive), at latitude φ (DESIGN §8; Meeus 1998, eq. 13.5–13.6 written as a
+ * positive), at latitude φ (docs/design.md §8; Meeus 1998, eq. 13.5–13.6 written as a
  * vector):
  *
  *     s = (−cos δ sin H,  cos φ sin δ − sin φ cos δ cos H,  sin φ sin δ + cos φ cos δ cos H)

@@ -6,7 +6,7 @@ import { dateToUtcMidnightMs, parseLocalDate } from '../sun/localDate.ts';
 import { assertZone, offsetHoursAt } from '../sun/zoneOffsets.ts';
 
 /**
- * One reading on a level board held against the wall (DESIGN §8, common
+ * One reading on a level board held against the wall (docs/design.md §8, common
  * practice): the local clock time (as a watch shows it, daylight saving
  * included when in force) and the angle θ on the board between the wall,
  * running to your RIGHT as you face the wall, and the plumb line's shadow

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { describeMeridianTurn } from './describeMeridianTurn.ts';
 
-// Direction logic (DESIGN §4): an east declination turns the whole needle clockwise seen from
+// Direction logic (docs/design.md §4): an east declination turns the whole needle clockwise seen from
 // above, so its north end points east of true north and its south end west of true south.
 describe('describeMeridianTurn', () => {
   it('north: as describeDeclination (raised end to true north)', () => {

@@ -4,7 +4,7 @@ import { describeDeclination } from './describeDeclination.ts';
 /**
  * An English sentence for turning a polar dial from the compass to the
  * geographic meridian, with its raised end toward the elevated pole
- * (DESIGN §4: true north in the north, true south in the south), for a
+ * (docs/design.md §4: true north in the north, true south in the south), for a
  * magnetic declination D (degrees, east positive), rounded to 0.1°.
  *
  * North: the raised end points to true north, D west of the compass's north

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { boundedNumber as num } from '../boundedNumber.ts';
 
-/** The planar dial kinds (our names; DESIGN §8). */
+/** The planar dial kinds (our names; docs/design.md §8). */
 export const FACE_TYPES = ['polar', 'horizontal', 'vertical', 'meridian', 'equatorial'] as const;
 export type FaceType = (typeof FACE_TYPES)[number];
 
