@@ -51,7 +51,7 @@ const specArb = fc
     name: fc.stringMatching(/^[A-Za-z][A-Za-z0-9 .-]{0,16}$/),
     site: fc
       .record({ latitude: fc.double({ min: -80, max: 80, noNaN: true }).map(round1), zone: fc.constantFrom(...zones), east: fc.double({ min: -25, max: 25, noNaN: true }) })
-      .map(({ latitude, zone: [timezone, meridian], east }) => ({ latitude, longitude: round1(((meridian + east + 540) % 360) - 180), timezone })),
+      .map(({ latitude, zone, east }) => ({ latitude, longitude: round1(((zone[1] + east + 540) % 360) - 180), timezone: zone[0] })),
     face: faceArb,
     gnomon: fc.record({ height: fc.integer({ min: 30, max: 120 }), thickness: fc.constantFrom(2, 3, 4, 6), nodus: fc.boolean() }),
     curves: fc.boolean(),
