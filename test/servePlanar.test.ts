@@ -51,16 +51,33 @@ describe('serve: a declining wall face (fixtures/planar/wall-declining.yaml)', (
     expect(row('styleHeight')).toBe(`${Number(report.face.styleHeightDeg.toFixed(3))}°`);
     expect(r.json.notes).toEqual(report.notes);
     const scene = r.json.scene;
-    expect(scene.meshes.map((m: any) => m.name)).toEqual(['plate', 'gnomon']);
+    // The scene of assembly.png: a patch of wall, the wall mount, the anchors' heads, the plate, its screws and the fin.
+    expect(scene.meshes.map((m: any) => m.name)).toEqual(['wall', 'mount', 'fixings', 'plate', 'fixings', 'gnomon']);
     for (const m of scene.meshes) expect(m.positions.length % 9, m.name).toBe(0);
     // The face frame's z axis is the wall's outward normal (report.json face.normalEnu); a wall stands upright (tilt 90°).
     for (let k = 0; k < 3; k++) expect(scene.faceToWorld[8 + k]).toBeCloseTo(report.face.normalEnu[k], 5); // report.json rounds to 6 decimals
     expect(scene.tiltDeg).toBeCloseTo(90, 9);
     const zs = scene.meshes.flatMap((m: any) => m.positions.filter((_: number, i: number) => i % 3 === 2));
     expect(Math.min(...zs)).toBeCloseTo(0, 3);
+    const mesh = (name: string) => scene.meshes.find((m: any) => m.name === name).positions as number[];
     // The plate stands on its edge: its world height is its length (the wall's plumb line runs along the drawing's y when undeclined; turned here by plateTurnDeg).
-    const plateZ = scene.meshes[0].positions.filter((_: number, i: number) => i % 3 === 2);
+    const plateZ = mesh('plate').filter((_: number, i: number) => i % 3 === 2);
     expect(Math.max(...plateZ) - Math.min(...plateZ)).toBeGreaterThan(Math.min(report.plate.widthMm, report.plate.lengthMm) - 1e-6);
+    // Along the face's normal: the plate's top is the face (0) and its back rests on the mount, whose back rests on the wall.
+    const o = scene.faceToWorld.slice(12, 15);
+    const n = scene.faceToWorld.slice(8, 11);
+    const heights = (name: string) => {
+      const q = mesh(name);
+      const h: number[] = [];
+      for (let i = 0; i < q.length; i += 3) h.push((q[i] - o[0]) * n[0] + (q[i + 1] - o[1]) * n[1] + (q[i + 2] - o[2]) * n[2]);
+      return { min: Math.min(...h), max: Math.max(...h) };
+    };
+    const t = report.plate.thicknessMm;
+    expect(heights('plate').max).toBeCloseTo(0, 2);
+    expect(heights('plate').min).toBeCloseTo(-t, 2);
+    expect(heights('mount').max).toBeCloseTo(-t, 2);
+    expect(heights('wall').max).toBeCloseTo(heights('mount').min, 2);
+    expect(heights('gnomon').max).toBeGreaterThan(10);
     expect(scene.faceRect.x0).toBeCloseTo(-report.plate.substyleX, 5);
     expect(scene.faceRect.y0).toBeCloseTo(-report.plate.faceOriginY, 5);
     expect([scene.faceRect.widthMm, scene.faceRect.lengthMm]).toEqual([report.plate.widthMm, report.plate.lengthMm]);

@@ -78,7 +78,7 @@ export { checkDial, isFaceLit, type MarkCheck, type CheckResult } from './shadow
 export { checkPlanar, type PlanarCheckResult } from './shadow/checkPlanar.ts';
 export { planarMarksFromPlate } from './shadow/planarMarksFromPlate.ts';
 
-export type { AssemblyPartName, PictureItem } from './assembly/assemblyTypes.ts';
+export type { AssemblyPartName, FaceFrame, PictureItem, PlacedPart } from './assembly/assemblyTypes.ts';
 export { placeAssembly, faceToWorld } from './assembly/placeAssembly.ts';
 export { defaultPictureDate, sunForPicture, type PictureSun } from './assembly/sunForPicture.ts';
 export { viewAssembly, type AssemblyPicture } from './assembly/viewAssembly.ts';

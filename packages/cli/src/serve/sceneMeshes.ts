@@ -1,4 +1,4 @@
-import { placeAssembly, planarGnomonSolid, type DialLayout, type Mesh, type PlanarLayout, type Vec3 } from '@umbrafab/geometry';
+import { placeAssembly, placePlanarAssembly, planarGnomonSolid, type DialLayout, type FaceFrame, type Mesh, type PlacedPart, type PlanarLayout, type Vec3 } from '@umbrafab/geometry';
 
 /** One part for three.js: flat triangle corners (x, y, z, x, y, z, …), world mm. */
 export interface SceneMesh {
@@ -25,51 +25,72 @@ export interface Scene {
  */
 export function sceneMeshes(layout: DialLayout): Scene {
   const a = placeAssembly(layout);
-  const r = (v: number) => Math.round(v * 1000) / 1000;
-  const meshes = a.parts.map((part) => {
-    const positions: number[] = [];
-    for (const f of part.facets) {
-      for (let i = 1; i + 1 < f.points.length; i++) {
-        for (const p of [f.points[0], f.points[i], f.points[i + 1]]) positions.push(r(p[0]), r(p[1]), r(p[2]));
-      }
-    }
-    return { name: part.name, positions };
-  });
-  const { origin: o, xAxis: x, yAxis: y, normal: n } = a.face;
   return {
-    meshes,
-    faceToWorld: [x[0], x[1], x[2], 0, y[0], y[1], y[2], 0, n[0], n[1], n[2], 0, o[0], o[1], o[2], 1],
+    meshes: partMeshes(a.parts),
+    faceToWorld: faceMatrix(a.face),
     tiltDeg: (a.tiltRad * 180) / Math.PI,
     faceRect: { x0: -layout.plate.substyleX, y0: -layout.plate.faceOriginY, widthMm: layout.plate.widthMm, lengthMm: layout.plate.lengthMm },
   };
 }
 
+const round1um = (v: number) => Math.round(v * 1000) / 1000;
+
+/** Placed parts as flat triangle lists, each flat face (convex, or a triangle) split into a fan. */
+function partMeshes(parts: readonly PlacedPart[]): SceneMesh[] {
+  return parts.map((part) => {
+    const positions: number[] = [];
+    for (const f of part.facets) {
+      for (let i = 1; i + 1 < f.points.length; i++) {
+        for (const p of [f.points[0], f.points[i], f.points[i + 1]]) positions.push(round1um(p[0]), round1um(p[1]), round1um(p[2]));
+      }
+    }
+    return { name: part.name, positions };
+  });
+}
+
+/** A face frame as a column-major 4×4 matrix (three.js Matrix4.fromArray). */
+function faceMatrix({ origin: o, xAxis: x, yAxis: y, normal: n }: FaceFrame): number[] {
+  return [x[0], x[1], x[2], 0, y[0], y[1], y[2], 0, n[0], n[1], n[2], 0, o[0], o[1], o[2], 1];
+}
+
 /**
- * A horizontal, wall, meridian or equatorial face as installed: the plate
- * (its outline as a box of plate.thickness under the face) and its gnomon
- * (`planarGnomonSolid`: the fin with its tabs through the plate, or the
- * rod), turned from the face frame (x right, y along the substyle, z out of
- * the face: `layout.face`) into the world (X east, Y north, Z up), raised
- * so that the lowest point stands on the ground (Z = 0). Rounded to 1 µm.
+ * A horizontal, wall, meridian or equatorial face as installed, the same
+ * scene as its assembly picture (`placePlanarAssembly`: the plate on its
+ * pillar and studs, on its wall mount against a patch of wall, or on its
+ * equatorial stand, with the fin or rod; world X east, Y north, Z up),
+ * raised so that its lowest point stands on the ground (Z = 0) and rounded
+ * to 1 µm. An equatorial face beyond its stand's latitudes has no
+ * placed assembly: then the plate (a box of plate.thickness under the face)
+ * and its gnomon (`planarGnomonSolid`) alone, raised so that the lowest
+ * point stands on the ground (Z = 0).
  */
 export function planarSceneMeshes(layout: PlanarLayout): Scene {
-  const { right: x, up: y, normal: n } = layout.face;
   const p = layout.plate;
-  const [x0, y0] = [-p.substyleX, -p.faceOriginY];
-  const plate = boxMesh([x0, y0, -p.thicknessMm], [x0 + p.widthMm, y0 + p.lengthMm, 0]);
+  const faceRect = { x0: -p.substyleX, y0: -p.faceOriginY, widthMm: p.widthMm, lengthMm: p.lengthMm };
+  const n = layout.face.normal;
+  const tiltDeg = (Math.acos(Math.max(-1, Math.min(1, n[2]))) * 180) / Math.PI;
+  const a = placePlanarAssembly(layout);
+  if (a !== null) {
+    // A wall's patch hangs below the face's origin: raise the scene so it stands on the page's ground grid (Z = 0).
+    const lift = -Math.min(0, ...a.parts.flatMap((q) => q.facets.flatMap((f) => f.points.map((pt) => pt[2]))));
+    const up = (pt: Vec3): Vec3 => [pt[0], pt[1], pt[2] + lift];
+    const parts = a.parts.map((q) => ({ ...q, facets: q.facets.map((f) => ({ ...f, points: f.points.map(up) })) }));
+    return { meshes: partMeshes(parts), faceToWorld: faceMatrix({ ...a.face, origin: up(a.face.origin) }), tiltDeg, faceRect };
+  }
+  const { right: x, up: y } = layout.face;
+  const plate = boxMesh([faceRect.x0, faceRect.y0, -p.thicknessMm], [faceRect.x0 + p.widthMm, faceRect.y0 + p.lengthMm, 0]);
   const gnomon = planarGnomonSolid(layout).mesh;
   const toWorld = (q: Vec3, lift: number): Vec3 => [0, 1, 2].map((k) => q[0] * x[k] + q[1] * y[k] + q[2] * n[k] + (k === 2 ? lift : 0)) as unknown as Vec3;
   const lift = -Math.min(...[plate, gnomon].flatMap((m) => m.positions.map((q) => toWorld(q, 0)[2])));
-  const r = (v: number) => Math.round(v * 1000) / 1000;
-  const flat = (mesh: Mesh) => mesh.triangles.flatMap((t) => t.flatMap((i) => toWorld(mesh.positions[i], lift).map(r)));
+  const flat = (mesh: Mesh) => mesh.triangles.flatMap((t) => t.flatMap((i) => toWorld(mesh.positions[i], lift).map(round1um)));
   return {
     meshes: [
       { name: 'plate', positions: flat(plate) },
       { name: 'gnomon', positions: flat(gnomon) },
     ],
-    faceToWorld: [x[0], x[1], x[2], 0, y[0], y[1], y[2], 0, n[0], n[1], n[2], 0, 0, 0, lift, 1],
-    tiltDeg: (Math.acos(Math.max(-1, Math.min(1, n[2]))) * 180) / Math.PI,
-    faceRect: { x0, y0, widthMm: p.widthMm, lengthMm: p.lengthMm },
+    faceToWorld: faceMatrix({ origin: [0, 0, lift], xAxis: x, yAxis: y, normal: n }),
+    tiltDeg,
+    faceRect,
   };
 }
 

@@ -108,6 +108,9 @@ function render(): void {
 
 const PART_LOOK: Readonly<Record<string, THREE.MeshStandardMaterialParameters>> = {
   wedge: { color: 0xb9c4c9, roughness: 0.9 },
+  pillar: { color: 0xa59d90, roughness: 0.95 },
+  wall: { color: 0xd8cfbd, roughness: 0.95 },
+  mount: { color: 0x9ba4aa, roughness: 0.5, metalness: 0.4 },
   stand: { color: 0xc4c6c8, roughness: 0.6, metalness: 0.3 },
   fixings: { color: 0x787c82, roughness: 0.4, metalness: 0.6 },
   plate: { color: 0xd9d4c7, roughness: 0.55, metalness: 0.25 },
@@ -139,7 +142,7 @@ export function drawModel(r: View): void {
     g.setAttribute('position', new THREE.Float32BufferAttribute(m.positions as number[], 3));
     g.computeVertexNormals();
     triangles += m.positions.length / 9;
-    const mesh = new THREE.Mesh(g, new THREE.MeshStandardMaterial({ ...(PART_LOOK[m.name] ?? { color: 0xcccccc }), flatShading: true }));
+    const mesh = new THREE.Mesh(g, new THREE.MeshStandardMaterial({ ...(PART_LOOK[m.name] ?? { color: 0xcccccc }), flatShading: true, side: THREE.DoubleSide }));
     mesh.name = m.name;
     group.add(mesh);
   }
