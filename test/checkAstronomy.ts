@@ -3,4 +3,4 @@
  * workspace root, the same version as @umbrafab/geometry's; named imports
  * only, DEPS.md).
  */
-export { Body, Equator, Horizon, MakeTime, Observer, SearchHourAngle, Seasons } from 'astronomy-engine';
+export { Body, Equator, Horizon, MakeTime, Observer, SearchHourAngle, Seasons, SiderealTime } from 'astronomy-engine';

@@ -33,7 +33,7 @@ export { CUT_LAYER_NAMES, type CutLayerKey } from './plate/cutLayerNames.ts';
 
 export type { StrokeDrawing } from './spec/sections/cutFilesSection.ts';
 
-export { nodusFootY } from './polar/markField.ts';
+export { markField, nodusFootY } from './polar/markField.ts';
 export { calendarLines } from './polar/calendarLines.ts';
 export { meanTimeLines } from './polar/meanTimeLines.ts';
 export { timeFaceExtras } from './polar/timeFaceExtras.ts';

@@ -74,6 +74,24 @@ describe('meanTimeCurve', () => {
     });
   });
 
+  test('with latitudeDeg and chordToleranceMm: the Sun seen from the site, refined between the 2-day samples, the loop closed on 1 January', () => {
+    const opts = { clockTime: '10:00', year: 2025, heightMm: H, longitudeDeg: 8.5, standardMeridianDeg: 15, hemisphere: 'north', stepDays: 2 } as const;
+    const geo = meanTimeCurve(opts);
+    const site = meanTimeCurve({ ...opts, latitudeDeg: 47.4, chordToleranceMm: 0.0005 });
+    expect(site.samples[0].date).toBe('2025-01-01');
+    expect(site.samples[site.samples.length - 1].date).toBe('2026-01-01');
+    expect(site.samples.length).toBeGreaterThan(geo.samples.length);
+    // Every 2-day sample is still there, moved by the diurnal parallax only: under 9″ of hour angle and declination (8.8″ at most, docs/design.md §3).
+    const byTime = new Map(site.samples.map((s) => [s.dateUtc.getTime(), s]));
+    let worst = 0;
+    for (const g of geo.samples) {
+      const s = byTime.get(g.dateUtc.getTime())!;
+      worst = Math.max(worst, Math.abs(s.hourAngleRad - g.hourAngleRad), Math.abs(s.declinationRad - g.declinationRad));
+    }
+    expect(worst).toBeGreaterThan(0);
+    expect(worst).toBeLessThan((9 / 3600) * DEG);
+  });
+
   test('refuses a clock time the face cannot show, naming clockTime', () => {
     expect(() => meanTimeCurve({ clockTime: '05:30', year: 2025, heightMm: H, longitudeDeg: 0, standardMeridianDeg: 0, hemisphere: 'north' })).toThrow(/clockTime.*"05:30"/);
     expect(() => meanTimeCurve({ clockTime: '12:00', year: 2025, heightMm: H, longitudeDeg: 0, standardMeridianDeg: 0, hemisphere: 'north', stepDays: 0 })).toThrow(/stepDays/);

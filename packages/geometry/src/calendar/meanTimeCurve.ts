@@ -4,8 +4,10 @@ import { equationOfTimeMin } from '../sun/equationOfTimeMin.ts';
 import { longitudeDifferenceDeg } from '../sun/longitudeCorrectionMin.ts';
 import { parseClock } from '../spec/parseClock.ts';
 import { formatIsoDate, MS_PER_DAY } from '../sun/localDate.ts';
-import { sunDeclinationRad } from '../sun/sunDeclinationRad.ts';
+import { sunEquatorOfDate } from '../sun/sunEquatorOfDate.ts';
+import { observerMeridianAu, topocentricSun } from '../sun/topocentricSun.ts';
 import { assertHemisphere, declinationTowardPoleRad } from './declinationTowardPoleRad.ts';
+import { refineByChord } from './refineByChord.ts';
 import type { FacePoint, FacePolyline, Hemisphere, StyleEdge } from './types.ts';
 
 /** Options of `meanTimeCurve` (lengths mm, angles degrees where named Deg). */
@@ -28,6 +30,18 @@ export interface MeanTimeCurveOptions {
   readonly stepDays?: number;
   /** largest |hour angle| accepted, degrees (default 80: x = 5.7 h); beyond it the call throws */
   readonly maxHourAngleDeg?: number;
+  /**
+   * site latitude φ, degrees: when given, the Sun as seen from the site
+   * (`topocentricSun`, the diurnal parallax of up to 8.8″); without it, the
+   * Sun seen from the Earth's centre
+   */
+  readonly latitudeDeg?: number;
+  /**
+   * when given, each step is halved while the curve's point at its middle
+   * lies more than this from the chord, mm (`refineByChord`, at most 12
+   * halvings); without it, one sample every `stepDays`
+   */
+  readonly chordToleranceMm?: number;
 }
 
 /** One day's point of the mean-time curve. */
@@ -37,8 +51,9 @@ export interface MeanTimeSample {
   /** the instant, UTC */
   readonly dateUtc: Date;
   readonly equationOfTimeMin: number;
+  /** hour angle, radians: topocentric with `latitudeDeg`, else geocentric */
   readonly hourAngleRad: number;
-  /** geocentric declination, north positive, radians */
+  /** declination, north positive, radians: topocentric with `latitudeDeg`, else geocentric */
   readonly declinationRad: number;
   /** which style edge casts the shadow (H < 0: west, morning) */
   readonly style: StyleEdge;
@@ -49,7 +64,7 @@ export interface MeanTimeSample {
 /** A mean-time (figure-of-eight) curve. */
 export interface MeanTimeCurve {
   readonly clockTime: string;
-  /** the samples in date order, Jan 1 of `year` to Jan 1 of the next (closing the loop) */
+  /** the samples in date order, Jan 1 of `year` to Jan 1 of the next (closing the loop), with any refinement points between the days */
   readonly samples: readonly MeanTimeSample[];
   /**
    * the curve as polylines in face coordinates: one when the shadow stays on
@@ -57,6 +72,9 @@ export interface MeanTimeCurve {
    */
   readonly polylines: readonly FacePolyline[];
 }
+
+/** Halvings of a first step at most (2 days / 2¹² ≈ 42 s of date), as for the planar faces. */
+const MAX_HALVINGS = 12;
 
 /** Defaults of `meanTimeCurve`. */
 export const MEAN_TIME_CURVE_DEFAULTS = { thicknessMm: 0, stepDays: 1, maxHourAngleDeg: 80 } as const;
@@ -68,14 +86,19 @@ export const MEAN_TIME_CURVE_DEFAULTS = { thicknessMm: 0, stepDays: 1, maxHourAn
  *
  *     H = 15°·(T − 12 h) + (λ − λs) + E/4 min·°
  *
- * with E the equation of time of that instant and δ its declination; then,
- * from the style edge that casts the shadow (docs/design.md §2),
+ * with E the equation of time of that instant and δ its declination (with
+ * `latitudeDeg`: H and δ of the Sun seen from the site, `topocentricSun`,
+ * from astronomy-engine's geocentric place and distance); then, from the
+ * style edge that casts the shadow (docs/design.md §2),
  *
  *     x = ±(t/2 + h·|tan H|)      y = −tan δp · √(h² + (|x| − t/2)²) = −h·tan δp / cos H
  *
  * with δp the declination toward the elevated pole, x signed east-positive in
  * the north and mirrored (east on the left) in the south. Whether the Sun is
- * above the horizon is not checked here (no latitude): the layout does that.
+ * above the horizon is not checked here: the layout does that. With
+ * `chordToleranceMm`, the steps between the days are refined on the
+ * fractional date (E, δ and r vary smoothly) until each chord lies within
+ * that tolerance of the curve (`refineByChord`).
  *
  * @throws SpecError naming `clockTime` when |H| exceeds `maxHourAngleDeg` on some day
  * @example meanTimeCurve({clockTime: '12:00', year: 2025, heightMm: 50, longitudeDeg: 0, standardMeridianDeg: 0, hemisphere: 'north'})
@@ -96,6 +119,9 @@ export function meanTimeCurve(options: MeanTimeCurveOptions): MeanTimeCurve {
   }
   const maxH = assertRange('maxHourAngleDeg', o.maxHourAngleDeg, 0, 89.9, '°');
 
+  const observer = o.latitudeDeg === undefined ? null : observerMeridianAu(assertRange('site.latitude', o.latitudeDeg, -90, 90, '°'), 0);
+  const phi = ((o.latitudeDeg ?? 0) * Math.PI) / 180;
+  const offsetMs = clockMin * 60_000 - (lonStd / 15) * 3_600_000;
   const start = Date.UTC(o.year, 0, 1);
   const end = Date.UTC(o.year + 1, 0, 1);
   const days: number[] = [];
@@ -104,21 +130,28 @@ export function meanTimeCurve(options: MeanTimeCurveOptions): MeanTimeCurve {
 
   const half = t / 2;
   const mirror = hemisphere === 'north' ? 1 : -1;
-  const samples = days.map((dayMs): MeanTimeSample => {
-    const instant = new Date(Math.round(dayMs + clockMin * 60_000 - (lonStd / 15) * 3_600_000));
+  const sampleAt = (dayMs: number): { readonly point: FacePoint; readonly sample: MeanTimeSample } => {
+    const instant = new Date(Math.round(dayMs + offsetMs));
     const e = equationOfTimeMin(instant);
-    const decl = sunDeclinationRad(instant);
+    const eq = sunEquatorOfDate(instant);
     const hDeg = 15 * (clockMin / 60 - 12) + longitudeDifferenceDeg(lon, lonStd) + e / 4;
     if (!(Math.abs(hDeg) <= maxH)) {
       throw new SpecError('clockTime', o.clockTime, `allowed: a clock time whose hour angle stays within ±${maxH}°`, `got ${JSON.stringify(o.clockTime)}, which is hour angle ${hDeg.toFixed(2)}° on ${formatIsoDate(dayMs)}`);
     }
-    const hRad = (hDeg * Math.PI) / 180;
+    const seen = observer ? topocentricSun((hDeg * Math.PI) / 180, eq.declinationRad, eq.distanceAu, phi, observer) : { hourAngleRad: (hDeg * Math.PI) / 180, declinationRad: eq.declinationRad };
+    const hRad = seen.hourAngleRad;
+    const decl = seen.declinationRad;
     const style: StyleEdge = hRad < 0 ? 'west' : 'east';
     const xEast = (style === 'west' ? -1 : 1) * (half + h * Math.abs(Math.tan(hRad)));
     const xMm = mirror * xEast;
     const yMm = -Math.tan(declinationTowardPoleRad(decl, hemisphere)) * Math.hypot(h, Math.abs(xMm) - half);
-    return { date: formatIsoDate(dayMs), dateUtc: instant, equationOfTimeMin: e, hourAngleRad: hRad, declinationRad: decl, style, xMm, yMm };
-  });
+    return { point: [xMm, yMm], sample: { date: formatIsoDate(dayMs), dateUtc: instant, equationOfTimeMin: e, hourAngleRad: hRad, declinationRad: decl, style, xMm, yMm } };
+  };
+  const sampled = o.chordToleranceMm === undefined
+    ? days.map(sampleAt)
+    : refineByChord(days, sampleAt, { toleranceMm: assertPositive('chordToleranceMm', o.chordToleranceMm), maxHalvings: MAX_HALVINGS, sameRun: (a, b) => t === 0 || a.sample.style === b.sample.style });
+  // sampleAt never returns null, so neither does the refinement.
+  const samples = sampled.map((s) => (s as NonNullable<typeof s>).sample);
 
   const polylines: FacePoint[][] = [];
   let current: FacePoint[] = [];

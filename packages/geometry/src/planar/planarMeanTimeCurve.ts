@@ -4,7 +4,7 @@ import { equationOfTimeMin } from '../sun/equationOfTimeMin.ts';
 import { MS_PER_DAY } from '../sun/localDate.ts';
 import { sunEquatorOfDate } from '../sun/sunEquatorOfDate.ts';
 import { observerMeridianAu, topocentricSun } from '../sun/topocentricSun.ts';
-import type { Vec2 } from '../types.ts';
+import { CURVE_CHORD_TOLERANCE_MM, refineByChord } from '../calendar/refineByChord.ts';
 import { nodusShadowOf, shadowRuns, type NodusTrace } from './planarDateLine.ts';
 import type { PlanarFace } from './planarTypes.ts';
 import type { PlanarGnomon } from './styleEdgeAnchor.ts';
@@ -26,7 +26,7 @@ export interface PlanarMeanTimeOptions {
 }
 
 /** Defaults of `planarMeanTimeCurve`. */
-export const PLANAR_MEAN_TIME_DEFAULTS = { stepDays: 2, chordToleranceMm: 0.0005 } as const;
+export const PLANAR_MEAN_TIME_DEFAULTS = { stepDays: 2, chordToleranceMm: CURVE_CHORD_TOLERANCE_MM } as const;
 
 /** Halvings of a first step at most (2 days / 2¹² ≈ 42 s of date). */
 const MAX_HALVINGS = 12;
@@ -44,7 +44,7 @@ const MAX_HALVINGS = 12;
  * Sampling: every `stepDays` from 1 January at T to 1 January of the next
  * year at T (the loop closes), each step halved while the curve's point at
  * the step's middle lies more than `chordToleranceMm` from the chord (at
- * most 12 halvings). Between the days the same formulas run on the
+ * most 12 halvings, `refineByChord`). Between the days the same formulas run on the
  * fractional date (E, δ and r vary smoothly), so each chord follows the
  * curve the real shadow draws day by day.
  *
@@ -69,33 +69,5 @@ export function planarMeanTimeCurve(face: PlanarFace, gnomon: PlanarGnomon, opti
   for (let ms = start; ms < end; ms += o.stepDays * MS_PER_DAY) times.push(ms);
   times.push(end);
 
-  type Shadow = ReturnType<typeof shadowAt>;
-  const out: Shadow[] = [];
-  const refine = (ta: number, a: Shadow, tb: number, b: Shadow, depth: number) => {
-    if (!a || !b || a.edge !== b.edge || depth >= MAX_HALVINGS) return;
-    const tm = (ta + tb) / 2;
-    const m = shadowAt(tm);
-    if (!m || m.edge !== a.edge || chordSag(a.point, m.point, b.point) <= o.chordToleranceMm) return;
-    refine(ta, a, tm, m, depth + 1);
-    out.push(m);
-    refine(tm, m, tb, b, depth + 1);
-  };
-  let prev = shadowAt(times[0]);
-  out.push(prev);
-  for (let i = 1; i < times.length; i++) {
-    const next = shadowAt(times[i]);
-    refine(times[i - 1], prev, times[i], next, 0);
-    out.push(next);
-    prev = next;
-  }
-  return shadowRuns(out);
-}
-
-/** Distance of m from the segment a–b, mm. */
-function chordSag(a: Vec2, m: Vec2, b: Vec2): number {
-  const dx = b[0] - a[0];
-  const dy = b[1] - a[1];
-  const l2 = dx * dx + dy * dy;
-  const u = l2 > 0 ? Math.max(0, Math.min(1, ((m[0] - a[0]) * dx + (m[1] - a[1]) * dy) / l2)) : 0;
-  return Math.hypot(m[0] - a[0] - u * dx, m[1] - a[1] - u * dy);
+  return shadowRuns(refineByChord(times, shadowAt, { toleranceMm: o.chordToleranceMm, maxHalvings: MAX_HALVINGS, sameRun: (a, b) => a.edge === b.edge }));
 }

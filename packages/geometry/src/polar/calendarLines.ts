@@ -1,14 +1,15 @@
-import { dateLinePoints } from '../calendar/dateLinePoints.ts';
 import { declinationOnDate } from '../calendar/declinationOnDate.ts';
-import { declinationTowardPoleRad } from '../calendar/declinationTowardPoleRad.ts';
+import { siteDateLine } from '../calendar/siteDateLine.ts';
 import { standardDateLines } from '../calendar/standardDateLines.ts';
 import type { FacePolyline } from '../calendar/types.ts';
 import { SpecError } from '../errors.ts';
 import { DEG } from '../guards.ts';
 import { formatIsoDate, parseLocalDate } from '../sun/localDate.ts';
+import { sunEquatorOfDate } from '../sun/sunEquatorOfDate.ts';
 import { offsetHoursAt } from '../sun/zoneOffsets.ts';
 import type { DialLayout } from './layoutDial.ts';
 import type { DialSpec } from '../spec/schema.ts';
+import { clipPolyline } from './clipPolyline.ts';
 import { markField, nodusFootY } from './markField.ts';
 
 /** One date (declination) line of a nodus dial. */
@@ -26,13 +27,14 @@ export interface CalendarLine {
   /**
    * the line as polylines, one per style edge that casts the nodus shadow,
    * in face x (as for the marks) and y from the nodus foot (positive toward
-   * the elevated pole), mm; clipped to the hour-mark field
+   * the elevated pole), mm; clipped to the hour-mark field; within 0.0005 mm
+   * of the shadow of the Sun at this declination seen from the site
    */
   readonly branches: readonly FacePolyline[];
 }
 
-/** Sampling step of the date lines along x, mm. */
-export const DATE_LINE_STEP_MM = 1;
+/** Hour angle sampled beyond the field's outermost line, so the clipped ends lie on the curve's chords. */
+const END_MARGIN_RAD = 0.5 * DEG;
 /** Entries closer than this in declination share one line (e.g. the two equinoxes), degrees. */
 const SAME_LINE_DEG = 0.1;
 const MONTHS = ['JAN', 'FEB', 'MAR', 'APR', 'MAY', 'JUN', 'JUL', 'AUG', 'SEP', 'OCT', 'NOV', 'DEC'] as const;
@@ -47,14 +49,17 @@ export interface DateLineEntry {
 
 /**
  * The date lines of a nodus dial (docs/design.md §2): for each chosen declination δ,
- * the hyperbola y = −tan δp · √(h² + (|x| − t/2)²) measured from the style
- * edge that casts the shadow, with δp the declination toward the elevated
- * pole. `calendar.lines` picks the solstices (moments from astronomy-engine
+ * the nodus shadow of the Sun at δ seen from the site (`siteDateLine`: the
+ * handbook hyperbola y = −tan δp · √(h² + (|x| − t/2)²) from the style edge
+ * that casts the shadow, δp toward the elevated pole, moved by the diurnal
+ * parallax of up to 8.8″: a few µm), sampled until every chord lies within
+ * 0.0005 mm of the curve. `calendar.lines` picks the solstices (moments from astronomy-engine
  * `SearchSunLongitude`, via `standardDateLines`), the equinox line, or all
  * twelve zodiac entries (seven distinct lines); `calendar.dates` adds custom
  * dates (declination at local mean noon of that date). Entries within 0.1° of
- * declination share one line. Each line is cut exactly where it leaves the
- * hour-mark field (the end points are solved on the curve, not interpolated).
+ * declination share one line. Each line is cut where it leaves the
+ * hour-mark field (`clipPolyline`: on a chord, so within 0.0005 mm of the
+ * curve).
  * Empty when `gnomon.nodus` is false.
  *
  * @throws SpecError naming `calendar.dates` or `dial.meanTimeCurves` when those need a nodus
@@ -81,7 +86,7 @@ export function calendarLines(layout: DialLayout): readonly CalendarLine[] {
     engravedLabels: g.map((e) => e.engraved),
     dates: g.map((e) => e.date),
     declinationDeg: g[0].declinationRad / DEG,
-    branches: lineBranches(layout, g[0].declinationRad),
+    branches: lineBranches(layout, g[0]),
   }));
   return lines.sort((a, b) => b.declinationDeg - a.declinationDeg);
 }
@@ -119,25 +124,17 @@ function shortDate(iso: string): string {
 }
 
 /** The branches of one date line inside the mark field, y from the nodus foot. */
-function lineBranches(layout: DialLayout, declinationRad: number): FacePolyline[] {
+function lineBranches(layout: DialLayout, entry: DateLineEntry): FacePolyline[] {
   const f = markField(layout);
   const ny = nodusFootY(layout);
   const h = layout.gnomon.heightMm;
   const t = layout.gnomon.thicknessMm;
-  const dp = declinationTowardPoleRad(declinationRad, layout.hemisphere);
-  const tanD = Math.tan(dp);
-  let xMin = f.xMinMm;
-  let xMax = f.xMaxMm;
-  if (Math.abs(tanD) > 1e-12) {
-    // |y| grows with |x|: the line leaves the field where |y| reaches the field edge on its side.
-    const room = tanD > 0 ? ny - f.yMinMm : f.yMaxMm - ny;
-    const r = room / Math.abs(tanD);
-    if (r <= h) return [];
-    const uMax = Math.sqrt(r * r - h * h);
-    xMin = Math.max(xMin, -(t / 2 + uMax));
-    xMax = Math.min(xMax, t / 2 + uMax);
-  }
-  if (!(xMax > xMin)) return [];
-  const b = dateLinePoints({ declinationRad: dp, heightMm: h, thicknessMm: t, xMinMm: xMin, xMaxMm: xMax, stepMm: DATE_LINE_STEP_MM, hemisphere: layout.hemisphere });
-  return [b.west, b.east].filter((p) => p.length >= 2).sort((p, q) => p[0][0] - q[0][0]);
+  // The hour angle of the field's farthest x from the style edge on either side, and a margin.
+  const reach = Math.max(-f.xMinMm, f.xMaxMm) - t / 2;
+  if (!(reach > 0)) return [];
+  const maxHourAngleRad = Math.min(Math.atan(reach / h) + END_MARGIN_RAD, 89 * DEG);
+  const distanceAu = sunEquatorOfDate(new Date(Date.parse(`${entry.date}T12:00:00Z`))).distanceAu;
+  const b = siteDateLine({ declinationRad: entry.declinationRad, distanceAu, latitudeDeg: layout.spec.site.latitude, heightMm: h, thicknessMm: t, hemisphere: layout.hemisphere, maxHourAngleRad });
+  const box = { xMinMm: f.xMinMm, xMaxMm: f.xMaxMm, yMinMm: f.yMinMm - ny, yMaxMm: f.yMaxMm - ny };
+  return [b.west, b.east].flatMap((p) => clipPolyline(p, box)).sort((p, q) => p[0][0] - q[0][0]);
 }

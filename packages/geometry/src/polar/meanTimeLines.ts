@@ -1,4 +1,5 @@
 import { meanTimeCurve } from '../calendar/meanTimeCurve.ts';
+import { CURVE_CHORD_TOLERANCE_MM } from '../calendar/refineByChord.ts';
 import type { FacePolyline } from '../calendar/types.ts';
 import { SpecError } from '../errors.ts';
 import { longitudeDifferenceDeg } from '../sun/longitudeCorrectionMin.ts';
@@ -15,7 +16,7 @@ export interface MeanTimeLine {
   readonly polylines: readonly FacePolyline[];
 }
 
-/** Days between samples of a mean-time curve. */
+/** Days between the first samples of a mean-time curve, before refinement (as on the planar faces). */
 const STEP_DAYS = 2;
 /** The equation of time moves a curve by at most about 4.2° of hour angle (16.5 min, common practice). */
 const EOT_SPAN_DEG = 4.5;
@@ -23,8 +24,12 @@ const EOT_SPAN_DEG = 4.5;
 /**
  * Mean-time (figure-of-eight) curves for every whole hour of `hours.from` …
  * `hours.to` in standard clock time (docs/design.md §3): the nodus shadow at
- * H = 15°·(T − 12 h) + (λ − λs) + E/4 min·° through `calendar.year`, from
- * `meanTimeCurve`, moved to the nodus foot and clipped to the mark field.
+ * H = 15°·(T − 12 h) + (λ − λs) + E/4 min·° through `calendar.year`, with
+ * the Sun seen from the site (the diurnal parallax, as the check's real Sun),
+ * from `meanTimeCurve`: every 2 days from 1 January to 1 January of the
+ * next year, each step halved while the curve strays more than
+ * `CURVE_CHORD_TOLERANCE_MM` (0.0005 mm) from its chord; moved to the nodus
+ * foot and clipped to the mark field.
  * Hours whose curve would reach |H| ≥ 89° are left out. Empty unless
  * `dial.meanTimeCurves` is true.
  *
@@ -55,6 +60,8 @@ export function meanTimeLines(layout: DialLayout): readonly MeanTimeLine[] {
       hemisphere: layout.hemisphere,
       stepDays: STEP_DAYS,
       maxHourAngleDeg: 89,
+      latitudeDeg: spec.site.latitude,
+      chordToleranceMm: CURVE_CHORD_TOLERANCE_MM,
     });
     const polylines = curve.polylines.flatMap((p) => clipPolyline(p.map(([x, y]) => [x, y + ny] as const), field));
     if (polylines.length > 0) out.push({ clockTime: formatClock(m), polylines });

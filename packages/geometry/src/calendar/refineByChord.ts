@@ -1,0 +1,72 @@
+import type { Vec2 } from '../types.ts';
+
+/**
+ * Largest distance of a drawn date line or mean-time curve from its chords,
+ * mm: half the 0.001 mm the shadow check holds every curve to (issue #18),
+ * leaving the other half to the ephemeris and the check's own sampling.
+ */
+export const CURVE_CHORD_TOLERANCE_MM = 0.0005;
+
+/** A point of a sampled curve, and whatever else its sampler keeps with it. */
+export interface CurveSample {
+  readonly point: Vec2;
+}
+
+/** Options of `refineByChord`. */
+export interface RefineByChordOptions<S extends CurveSample> {
+  /** largest distance of the curve's point at a step's middle from the step's chord, mm */
+  readonly toleranceMm: number;
+  /** halvings of a first step at most */
+  readonly maxHalvings: number;
+  /** whether two samples belong to one drawn run (e.g. cast by the same style edge); default: always */
+  readonly sameRun?: (a: S, b: S) => boolean;
+}
+
+/**
+ * Sample a curve given by a parameter (a date, an hour angle) finely enough
+ * to be drawn as chords: the curve at every first parameter, and each step
+ * halved, recursively, while the curve's point at the step's middle lies
+ * more than `toleranceMm` from the chord between the step's ends (at most
+ * `maxHalvings` times). A step is not refined where either end is null
+ * (the curve is not drawn there) or the ends, or the middle, fall in
+ * different runs (`sameRun`): the curve breaks there anyway. Returns the
+ * samples in parameter order, nulls kept, for the caller to split in runs.
+ * Shared by the polar and planar date lines and mean-time curves.
+ *
+ * @param params the first parameters, in drawing order
+ * @param at the curve at a parameter, or null where it is not drawn
+ * @example refineByChord([0, 1], (u) => ({ point: [u, u * u] }), { toleranceMm: 0.01, maxHalvings: 12 }).length // 7
+ */
+export function refineByChord<S extends CurveSample>(params: readonly number[], at: (u: number) => S | null, options: RefineByChordOptions<S>): (S | null)[] {
+  const { toleranceMm, maxHalvings } = options;
+  const sameRun = options.sameRun ?? (() => true);
+  const out: (S | null)[] = [];
+  const refine = (ua: number, a: S | null, ub: number, b: S | null, depth: number) => {
+    if (!a || !b || !sameRun(a, b) || depth >= maxHalvings) return;
+    const um = (ua + ub) / 2;
+    const m = at(um);
+    if (!m || !sameRun(a, m) || chordSag(a.point, m.point, b.point) <= toleranceMm) return;
+    refine(ua, a, um, m, depth + 1);
+    out.push(m);
+    refine(um, m, ub, b, depth + 1);
+  };
+  if (params.length === 0) return out;
+  let prev = at(params[0]);
+  out.push(prev);
+  for (let i = 1; i < params.length; i++) {
+    const next = at(params[i]);
+    refine(params[i - 1], prev, params[i], next, 0);
+    out.push(next);
+    prev = next;
+  }
+  return out;
+}
+
+/** Distance of m from the segment a–b, mm. */
+export function chordSag(a: Vec2, m: Vec2, b: Vec2): number {
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const l2 = dx * dx + dy * dy;
+  const u = l2 > 0 ? Math.max(0, Math.min(1, ((m[0] - a[0]) * dx + (m[1] - a[1]) * dy) / l2)) : 0;
+  return Math.hypot(m[0] - a[0] - u * dx, m[1] - a[1] - u * dy);
+}
