@@ -70,9 +70,37 @@ describe.each(['wall-declining', 'wall-reclining', 'meridian-east'])('wall mount
 
     expect(report.mount.fixings.length).toBe(plateHoles.length);
     expect(report.mount.fasteners.map((f) => [f.use, f.count])).toEqual([['dial plate to mount', plateHoles.length], ['mount to the wall', 4]]);
+    // Tapped in an aluminium mount: the screw's tip stays inside the mount (its back lies flat on the wall), with at least three threads engaged (common practice for thin sheet).
+    const t = report.plate.thicknessMm;
+    const screwLength = report.mount.fasteners[0].lengthMm!;
+    expect(report.mount.dialFixing).toBe('tapped');
+    expect(screwLength).toBeLessThanOrEqual(t + report.mount.thicknessMm);
+    expect(report.mount.threadEngagementMm).toBeCloseTo(screwLength - t, 9);
+    const pitch = [...METRIC_SIZES].reverse().find((s) => s.clearanceHoleMm <= 2 * plateHoles[0].radius! + 1e-9)!.pitchMm;
+    expect(report.mount.threadEngagementMm!).toBeGreaterThanOrEqual(3 * pitch);
     const md = readFileSync(file('install.md'), 'utf8');
     expect(md).toMatch(/plumb line \(plumb bob\) and a level line \(spirit level\)/);
     expect(md).toMatch(new RegExp(`fix the mount through its 4 anchor holes`));
+  });
+});
+
+describe('wall mount: a mount that cannot hold a thread', () => {
+  it.each([
+    ['slate', 5],
+    ['aluminium', 2],
+  ] as const)('a %s mount of %d mm takes the dial plate through it into wall plugs: clearance holes like the plate\'s', async (material, thickness) => {
+    const spec = parseSpec({ ...(parseSpecText(readFileSync(join(ROOT, 'fixtures/planar/wall-declining.yaml'), 'utf8')) as object), plate: { material, thickness }, pictures: { write: false } });
+    const m = wallMount(layoutPlanar(spec))!;
+    expect(m.dialFixing).toBe('through');
+    expect(m.threadEngagementMm).toBeNull();
+    for (const f of m.fixings) expect(f.mountHoleMm).toBe(f.plateHoleMm);
+    expect(m.fasteners[0].use).toBe('dial plate through the mount to the wall');
+    // long enough to pass plate and mount and reach a plug's depth (ANCHOR_EMBED_MM 45 as a first figure)
+    expect(m.fasteners[0].lengthMm!).toBeGreaterThanOrEqual(2 * thickness + 45);
+    const r = await buildAnyFiles(spec);
+    const md = new TextDecoder().decode(r.files.find((f) => f.name === 'install.md')!.bytes);
+    expect(md).toMatch(/Drill the wall through the mount's \d+ dial holes, set a wall plug in each/);
+    expect(md).not.toMatch(/tap them/);
   });
 });
 

@@ -158,6 +158,8 @@ async function wallMountFiles(spec: DialSpec, layout: PlanarLayout, drawing: Pla
       material: m.part.material,
       plateAtMm: m.plateAtMm,
       fixings: m.fixings,
+      dialFixing: m.dialFixing,
+      threadEngagementMm: m.threadEngagementMm,
       anchors: m.anchors.map(([x, y], i) => ({ index: i + 1, xMm: x, yMm: y, diameterMm: WALL_ANCHOR_HOLE_MM })),
       fasteners: m.fasteners,
       files: { ...(cut ? { dxf: cut } : {}), stl: { volumeMm3: meshVolumeMm3(mesh), facets: mesh.triangles.length, bbox: { minMm: b.min, maxMm: b.max } } },

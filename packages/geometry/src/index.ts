@@ -104,7 +104,7 @@ export { planarGnomonSolid, type PlanarGnomonPart } from './planar/planarGnomonS
 export { planarInstallSheet, type PlanarInstallSheet } from './planar/planarInstallSheet.ts';
 export { pillarFixing, PILLAR_LEVELLING_GAP_MM, type PillarFixing } from './planar/pillarFixing.ts';
 export { wallDeclinationFromShadow, type ShadowReading } from './planar/wallDeclinationFromShadow.ts';
-export { wallMount, WALL_MOUNT_RIM_MM, WALL_ANCHOR_HOLE_MM, type WallMountFixing } from './planar/wallMount.ts';
+export { MIN_THREADS_ENGAGED, tappedScrewLength, wallMount, WALL_MOUNT_RIM_MM, WALL_ANCHOR_HOLE_MM, type MountDialFixing, type WallMountFixing } from './planar/wallMount.ts';
 export { equatorialStand, equatorialStandApplies, type EquatorialStand, type EquatorialFixing } from './planar/equatorialStand.ts';
 export { standUnionSolid, PRINT_FUSE_MM } from './stand/standUnionSolid.ts';
 export { placePoint } from './stand/placeStandPart.ts';

@@ -1,4 +1,4 @@
-import type { FaceType, FastenerRow, FinEdge, Hemisphere, LeftOutHour, MarkKind, PillarFixing, PlanarGnomonLayout, TimeLayout, Vec2, Vec3, WallMountFixing } from '@umbrafab/geometry';
+import type { FaceType, FastenerRow, FinEdge, Hemisphere, LeftOutHour, MarkKind, PillarFixing, PlanarGnomonLayout, TimeLayout, Vec2, Vec3, MountDialFixing, WallMountFixing } from '@umbrafab/geometry';
 import type { EngravingReport } from '@umbrafab/fabricate';
 import type { CutFileSection } from './cutParts.ts';
 import type { MeshFigures } from './meshFigures.ts';
@@ -98,7 +98,7 @@ export type PlanarGnomonSection = PlanarGnomonLayout & {
   readonly belowFaceMm: number;
 };
 
-/** A wall face's mounting plate: fixed to the wall through its anchors, the dial plate screwed to it (plate.dxf's holes on tapped holes). */
+/** A wall face's mounting plate: fixed to the wall through its anchors, the dial plate screwed to it (plate.dxf's holes on its tapped holes, or through it into wall plugs). */
 export interface WallMountSection {
   readonly widthMm: number;
   readonly lengthMm: number;
@@ -107,6 +107,10 @@ export interface WallMountSection {
   /** where the dial plate's lower-left corner sits on the mount, mount frame, mm */
   readonly plateAtMm: Vec2;
   readonly fixings: readonly WallMountFixing[];
+  /** 'tapped': screws into threads tapped in the mount; 'through': through plate and mount into wall plugs */
+  readonly dialFixing: MountDialFixing;
+  /** tapped: thread length in the mount (screw length − plate thickness), mm; through: null */
+  readonly threadEngagementMm: number | null;
   /** the wall anchor holes: centre (mount frame) and diameter, mm */
   readonly anchors: readonly { readonly index: number; readonly xMm: number; readonly yMm: number; readonly diameterMm: number }[];
   /** what to buy for the wall and the plate */

@@ -104,18 +104,25 @@ export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
  * Fixing a wall face through its mounting plate (`wallMount`, mount.dxf /
  * mount.stl), or `direct` when the face has none: the mount's plumb line,
  * level line and substyle (reference layer) laid on the pencil marks, the
- * mount anchored through its rim, the plate screwed to its tapped holes.
+ * mount anchored through its rim, the plate screwed to its tapped holes or
+ * through it into wall plugs (`MountDialFixing`).
  */
 function mountSteps(layout: PlanarLayout, direct: string): string[] {
   const m = wallMount(layout);
   if (!m) return [direct];
   const [x, y] = m.plateAtMm;
   const [dial, wall] = m.fasteners;
+  const tapped = m.dialFixing === 'tapped';
+  const sits = `the dial plate sits on its drawn outline, its lower-left corner ${f1(x)} mm in from the mount's left edge and ${f1(y)} mm up from its lower edge, so its holes fall on the mount's`;
   return [
-    `Drill the mount's ${m.fixings.length} dial holes Ø ${m.fixings[0].mountHoleMm.toFixed(1)} mm (as cut) and tap them ${dial.size}; the dial plate sits on its drawn outline, its lower-left corner ${f1(x)} mm in from the mount's left edge and ${f1(y)} mm up from its lower edge, so its holes fall on the tapped ones.`,
+    tapped
+      ? `Drill the mount's ${m.fixings.length} dial holes Ø ${m.fixings[0].mountHoleMm.toFixed(1)} mm (as cut) and tap them ${dial.size}; ${sits} tapped ones.`
+      : `The mount's ${m.fixings.length} dial holes are clearance holes Ø ${m.fixings[0].mountHoleMm.toFixed(1)} mm like the plate's (a ${m.part.material} mount of ${f1(m.part.thicknessMm)} mm does not hold a thread well enough): the dial plate's screws go through both into wall plugs; ${sits}.`,
     `With the plumb line (plumb bob) and a level line (spirit level) through the root's point pencilled on the wall, hold the mount with its 'plumb line' and 'level line' reference lines on the pencil marks (transfer them to the mount's edges with a square first), check its 'plumb line' with the level once more, and mark the ${m.anchors.length} anchor holes through its rim.`,
     `Drill the wall and fix the mount through its ${wall.count} anchor holes: wall plugs and stainless screws with washers (timber: coach screws), ${wall.lengthMm} mm long as a first figure; the plug maker's data and the wall rule.`,
-    `Screw the dial plate to the mount with ${dial.count} ${dial.size} × ${dial.lengthMm} mm stainless pan-head screws.`,
+    tapped
+      ? `Screw the dial plate to the mount with ${dial.count} ${dial.size} × ${dial.lengthMm} mm stainless pan-head screws (their tips stay inside the mount, ${f1(m.threadEngagementMm!)} mm of thread).`
+      : `Drill the wall through the mount's ${dial.count} dial holes, set a wall plug in each, and screw the dial plate on with ${dial.count} stainless pan-head screws ${dial.lengthMm} mm long as a first figure (the plug maker's data and the wall rule).`,
   ];
 }
 
