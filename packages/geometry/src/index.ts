@@ -76,6 +76,8 @@ export { planarFaceVector, planarShadowOnFace } from './shadow/planarShadowOnFac
 export { marksFromPlate, type PlateLine } from './shadow/marksFromPlate.ts';
 export { checkDial, isFaceLit, type MarkCheck, type CheckResult } from './shadow/checkDial.ts';
 export { checkPlanar, type PlanarCheckResult } from './shadow/checkPlanar.ts';
+export { type CurveCheck, type DrawnCurve } from './shadow/curveCheck.ts';
+export { drawnCurvesFromLayout } from './shadow/polarCurveCheck.ts';
 export { planarMarksFromPlate } from './shadow/planarMarksFromPlate.ts';
 
 export type { AssemblyPartName, FaceFrame, PictureItem, PlacedPart } from './assembly/assemblyTypes.ts';

@@ -78,7 +78,11 @@ export const checkCommand: CommandModule = {
     }
     if (!result.pass) {
       const f = result.failures[0];
-      io.err(`umbrafab check: mark ${f.label} ${f.style} is ${Math.abs(f.errorMm).toFixed(3)} mm off the simulated shadow on ${f.date} (tolerance ${result.toleranceMm} mm); ${result.failures.length} mark(s) fail`);
+      const badCurves = result.curves.filter((c) => !c.pass);
+      const curveText = badCurves.length ? `${badCurves.length} date line(s) or curve(s) fail, first ${badCurves[0].label}: ${badCurves[0].worstMm.toFixed(4)} mm off the nodus shadow on ${badCurves[0].worstDate ?? '-'}` : '';
+      io.err(f
+        ? `umbrafab check: mark ${f.label} ${f.style} is ${Math.abs(f.errorMm).toFixed(3)} mm off the simulated shadow on ${f.date} (tolerance ${result.toleranceMm} mm); ${result.failures.length} mark(s) fail${curveText ? `; ${curveText}` : ''}`
+        : `umbrafab check: ${curveText} (tolerance ${result.curveToleranceMm} mm)`);
       return 1;
     }
     return 0;

@@ -34,4 +34,19 @@ describe('check writers', () => {
     const f = checkTableText(tilted);
     expect(f.match(/^FAIL: mark \d\d:\d\d (west|east): shadow [+-]\d+\.\d{3} mm \([+-]\d+\.\d s\) off the line on 2027-\d\d-\d\d/gm)?.length).toBe(tilted.failures.length);
   });
+
+  test('table with a nodus: a row per date line and curve, a FAIL line naming a curve beyond the tolerance', () => {
+    const nodus = layoutDial(parseSpec({ site: { latitude: 50.62, longitude: -3.41, timezone: 'Europe/London' }, hours: { from: '09:00', to: '15:00', step: 60 }, gnomon: { nodus: true }, dial: { meanTimeCurves: true, reads: 'standard' } }));
+    const ok = checkDial(nodus, { everyDays: 30 });
+    const t = checkTableText(ok).split('\n');
+    expect(ok.curves.length).toBeGreaterThan(3);
+    for (const c of ok.curves) expect(t.some((l) => l.startsWith(c.label) && l.includes(c.worstDate ?? '-'))).toBe(true);
+    expect(t.find((l) => l.startsWith('worst curve:'))).toMatch(/mm \(\d+\.\d{3} s\) on .*; \d+ date line\(s\) and curve\(s\), tolerance 0\.050 mm/);
+    expect(t.at(-1)).toMatch(/^PASS: every lit mark, date line and mean-time curve/);
+    const tight = checkDial(nodus, { everyDays: 30, toleranceMm: 1e-6 });
+    const bad = tight.curves.filter((c) => !c.pass);
+    expect(bad.length).toBeGreaterThan(0);
+    expect(checkTableText(tight).match(/^FAIL: curve .+: nodus shadow \d+\.\d{4} mm \(\d+\.\d s\) off the drawn curve on 2027-\d\d-\d\d; beyond 0\.000 mm$/gm)?.length).toBe(bad.length);
+    expect(JSON.parse(toCheckJson(ok)).curves.length).toBe(ok.curves.length);
+  });
 });

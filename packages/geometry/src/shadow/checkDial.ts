@@ -8,8 +8,10 @@ import { SUN_RADIUS_KM } from '../sun/sunAngularRadiusRad.ts';
 import type { MarkKind, StyleEdge } from '../types.ts';
 import { shadowOnLine } from './castShadow.ts';
 import { dialFrame, toDialFrame, type DialFrame } from './dialFrame.ts';
+import type { CurveCheck, DrawnCurve } from './curveCheck.ts';
 import { drawnMarksFromLayout, type DrawnMark } from './drawnMarks.ts';
 import { gnomonForLayout } from './gnomonForLayout.ts';
+import { checkPolarCurves, drawnCurvesFromLayout } from './polarCurveCheck.ts';
 import { checkSampling } from './checkSampling.ts';
 import { markErrorSummary, newMarkErrorTally, tallyReached, type MarkErrorTally, type WorstMean } from './markErrorTally.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
@@ -42,6 +44,8 @@ export interface CheckOptions {
   readonly drawn?: readonly DrawnMark[];
   /** where the drawn marks came from, for the report (default 'layout') */
   readonly source?: 'layout' | 'plate';
+  /** the date lines and mean-time curves as drawn (default: the layout's, `drawnCurvesFromLayout`), e.g. one moved on purpose */
+  readonly curves?: readonly DrawnCurve[];
 }
 
 export interface Range {
@@ -114,6 +118,8 @@ export interface CheckResult {
   readonly reads: 'solar' | 'standard';
   readonly source: 'layout' | 'plate';
   readonly toleranceMm: number;
+  /** tolerance of the date lines and mean-time curves, mm: the same as the marks' (they are drawn to 0.0005 mm of the shadow) */
+  readonly curveToleranceMm: number;
   readonly stepMinutes: number;
   readonly everyDays: number;
   readonly refraction: RefractionModel;
@@ -131,6 +137,9 @@ export interface CheckResult {
   readonly worst: { readonly label: string; readonly style: StyleEdge; readonly date: string; readonly errorMm: number; readonly errorS: number } | null;
   /** marks beyond the tolerance, worst first */
   readonly failures: readonly CheckFailure[];
+  /** each drawn date line and mean-time curve against the nodus shadow (`checkPolarCurves`); empty without a nodus */
+  readonly curves: readonly CurveCheck[];
+  /** every mark and every curve within its tolerance */
   readonly pass: boolean;
 }
 
@@ -154,6 +163,10 @@ export interface CheckResult {
  *    installation tolerance in minutes per degree.
  * The sweep samples every `stepMinutes` between the first and the last
  * mark's hour angle (the face's lit minutes, and the seeds of step 1).
+ * With a nodus, every drawn date line and mean-time curve is measured too
+ * (`checkPolarCurves`: the nodus on the mesh's style edge, the distance of
+ * its shadow from the drawn polyline, in mm and seconds), held to the
+ * marks' tolerance.
  *
  * @example checkDial(layoutDial(parseSpec(raw))).pass
  */
@@ -163,7 +176,8 @@ export function checkDial(layout: DialLayout, options: CheckOptions = {}): Check
   const frames = checkFrames(layout.spec.site.latitude, settings.tiltErrorDeg, settings.azimuthErrorDeg);
   const run = runDays(layout, settings, caster, frames);
   const marks = settings.drawn.map((d, i) => markCheck(d, run.acc[i]));
-  return assembleResult(layout, settings, caster, run, marks);
+  const curves = checkPolarCurves(layout, settings.curves, { track: settings.track, frame: frames.frame, edgesOf: caster.edgesOf, nodusYMm: caster.part.nodusMm?.[1] ?? null, toleranceMm: settings.toleranceMm });
+  return assembleResult(layout, settings, caster, run, marks, curves);
 }
 
 /** What one check runs with: the sampling over the spec's defaults, the installation errors and the drawn marks. */
@@ -171,6 +185,7 @@ interface CheckSettings extends ReturnType<typeof checkSampling> {
   readonly tiltErrorDeg: number;
   readonly azimuthErrorDeg: number;
   readonly drawn: readonly DrawnMark[];
+  readonly curves: readonly DrawnCurve[];
   readonly source: 'layout' | 'plate';
 }
 
@@ -182,7 +197,7 @@ function checkSettings(layout: DialLayout, options: CheckOptions): CheckSettings
   const azimuthErrorDeg = options.azimuthErrorDeg ?? c.azimuthError;
   const drawn = options.drawn ?? drawnMarksFromLayout(layout);
   if (drawn.length === 0) throw new SpecError('marks', 0, 'allowed: at least one mark to check');
-  return { ...sampling, tiltErrorDeg, azimuthErrorDeg, drawn, source: options.source ?? 'layout' };
+  return { ...sampling, tiltErrorDeg, azimuthErrorDeg, drawn, curves: options.curves ?? drawnCurvesFromLayout(layout), source: options.source ?? 'layout' };
 }
 
 /** The gnomon that casts the shadow: its part, the style height h (mm) and its top style edges on each side. */
@@ -368,7 +383,7 @@ function failuresOfMarks(marks: readonly MarkCheck[]): CheckFailure[] {
 }
 
 /** Assemble the result: the settings it ran with, the gnomon, the days, the marks, the worst and the failures. */
-function assembleResult(layout: DialLayout, settings: CheckSettings, caster: CastingStyle, run: DaysRun, marks: readonly MarkCheck[]): CheckResult {
+function assembleResult(layout: DialLayout, settings: CheckSettings, caster: CastingStyle, run: DaysRun, marks: readonly MarkCheck[], curves: readonly CurveCheck[]): CheckResult {
   const { spec } = layout;
   const { edges, part } = caster;
   const failures = failuresOfMarks(marks);
@@ -379,20 +394,22 @@ function assembleResult(layout: DialLayout, settings: CheckSettings, caster: Cas
     reads: layout.time.reads,
     source: settings.source,
     toleranceMm: settings.toleranceMm,
+    curveToleranceMm: settings.toleranceMm,
     stepMinutes: settings.stepMinutes,
     everyDays: settings.everyDays,
     refraction: settings.refraction,
     tiltErrorDeg: settings.tiltErrorDeg,
     azimuthErrorDeg: settings.azimuthErrorDeg,
     gnomon: { heightMm: part.styleHeightMm, thicknessMm: part.thicknessMm, styleEdges: edges.minusX.length + edges.plusX.length },
-    sunPositions: run.sunPositions,
+    sunPositions: run.sunPositions + curves.reduce((n, c) => n + c.samples, 0),
     ephemerisCalls: settings.track.ephemerisCalls,
-    method: CHECK_METHOD(settings.refraction),
+    method: CHECK_METHOD(settings.refraction, curves.length > 0, settings.toleranceMm),
     days: run.days,
     marks,
     worst: worstOfMarks(marks),
     failures,
-    pass: failures.length === 0,
+    curves,
+    pass: failures.length === 0 && curves.every((c) => c.pass),
   };
 }
 
@@ -410,14 +427,18 @@ export function sunInDialFrame(frame: DialFrame, sample: SunSample): Vec3 {
   return toDialFrame(frame, sample.enu);
 }
 
-function CHECK_METHOD(refraction: RefractionModel): string[] {
-  return [
+function CHECK_METHOD(refraction: RefractionModel, withCurves: boolean, toleranceMm: number): string[] {
+  const lines = [
     'Sun: astronomy-engine 2.1.19 geocentric apparent RA/Dec of date + Greenwich apparent sidereal time at local standard 00:00, 12:00, 24:00 of each day, interpolated quadratically; topocentric by the observer position on astronomy-engine\'s ellipsoid; horizon frame as astronomy-engine Horizon',
     refraction === 'none' ? 'refraction: none (geometric Sun)' : "refraction: astronomy-engine Refraction('normal')",
     'instant: topocentric hour angle = mark hour angle (Newton on the track)',
     'shadow: style edges found in the gnomon mesh (gnomonForLayout = gnomon.stl), projected along the rays onto the face z = 0',
     'seconds: error / (dx/dH), dx/dH = h / cos² H, hour angle rate 2π per 86 400 s',
   ];
+  if (withCurves) {
+    lines.push(`curves: nodus on the mesh's casting style edge at the notch; date lines on their date every 0.1° of hour angle with the Sun at the line's declination seen from the site; mean-time curves with the real Sun at the clock time every day; distance to the drawn polyline (seconds: over the shadow's motion in one second), tolerance ${toleranceMm} mm as for the marks`);
+  }
+  return lines;
 }
 
 /** A mark's tally over the days (`MarkErrorTally`) with what only the polar check measures. */

@@ -12,6 +12,7 @@ import { planarGnomonSolid } from '../planar/planarGnomonSolid.ts';
 import type { FinEdge } from '../planar/planarTypes.ts';
 import { sunDirectionEnu } from '../planar/sunDirectionEnu.ts';
 import { checkSampling } from './checkSampling.ts';
+import { insideBox, measureCurve, nearestDay, projectOnFace, type CurveCheck, type CurveSunPosition } from './curveCheck.ts';
 import { markErrorSummary, newMarkErrorTally, tallyReached } from './markErrorTally.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
 
@@ -49,18 +50,8 @@ export interface PlanarMarkCheck {
   readonly daysOverTolerance: number;
 }
 
-export interface PlanarCurveCheck {
-  readonly label: string;
-  readonly kind: 'date' | 'meanTime';
-  /** sun positions tested (those whose nodus shadow falls inside the drawn field) */
-  readonly samples: number;
-  /** largest distance of the nodus shadow from the drawn curve, mm */
-  readonly worstMm: number;
-  /** the same in seconds of time (along the Sun's hourly motion) */
-  readonly worstS: number;
-  readonly worstDate: string | null;
-  readonly pass: boolean;
-}
+/** A date line's or mean-time curve's year on a planar face (`measureCurve`, shared with the polar check). */
+export type PlanarCurveCheck = CurveCheck;
 
 export interface PlanarCheckResult {
   readonly faceType: PlanarLayout['faceType'];
@@ -226,8 +217,8 @@ export function shadowOnSegment(edges: readonly Edge3[], sun: Vec3, a: Vec2, b: 
   let sum = 0;
   let weight = 0;
   for (const [p, q] of edges) {
-    const pa = project(p, sun);
-    const pb = project(q, sun);
+    const pa = projectOnFace(p, sun);
+    const pb = projectOnFace(q, sun);
     const sa = along(pa);
     const sb = along(pb);
     if (Math.abs(sb - sa) < 1e-12) continue;
@@ -246,7 +237,7 @@ export function shadowOnSegment(edges: readonly Edge3[], sun: Vec3, a: Vec2, b: 
 
 function rodShadowOnSegment(top: Vec3, sun: Vec3, a: Vec2, b: Vec2): SegmentShadow | null {
   if (!(sun[2] > 0)) return null;
-  const X = project(top, sun);
+  const X = projectOnFace(top, sun);
   const L = Math.hypot(b[0] - a[0], b[1] - a[1]);
   const d: Vec2 = [(b[0] - a[0]) / L, (b[1] - a[1]) / L];
   // The rod's shadow runs from its foot (the face origin) to X; it reaches the line if it is longer than the line's start.
@@ -256,11 +247,6 @@ function rodShadowOnSegment(top: Vec3, sun: Vec3, a: Vec2, b: Vec2): SegmentShad
   // Offset at the line's far end, on the ray from the foot through X.
   const eFar = (e * Math.hypot(b[0], b[1])) / Math.max(reach, 1e-9);
   return { errorMm: Math.abs(eFar) > Math.abs(e) ? eFar : e, meanOffsetMm: e };
-}
-
-function project(p: Vec3, sun: Vec3): Vec2 {
-  const k = p[2] / sun[2];
-  return [p[0] - k * sun[0], p[1] - k * sun[1]];
 }
 
 function rodTopCentre(positions: readonly Vec3[]): Vec3 {
@@ -311,52 +297,31 @@ function checkCurves(
   const entries = dateLineEntries(spec);
   const hs = layout.marks.map((m) => m.hourAngleDeg);
   const out: PlanarCurveCheck[] = [];
+  const inside = (X: Vec2) => insideField(layout, X);
+  const at = (sunEnu: Vec3, H: number, date: string): CurveSunPosition => ({ sun: frame(sunEnu), later: frame(turnSun(sunEnu, phi, HOUR_ANGLE_RAD_PER_S)), nodus: nodusOf(edgeForHourAngle(layout, H)), date });
   for (const curve of drawnCurves) {
-    let worstMm = 0;
-    let worstS = 0;
-    let worstDate: string | null = null;
-    let samples = 0;
-    const test = (sunEnu: Vec3, H: number, date: string) => {
-      const sun = frame(sunEnu);
-      if (!(sun[2] > 0)) return;
-      const edge = edgeForHourAngle(layout, H);
-      const N = nodusOf(edge);
-      if (!N) return;
-      const X = project(N, sun);
-      if (!insideField(layout, X)) return;
-      const dist = distanceToPaths(X, curve.paths);
-      // Beyond a drawn end (where the drawing stops: the field's edge, or where the face loses the Sun) the curve claims nothing.
-      if (dist === null) return;
-      const X2 = project(N, frame(turnSun(sunEnu, phi, HOUR_ANGLE_RAD_PER_S)));
-      const speed = Math.hypot(X2[0] - X[0], X2[1] - X[1]);
-      samples++;
-      if (dist > worstMm) {
-        worstMm = dist;
-        worstS = speed > 0 ? dist / speed : 0;
-        worstDate = date;
-      }
-    };
+    const positions: CurveSunPosition[] = [];
     if (curve.kind === 'date') {
       const e = entries.find((en) => curve.label === en.label) ?? entries.find((en) => curve.label.startsWith(en.label));
       if (!e) continue;
-      const day = days.find((d) => d.date === e.date) ?? days.reduce((best, d) => (Math.abs(Date.parse(d.date) - Date.parse(e.date)) < Math.abs(Date.parse(best.date) - Date.parse(e.date)) ? d : best), days[0]);
+      const day = nearestDay(days, e.date);
       // Between the drawn vertices (0.25° apart) as well as on them: 0.125° off, every 0.5°.
       for (let Hd = Math.min(...hs) + 0.125; Hd <= Math.max(...hs); Hd += 0.5) {
         const t = instantAtHourAngle(track, day, Hd * DEG);
         const s = sunOnDay(track, day, t);
         if (!isLit(s)) continue;
         // The real hour angle of that instant, the declination held at the line's.
-        test(sunDirectionEnu(phi, s.hourAngleRad, e.declinationRad), s.hourAngleRad, day.date);
+        positions.push(at(sunDirectionEnu(phi, s.hourAngleRad, e.declinationRad), s.hourAngleRad, day.date));
       }
     } else {
       const minutes = parseClock('curve', curve.label.slice(0, 5));
       for (const day of days) {
         const s = sunOnDay(track, day, day.startMs + minutes * 60_000);
         if (!isLit(s)) continue;
-        test(s.enu, s.hourAngleRad, day.date);
+        positions.push(at(s.enu, s.hourAngleRad, day.date));
       }
     }
-    out.push({ label: curve.label, kind: curve.kind, samples, worstMm, worstS, worstDate, pass: worstMm <= tol });
+    out.push(measureCurve(curve, positions, inside, tol));
   }
   return out;
 }
@@ -366,33 +331,10 @@ function edgeForHourAngle(layout: PlanarLayout, H: number): FinEdge {
   return dot3(layout.face.fin, e) < 0 ? 'plusF' : 'minusF';
 }
 
-/** Inside the drawn field (the box of the marks), where the curves were kept. */
+/** Inside the drawn field (the box of the marks, 0.5 mm in), where the curves were kept. */
 function insideField(layout: PlanarLayout, X: Vec2): boolean {
   const pts = layout.marks.flatMap((m) => [m.a, m.b]);
   const xs = pts.map((p) => p[0]);
   const ys = pts.map((p) => p[1]);
-  const inset = 0.5;
-  return X[0] > Math.min(...xs) + inset && X[0] < Math.max(...xs) - inset && X[1] > Math.min(...ys) + inset && X[1] < Math.max(...ys) - inset;
-}
-
-/** Distance from X to the nearest drawn polyline, or null when the nearest point is a run's end and X lies beyond it. */
-function distanceToPaths(X: Vec2, paths: readonly (readonly Vec2[])[]): number | null {
-  let best = Infinity;
-  let beyondEnd = false;
-  for (const path of paths) {
-    for (let i = 0; i + 1 < path.length; i++) {
-      const [a, b] = [path[i], path[i + 1]];
-      const dx = b[0] - a[0];
-      const dy = b[1] - a[1];
-      const l2 = dx * dx + dy * dy;
-      const raw = l2 > 0 ? ((X[0] - a[0]) * dx + (X[1] - a[1]) * dy) / l2 : 0;
-      const u = Math.max(0, Math.min(1, raw));
-      const d = Math.hypot(X[0] - a[0] - u * dx, X[1] - a[1] - u * dy);
-      if (d < best) {
-        best = d;
-        beyondEnd = (i === 0 && raw < 0) || (i + 2 === path.length && raw > 1);
-      }
-    }
-  }
-  return beyondEnd ? null : best;
+  return insideBox({ xMinMm: Math.min(...xs), xMaxMm: Math.max(...xs), yMinMm: Math.min(...ys), yMaxMm: Math.max(...ys) }, X, 0.5);
 }
