@@ -158,7 +158,7 @@ export function assemblyGuide(layout: DialLayout): AssemblyGuide {
 
   const gs = spec.gnomon;
   const nodus = gs.nodus || spec.parts.nodus
-    ? `The nodus is the V-notch in the style, ${Math.abs(gs.nodusY).toFixed(1)} mm ${gs.nodusY === 0 ? 'at' : gs.nodusY > 0 ? 'toward the raised end from' : 'toward the lower end from'} the middle of the hour lines; it opens upward, away from the face, so the point of the notch casts a point of light-and-shade on the face: read that point, not the shadow's edge. The notch is the same from both sides: either face of the fin may look east.`
+    ? `The nodus is the point of the style edge at the middle of the notch cut into it, ${Math.abs(gs.nodusY).toFixed(1)} mm ${gs.nodusY === 0 ? 'at' : gs.nodusY > 0 ? 'toward the raised end from' : 'toward the lower end from'} the middle of the hour lines. On the face the notch lets a small bite of light into the edge of the fin's shadow: read the middle of that bite where it opens on the shadow's edge, not its tip (the tip is the shadow of the notch's bottom, which lies below the style: it would read the date off by about the notch's depth). The notch is the same from both sides: either face of the fin may look east.`
     : null;
   const reading: string[] = [];
   if (nodus !== null && spec.calendar.lines.length + spec.calendar.dates.length > 0) {

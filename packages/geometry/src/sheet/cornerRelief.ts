@@ -138,3 +138,54 @@ function isTabRoot(profile: readonly Vec2[], i: number, faceZ: number): boolean 
   const cross = (p[0] - a[0]) * (b[1] - p[1]) - (p[1] - a[1]) * (b[0] - p[0]);
   return cross < 0 && Math.abs(p[1] - faceZ) < 1e-9;
 }
+
+/**
+ * The fin's nodus V-notch as a round tool cuts it: a router cannot reach the
+ * notch's sharp bottom, so for a tool of radius r the V (opening s on the
+ * style edge, 90° at its bottom) becomes a half-circle notch centred on the
+ * middle of the opening, of radius max(ρ, s/2) with ρ = r + 0.05 mm. The V
+ * lies inside the half-circle (its corners are on it, Thales), and the
+ * middle of the opening, the point the nodus is read by (the style point
+ * above the notch's bottom), stays where it is. Every reflex corner above
+ * the face line (z > `faceZ`) whose neighbours are level with each other
+ * is such a notch (call it before `relieveTabRoots`, whose arcs would look
+ * like one); other outlines are returned as they are.
+ *
+ * @param profile counter-clockwise outline, the style edge level (z constant) across the notch
+ * @throws SpecError (process.kerf) when the half-circle would run past the style's ends
+ * @example relieveNodusNotch(flatFin, 1.5875, 5)
+ */
+export function relieveNodusNotch(profile: readonly Vec2[], toolRadiusMm: number, faceZ: number, toleranceMm = CHORD_TOLERANCE_MM): Vec2[] {
+  if (!(toolRadiusMm > 0)) return [...profile];
+  const rho = toolRadiusMm + RELIEF_OVERSIZE_MM;
+  const n = profile.length;
+  const out: Vec2[] = [];
+  for (let i = 0; i < n; i++) {
+    const a = profile[(i - 1 + n) % n];
+    const p = profile[i];
+    const b = profile[(i + 1) % n];
+    const cross = (p[0] - a[0]) * (b[1] - p[1]) - (p[1] - a[1]) * (b[0] - p[0]);
+    if (!(cross < 0) || !(p[1] > faceZ + 1e-9) || Math.abs(a[1] - b[1]) > 1e-9) {
+      out.push(p);
+      continue;
+    }
+    // p is the notch's bottom, a and b the ends of its opening on the style edge: a was pushed last, b comes next.
+    if (i === 0 || i === n - 1) throw new Error('relieveNodusNotch: the outline must not start or end inside the notch');
+    const c: Vec2 = [(a[0] + b[0]) / 2, a[1]];
+    const R = Math.max(rho, Math.abs(a[0] - b[0]) / 2);
+    const before = profile[(i - 2 + n) % n];
+    const after = profile[(i + 2) % n];
+    const lo = Math.min(before[0], after[0]);
+    const hi = Math.max(before[0], after[0]);
+    if (c[0] - R < lo + 1e-9 || c[0] + R > hi - 1e-9) {
+      throw new SpecError('process.kerf', 2 * toolRadiusMm, `allowed: a router tool narrower than ${(2 * (Math.min(c[0] - lo, hi - c[0]) - RELIEF_OVERSIZE_MM)).toFixed(3)} mm, so the round nodus notch (radius ${R.toFixed(3)} mm) stays within the style (or cutFiles.relief: off)`);
+    }
+    // Replace a, p, b by the half-circle from a's side, down through the bottom, to b's side.
+    out.pop();
+    const start = a[0] > c[0] ? 0 : Math.PI;
+    out.push(...arcPoints(c, R, start, a[0] > c[0] ? -Math.PI : Math.PI, toleranceMm));
+    i++; // b is the arc's last point
+  }
+  return dropRepeats(out);
+}
+

@@ -4,7 +4,7 @@ import { partsPlan } from '../parts/partsPlan.ts';
 import { dialGnomon } from '../parts/dialParts.ts';
 import type { Circle, Path, Vec2 } from '../types.ts';
 import { CHORD_TOLERANCE_MM } from './arcPoints.ts';
-import { relievedSlot, relieveTabRoots, type SlotRelief } from './cornerRelief.ts';
+import { relievedSlot, relieveNodusNotch, relieveTabRoots, type SlotRelief } from './cornerRelief.ts';
 import { roundedRectPath } from '../outline/roundedRect.ts';
 import type { SheetPart } from './sheetPart.ts';
 import { standParts } from '../stand/standSheetParts.ts';
@@ -67,8 +67,9 @@ export function plateSheetPart(drawing: PlateDrawing, o: FlatPartOptions): Sheet
  * A gnomon fin's (y, z) profile (counter-clockwise, the face on z = 0, tabs
  * below it) laid flat as a part: style along +x, height along +y, origin at
  * the lower-left corner of the nominal part (x = profile y − min y,
- * y = profile z − min z), T-bone relief at the tab roots for the tool, and
- * the face line on the reference list.
+ * y = profile z − min z), T-bone relief at the tab roots and a round nodus
+ * notch for the tool (`relieveTabRoots`, `relieveNodusNotch`), and the face
+ * line on the reference list.
  * @example finSheetPart(gnomon.profile, { material: 'aluminium', thicknessMm: 3, reliefToolRadiusMm: 1.5875, chordToleranceMm: 0.005 })
  */
 export function finSheetPart(profile: readonly Vec2[], o: FlatPartOptions, name = 'gnomon'): SheetPart {
@@ -81,7 +82,7 @@ export function finSheetPart(profile: readonly Vec2[], o: FlatPartOptions, name 
     name,
     material: o.material,
     thicknessMm: o.thicknessMm,
-    outer: { kind: 'path', closed: true, points: relieveTabRoots(flat, o.reliefToolRadiusMm, faceY, o.chordToleranceMm) },
+    outer: { kind: 'path', closed: true, points: relieveTabRoots(relieveNodusNotch(flat, o.reliefToolRadiusMm, faceY, o.chordToleranceMm), o.reliefToolRadiusMm, faceY, o.chordToleranceMm) },
     inner: [],
     reference: [{ label: 'face line', path: { kind: 'path', closed: false, points: [[0, faceY], [length, faceY]] } }],
   };
