@@ -180,6 +180,16 @@ describe('template.pdf of every planar face, read back as the shop prints it', (
       measured++;
     }
     expect(measured).toBeGreaterThan(0);
+    // install.md's guide names each sheet as the PDF heads it: the plate, the table, the 45° triangle, then each part.
+    const install = new TextDecoder().decode(b.files.find((f) => f.name === 'install.md')!.bytes);
+    expect(install).toContain(`Print all ${report.template.pages} A4 sheets at 100 %`);
+    const guide = [...install.matchAll(/^- sheets? (\d+)(?: to (\d+))?: the (.+?)(?: at 1:1|,| ends|$)/gm)].map((m) => ({ first: Number(m[1]), last: Number(m[2] ?? m[1]), what: m[3] }));
+    for (const d of report.template.drawings as { label: string; firstSheet: number; lastSheet: number }[]) expect(guide).toContainEqual({ first: d.firstSheet, last: d.lastSheet, what: d.label });
+    const triangle = guide.find((g) => g.what.startsWith('45° check triangle'))!;
+    expect(pages[triangle.first - 1]).toContain('45° check triangle at 1:1');
+    const table = install.match(/^- sheets? (\d+)(?: to (\d+))?: each line's distance from the style edge/m)!;
+    for (let k = Number(table[1]); k <= Number(table[2] ?? table[1]); k++) expect(pages[k - 1]).toContain('offsets of the lines from the style edge');
+    expect(guide.length + 1).toBe(report.template.drawings.length + 2); // + the table line, + the triangle
   });
 
   it('a plate larger than the sheet is tiled over overlapping sheets, and the wall mount too', async () => {

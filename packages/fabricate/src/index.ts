@@ -54,7 +54,8 @@ export { toCheckSvg } from './check/toCheckSvg.ts';
 export { checkTableText } from './check/checkTableText.ts';
 export { planarCheckText } from './check/planarCheckText.ts';
 
-export { toPlanarInstallMd, type PlanarTemplateGuide } from './install/toPlanarInstallMd.ts';
+export { toPlanarInstallMd } from './install/toPlanarInstallMd.ts';
+export { templateSectionMd, type TemplateGuide } from './install/templateSectionMd.ts';
 
 export { assertToolFits } from './process/assertToolFits.ts';
 

@@ -1,5 +1,5 @@
 import { defaultPictureDate, sheetParts, sunForPicture, viewAssembly, type PictureSun, type ScenePicture } from '@umbrafab/geometry';
-import { fitPixelBudget, svgHeightMm, svgWidthMm, templateDrawings, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM, MAX_PICTURE_PIXELS, type TemplateDrawingSheets } from '@umbrafab/fabricate';
+import { fitPixelBudget, svgHeightMm, svgWidthMm, templateDrawings, templateTiles, toAssemblySvg, toPngAsync, toTemplatePdf, CALIBRATION_BAR_MM, MAX_PICTURE_PIXELS, type TemplateDrawingSheets, type TemplateGuide } from '@umbrafab/fabricate';
 import { STAND_PART_LABELS } from './standOutputs.ts';
 import { previewSvgText } from './plateOutputs.ts';
 import { perDrawing } from './perDrawing.ts';
@@ -166,15 +166,29 @@ async function pictureOutputs(ctx: BuildContext): Promise<{ files: OutputFile[];
   };
 }
 
-/** template.pdf and the report's `template` section. */
-async function templateOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: TemplateSection }> {
-  const { spec, layout, drawing } = ctx;
+/** What the polar template.pdf draws besides the plate, and its paper options (shared with install.md's guide to its sheets). */
+export function polarTemplateInput({ spec, layout, drawing }: BuildContext) {
   const tOpts = { paper: spec.template.paper, orientation: spec.template.orientation, overlapMm: spec.template.overlap, marginMm: spec.template.margin };
   // The flat parts cut besides the plate (a sheet gnomon, the stand's parts), nominal, each at 1:1 after the tables.
   const parts = sheetParts(layout, drawing, { reliefToolRadiusMm: 0 })
     .filter((p) => p.name !== 'plate')
     .map((p) => ({ label: p.name === 'gnomon' ? 'gnomon fin profile' : `stand ${STAND_PART_LABELS[p.name] ?? p.name}`, part: p }));
   const input = { marks: layout.marks, gnomonHeightMm: layout.gnomon.heightMm, gnomonThicknessMm: layout.gnomon.thicknessMm, title: spec.name, parts };
+  return { input, tOpts };
+}
+
+/** install.md's guide to the polar template.pdf's sheets (the same page plan the PDF is drawn with); null when none is written. */
+export function polarTemplateGuide(ctx: BuildContext): TemplateGuide | null {
+  if (!ctx.spec.template.write) return null;
+  const { input, tOpts } = polarTemplateInput(ctx);
+  const plan = templateDrawings({ drawing: ctx.drawing, ...input }, tOpts);
+  return { paper: templateTiles(ctx.drawing, tOpts).paper, pages: plan.pages, drawings: plan.drawings, tableSheets: plan.tableSheets, tableLists: "each line's distance from the style edge (the gnomon's side) at the line's middle, mm", checkSheet: plan.checkSheet };
+}
+
+/** template.pdf and the report's `template` section. */
+async function templateOutputs(ctx: BuildContext): Promise<{ files: OutputFile[]; report: TemplateSection }> {
+  const { drawing } = ctx;
+  const { input, tOpts } = polarTemplateInput(ctx);
   // Once per drawing and input (every latitude of a batch that shares the plate and parts gets the same template).
   const pdf = await perDrawing(drawing, `template ${JSON.stringify([input, tOpts])}`, () => toTemplatePdf({ drawing, ...input }, tOpts));
   const tiles = templateTiles(drawing, tOpts);

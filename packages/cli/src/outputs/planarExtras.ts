@@ -1,5 +1,5 @@
 import { finSheetPart, plateSheetPart, wallMount, type DialSpec, type PlanarGnomonPart, type PlanarLayout, type PlateDrawing, type SheetPart } from '@umbrafab/geometry';
-import { CALIBRATION_BAR_MM, cutFromParts, partsTemplateTiles, toPartsTemplatePdf, writesCutProgram, type CutProgram, type CuttingReport, type PlanarTemplateGuide, type TemplatePart } from '@umbrafab/fabricate';
+import { CALIBRATION_BAR_MM, cutFromParts, partsTemplateTiles, toPartsTemplatePdf, writesCutProgram, type CutProgram, type CuttingReport, type TemplateGuide, type TemplatePart } from '@umbrafab/fabricate';
 import { utf8 } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 import type { TemplateSection } from './picturesOutputs.ts';
@@ -12,7 +12,7 @@ export interface PlanarExtras {
   /** report.json sections, each present when its file is written */
   readonly report: { readonly template?: PlanarTemplateSection; readonly cutting?: CuttingReport & { readonly otherStock: readonly string[] } } & SheetSections;
   /** what install.md says about template.pdf (absent when it is not written) */
-  readonly templateGuide?: PlanarTemplateGuide;
+  readonly templateGuide?: TemplateGuide;
 }
 
 /** report.json `template` of a planar face: the same section as the polar plate's. */
@@ -70,7 +70,7 @@ async function planarCutProgram(spec: DialSpec, layout: PlanarLayout, drawing: P
  * mount and an equatorial stand's parts at 1:1, each nominal), its report section and install.md's guide
  * to its sheets; null when template.write is false.
  */
-async function planarTemplate(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing, gnomon: PlanarGnomonPart): Promise<{ files: OutputFile[]; report: PlanarTemplateSection; guide: PlanarTemplateGuide } | null> {
+async function planarTemplate(spec: DialSpec, layout: PlanarLayout, drawing: PlateDrawing, gnomon: PlanarGnomonPart): Promise<{ files: OutputFile[]; report: PlanarTemplateSection; guide: TemplateGuide } | null> {
   if (!spec.template.write) return null;
   const nominal = { material: spec.plate.material, reliefToolRadiusMm: 0, chordToleranceMm: spec.cutFiles.chordTolerance };
   const parts: TemplatePart[] = [];
@@ -97,7 +97,7 @@ async function planarTemplate(spec: DialSpec, layout: PlanarLayout, drawing: Pla
     drawings.push({ label: p.label, firstSheet: next, lastSheet: next + n - 1 });
     next += n;
   });
-  const guide: PlanarTemplateGuide = { paper: tiles.plate.paper, pages: tiles.pages, drawings, tableSheets: [plateSheets + 1, tableLast] };
+  const guide: TemplateGuide = { paper: tiles.plate.paper, pages: tiles.pages, drawings, tableSheets: [plateSheets + 1, tableLast], tableLists: "the ends of every line and the hole centres, mm from the plate's lower-left corner" };
   return {
     files: [{ name: 'template.pdf', bytes: pdf }],
     report: {

@@ -1,6 +1,7 @@
 import { calendarLines, equationOfTimeTable, installSheet, meanTimeLines, nodusFootY, timeFaceExtras, type FacePolyline, type InstallSheet, type TimeLayout } from '@umbrafab/geometry';
 import { toInstallMd } from '@umbrafab/fabricate';
 import { utf8, type Producer } from './outputTypes.ts';
+import { polarTemplateGuide } from './picturesOutputs.ts';
 
 /** The report.json sections of sun time and clock time (docs/design.md §3–4). */
 export interface TimeSections {
@@ -48,13 +49,14 @@ const EOT_STEP_DAYS = 7;
  * and `install` sections. The curves themselves reach plate.dxf, preview.svg
  * and the engraving through buildFiles (timeFaceExtras → plateDrawing).
  */
-export const timeOutputs: Producer<TimeSections> = ({ layout }) => {
+export const timeOutputs: Producer<TimeSections> = (ctx) => {
+  const { layout } = ctx;
   const sheet = installSheet(layout);
   const dateLines = calendarLines(layout);
   const mean = meanTimeLines(layout);
   const extras = timeFaceExtras(layout);
   return {
-    files: [{ name: 'install.md', bytes: utf8(toInstallMd(sheet)) }],
+    files: [{ name: 'install.md', bytes: utf8(toInstallMd(sheet, polarTemplateGuide(ctx) ?? undefined)) }],
     report: {
       time: {
         ...layout.time,

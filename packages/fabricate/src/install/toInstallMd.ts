@@ -2,6 +2,7 @@ import type { InstallSheet } from '@umbrafab/geometry';
 import { roundTo } from '../process/roundTo.ts';
 import { escapeMarkdownText as md } from './markdownText.ts';
 import { fastenerSectionMd } from './fastenerSectionMd.ts';
+import { templateSectionMd, type TemplateGuide } from './templateSectionMd.ts';
 
 /** Fixed decimals, rounded through roundTo (no −0). */
 function fx(v: number, decimals: number): string {
@@ -21,13 +22,13 @@ function utcOffset(hours: number): string {
 /**
  * install.md: the installation sheet as CommonMark text (headings, lists and
  * pipe tables, GitHub-flavoured table syntax), from the plain data of
- * `installSheet`. No solar math here; numbers are rounded for reading
+ * `installSheet`, with a guide to template.pdf's sheets when one is written. No solar math here; numbers are rounded for reading
  * (angles 0.1°, lengths 1 mm, times 1 s, E 0.1 min). Free text from the
  * spec (name, place, mark labels) goes through `escapeMarkdownText`; the zone is
  * an IANA name checked by the spec.
  * @example toInstallMd(installSheet(layout)).startsWith('# Installing')
  */
-export function toInstallMd(sheet: InstallSheet): string {
+export function toInstallMd(sheet: InstallSheet, template?: TemplateGuide): string {
   const s = sheet.site;
   const ns = (v: number, pos: string, neg: string) => `${fx(Math.abs(v), 4)}° ${v >= 0 ? pos : neg}`;
   const pole = sheet.hemisphere === 'north' ? 'north' : 'south';
@@ -38,6 +39,7 @@ export function toInstallMd(sheet: InstallSheet): string {
   out.push('## Safety first', '');
   for (const c of sheet.cautions) out.push(`- ${c}`);
   out.push('');
+  if (template) out.push(...templateSectionMd(template));
 
   const a = sheet.assembly;
   out.push(`## Parts and weights (on its ${a.carrier})`, '');

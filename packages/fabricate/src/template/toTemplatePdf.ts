@@ -116,7 +116,10 @@ export interface TemplateDrawingSheets {
  * sheets show the plate and each further part (the offset tables and the
  * check triangle lie between them). Exported for the report and install.md.
  */
-export function templateDrawings(input: Pick<TemplateInput, 'drawing' | 'marks' | 'gnomonThicknessMm' | 'parts'>, options: Partial<TemplateOptions> = {}): { readonly pages: number; readonly drawings: readonly TemplateDrawingSheets[] } {
+export function templateDrawings(
+  input: Pick<TemplateInput, 'drawing' | 'marks' | 'gnomonThicknessMm' | 'parts'>,
+  options: Partial<TemplateOptions> = {},
+): { readonly pages: number; readonly drawings: readonly TemplateDrawingSheets[]; readonly tableSheets: readonly [number, number]; readonly checkSheet: number } {
   const o = { ...TEMPLATE_DEFAULTS, ...options };
   const tiles = templateTiles(input.drawing, o);
   const plateSheets = tiles.columns * tiles.rows;
@@ -128,7 +131,7 @@ export function templateDrawings(input: Pick<TemplateInput, 'drawing' | 'marks' 
     drawings.push({ label: parts[i].label, firstSheet: next, lastSheet: next + t.columns * t.rows - 1 });
     next += t.columns * t.rows;
   });
-  return { pages: next - 1, drawings };
+  return { pages: next - 1, drawings, tableSheets: [plateSheets + 1, plateSheets + tablePages], checkSheet: plateSheets + tablePages + 1 };
 }
 
 /** Each further part's sheet tiling: its own extent plus the border, on the plate's paper and orientation. */
