@@ -3,7 +3,7 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { drawingStrokes, strokeOutlines } from '@umbrafab/geometry';
+import { drawingStrokes, drawnCurvesFromLayout, strokeOutlines } from '@umbrafab/geometry';
 import { buildContext, buildFiles, readSpecFile } from '@umbrafab/cli';
 import { ezdxfDump } from './helpers/ezdxf.ts';
 
@@ -57,9 +57,12 @@ describe('etch outlines of a 60° N waterjet nodus plate (fixtures/specs/waterje
     expect(out.regions).toBe(out.strokeUnionRegions);
   });
 
-  it('keeps the marks readable by umbrafab check --plate: centre-lines on MARK_CENTRE_NO_CUT, off and non-plotting', () => {
+  it('keeps the marks, date lines and mean-time curves readable by umbrafab check --plate: centre-lines on MARK_CENTRE_NO_CUT, off and non-plotting', () => {
     const centres = dump.entities.filter((e) => e.layer === 'MARK_CENTRE_NO_CUT');
-    expect(centres.length).toBe(built.layout.marks.filter((m) => !m.underGnomon).length);
+    // One per engraved mark and one per piece of a date line or curve (the engraved equation-of-time table is not read back).
+    const pieces = drawnCurvesFromLayout(built.layout).reduce((n, c) => n + c.paths.length, 0);
+    expect(pieces).toBeGreaterThan(10);
+    expect(centres.length).toBe(built.layout.marks.filter((m) => !m.underGnomon).length + pieces);
     const layer = dump.layerTable.find((l) => l.name === 'MARK_CENTRE_NO_CUT')!;
     expect(layer.on).toBe(false);
     expect(layer.plot).toBe(0);

@@ -2,31 +2,10 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { moveDxfVertices } from './helpers/moveDxfVertices.ts';
 import { runCli } from './helpers/runCli.ts';
 
 const ROOT = resolve(import.meta.dirname, '..');
-
-/** Move every vertex on the mark layers lying at one of the plate points by (dx, dy); returns the text and how many vertices moved. */
-function moveVertex(dxf: string, points: readonly [number, number][], [dx, dy]: readonly [number, number]): { text: string; moved: number } {
-  const lines = dxf.split('\n');
-  let layer = '';
-  let moved = 0;
-  for (let i = 0; i + 3 < lines.length; i += 2) {
-    const code = lines[i].trim();
-    if (code === '0') layer = '';
-    if (code === '8') layer = lines[i + 1].trim();
-    if ((code === '10' || code === '11') && (layer === 'LINE_SCORE' || layer === 'MARK_CENTRE_NO_CUT')) {
-      const x = Number(lines[i + 1]);
-      const y = Number(lines[i + 3]);
-      if (points.some(([px, py]) => Math.abs(px - x) < 1e-5 && Math.abs(py - y) < 1e-5)) {
-        lines[i + 1] = String(x + dx);
-        lines[i + 3] = String(y + dy);
-        moved++;
-      }
-    }
-  }
-  return { text: lines.join('\n'), moved };
-}
 
 describe('umbrafab check --plate on every planar face type (marks read back from plate.dxf)', () => {
   for (const fixture of ['garden-horizontal', 'wall-declining', 'wall-reclining', 'meridian-east', 'equatorial', 'equatorial-lower']) {
@@ -48,7 +27,7 @@ describe('umbrafab check --plate on every planar face type (marks read back from
       const ends: [number, number][] = [[target.x0Mm + substyleX, target.y0Mm + faceOriginY], [target.x1Mm + substyleX, target.y1Mm + faceOriginY]];
       const len = Math.hypot(ends[1][0] - ends[0][0], ends[1][1] - ends[0][1]);
       const across: [number, number] = [(-(ends[1][1] - ends[0][1]) / len) * 0.5, ((ends[1][0] - ends[0][0]) / len) * 0.5];
-      const edit = moveVertex(dxf, ends, across);
+      const edit = moveDxfVertices(dxf, ends, across);
       expect(edit.moved).toBeGreaterThanOrEqual(2);
       const file = join(mkdtempSync(join(tmpdir(), 'umbrafab-pplate-moved-')), 'plate.dxf');
       writeFileSync(file, edit.text);

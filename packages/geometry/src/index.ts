@@ -78,6 +78,7 @@ export { checkDial, isFaceLit, type MarkCheck, type CheckResult } from './shadow
 export { checkPlanar, type PlanarCheckResult } from './shadow/checkPlanar.ts';
 export { type CurveCheck, type DrawnCurve } from './shadow/curveCheck.ts';
 export { drawnCurvesFromLayout } from './shadow/polarCurveCheck.ts';
+export { curvesFromPlate, type PlateCurves } from './shadow/curvesFromPlate.ts';
 export { planarMarksFromPlate } from './shadow/planarMarksFromPlate.ts';
 
 export type { AssemblyPartName, FaceFrame, PictureItem, PlacedPart } from './assembly/assemblyTypes.ts';

@@ -16,7 +16,7 @@ export const checkCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick; the DXF reader only with --plate.
-    const { checkDial, checkPlanar, checkTableText, countMarks, faceOrientationOf, layoutDial, markCountText, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, planarMarksFromPlate, readRawSpec, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
+    const { checkDial, checkPlanar, checkTableText, countMarks, curvesFromPlate, drawnCurvesFromLayout, faceOrientationOf, layoutDial, markCountText, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, planarMarksFromPlate, readRawSpec, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
     if (args.out !== undefined) assertOutFolder(String(args.out));
     // The spec as written, normalised once (with --year in place of calendar.year): the same path as build.
     const raw = readRawSpec(args.spec) as Record<string, unknown>;
@@ -34,10 +34,15 @@ export const checkCommand: CommandModule = {
       if (args.plate !== undefined) {
         // The marks read back from the drawing, checked against the shadow of the spec's own gnomon.
         const { readPlateDxf } = await import('../readPlateDxf.ts');
-        const found = planarMarksFromPlate(planarLayout, readPlateDxf(String(args.plate)).lines);
-        planar = checkPlanar(planarLayout, { marks: found.marks });
+        const lines = readPlateDxf(String(args.plate)).lines;
+        // The date lines and curves first (the polylines of many points), then the marks from the other lines.
+        const curves = curvesFromPlate(planarLayout.curves, lines, planarLayout.plate);
+        const found = planarMarksFromPlate(planarLayout, lines.filter((l) => !curves.taken.has(l)));
+        planar = checkPlanar(planarLayout, { marks: found.marks, ...(curves.curves ? { curves: curves.curves } : {}) });
         io.out(planarCheckText(planar));
-        if (found.unmatched.length) io.out(`note: ${found.unmatched.length} mark line(s) in ${args.plate} match no hour line of the spec (date lines among them; first at face x ${found.unmatched[0][0].toFixed(2)} mm, y ${found.unmatched[0][1].toFixed(2)} mm); they are not checked`);
+        if (curves.curves === null) io.out(`note: ${args.plate} has no centre-lines of its date lines and curves (etched outlines only); they are checked from the layout`);
+        else if (curves.curves.length) io.out(`note: the ${curves.curves.length} date line(s) and curve(s) checked were read from ${args.plate}`);
+        if (found.unmatched.length) io.out(`note: ${found.unmatched.length} line(s) in ${args.plate} match no hour line, date line or curve of the spec (first at face x ${found.unmatched[0][0].toFixed(2)} mm, y ${found.unmatched[0][1].toFixed(2)} mm); they are not checked`);
       } else {
         planar = checkPlanar(planarLayout);
         io.out(planarCheckText(planar));
@@ -49,7 +54,8 @@ export const checkCommand: CommandModule = {
       }
       if (!planar.pass) {
         const f = planar.failures[0];
-        io.err(f ? `umbrafab check: line ${f.label} ${f.edge} is ${Math.abs(f.errorMm).toFixed(4)} mm off the simulated shadow on ${f.date} (tolerance ${planar.toleranceMm} mm)` : 'umbrafab check: a curve lies beyond its tolerance');
+        const c = planar.curves.find((k) => !k.pass);
+        io.err(f ? `umbrafab check: line ${f.label} ${f.edge} is ${Math.abs(f.errorMm).toFixed(4)} mm off the simulated shadow on ${f.date} (tolerance ${planar.toleranceMm} mm)` : `umbrafab check: ${c ? `curve ${c.label} is ${c.worstMm.toFixed(4)} mm off the nodus shadow on ${c.worstDate ?? '-'}` : 'a curve lies beyond its tolerance'} (tolerance ${planar.curveToleranceMm} mm)`);
         return 1;
       }
       return 0;
@@ -59,9 +65,12 @@ export const checkCommand: CommandModule = {
     if (args.plate !== undefined) {
       const { readPlateDxf } = await import('../readPlateDxf.ts');
       const plate = readPlateDxf(String(args.plate));
-      const found = marksFromPlate(layout, plate.lines);
-      result = checkDial(layout, { drawn: found.drawn, source: 'plate' });
-      if (found.unmatched.length) io.out(`note: ${found.unmatched.length} mark line(s) in ${args.plate} match no mark of the spec (first at face x ${found.unmatched[0][0].toFixed(2)} mm, y ${found.unmatched[0][1].toFixed(2)} mm); they are not checked`);
+      // The date lines and curves first (the polylines of many points), then the marks from the other lines.
+      const curves = curvesFromPlate(drawnCurvesFromLayout(layout), plate.lines, layout.plate);
+      const found = marksFromPlate(layout, plate.lines.filter((l) => !curves.taken.has(l)));
+      result = checkDial(layout, { drawn: found.drawn, source: 'plate', ...(curves.curves ? { curves: curves.curves, curveSource: 'plate' as const } : {}) });
+      if (curves.curves === null) io.out(`note: ${args.plate} has no centre-lines of its date lines and curves (etched outlines only); they are checked from the layout`);
+      if (found.unmatched.length) io.out(`note: ${found.unmatched.length} line(s) in ${args.plate} match no mark, date line or curve of the spec (first at face x ${found.unmatched[0][0].toFixed(2)} mm, y ${found.unmatched[0][1].toFixed(2)} mm); they are not checked`);
     } else {
       result = checkDial(layout);
     }

@@ -78,7 +78,7 @@ export function checkTableText(result: CheckResult): string {
   const curves = result.curves;
   if (curves.length) {
     const wc = curves.reduce((a, c) => (c.worstMm > a.worstMm ? c : a), curves[0]);
-    lines.push(`worst curve: ${tiny(wc.worstMm).replace(/^\+/, '')} mm (${fx(wc.worstS, 3)} s) on ${wc.label}${wc.worstDate ? ` on ${wc.worstDate}` : ''}; ${curves.length} date line(s) and curve(s), tolerance ${fx(result.curveToleranceMm, 3)} mm`);
+    lines.push(`worst curve: ${tiny(wc.worstMm).replace(/^\+/, '')} mm (${fx(wc.worstS, 3)} s) on ${wc.label}${wc.worstDate ? ` on ${wc.worstDate}` : ''}; ${curves.length} date line(s) and curve(s) (${result.curveSource === 'plate' ? 'read from the plate drawing' : 'from the layout'}), tolerance ${fx(result.curveToleranceMm, 3)} mm`);
   }
   if (result.pass) lines.push(`PASS: every lit mark${curves.length ? ', date line and mean-time curve' : ''} lies within the tolerance of the simulated shadow on every day`);
   else {

@@ -41,7 +41,7 @@ describe('check writers', () => {
     const t = checkTableText(ok).split('\n');
     expect(ok.curves.length).toBeGreaterThan(3);
     for (const c of ok.curves) expect(t.some((l) => l.startsWith(c.label) && l.includes(c.worstDate ?? '-'))).toBe(true);
-    expect(t.find((l) => l.startsWith('worst curve:'))).toMatch(/mm \(\d+\.\d{3} s\) on .*; \d+ date line\(s\) and curve\(s\), tolerance 0\.050 mm/);
+    expect(t.find((l) => l.startsWith('worst curve:'))).toMatch(/mm \(\d+\.\d{3} s\) on .*; \d+ date line\(s\) and curve\(s\) \(from the layout\), tolerance 0\.050 mm/);
     expect(t.at(-1)).toMatch(/^PASS: every lit mark, date line and mean-time curve/);
     const tight = checkDial(nodus, { everyDays: 30, toleranceMm: 1e-6 });
     const bad = tight.curves.filter((c) => !c.pass);

@@ -48,7 +48,8 @@ export interface CutDrawingOptions {
  * - CUT_PROFILE: the profiles (options.profiles, nominal or offset);
  * - centre-lines: LINE_SCORE (lines) and TEXT_ENGRAVE (text strokes);
  * - outlines: LINE_ETCH_OUTLINE (every ring of the stroke union) and, for
- *   `umbrafab check --plate`, the marks' centre-lines on MARK_CENTRE_NO_CUT;
+ *   `umbrafab check --plate`, the centre-lines of the marks, date lines and
+ *   mean-time curves (`readBack`) on MARK_CENTRE_NO_CUT;
  * - REFERENCE_NO_CUT: the part's reference lines and the notes.
  * @example cutDrawing(part, { profiles: nominalProfiles(part), strokes: 'centre-lines', notes: [] })
  */
@@ -69,7 +70,7 @@ export function cutDrawing(part: SheetPart, options: CutDrawingOptions): CutDraw
     if (!options.outlines) throw new Error('cutDrawing: strokes "outlines" needs the stroke outlines');
     for (const r of options.outlines.regions) for (const ring of [r.outer, ...r.holes]) out.push({ kind: 'polyline', layer: 'etch', points: ring, closed: true });
     if (options.strokes === 'outlines') {
-      for (const l of lines) if (l.kind !== 'curve') out.push({ kind: 'polyline', layer: 'markCentres', points: l.path.points, closed: l.path.closed });
+      for (const l of lines) if (l.kind !== 'curve' || l.readBack) out.push({ kind: 'polyline', layer: 'markCentres', points: l.path.points, closed: l.path.closed });
     }
   }
   for (const ref of part.reference ?? []) out.push({ kind: 'polyline', layer: 'reference', points: ref.path.points, closed: ref.path.closed });

@@ -26,7 +26,7 @@ export function planarPlateDrawing(layout: PlanarLayout): PlateDrawing {
     path: path([m.a, m.b]),
   }));
   for (const c of layout.curves) {
-    c.paths.forEach((p, i) => lines.push({ label: `${c.label}${c.paths.length > 1 ? ` ${i + 1}` : ''}`, kind: 'curve', widthMm: c.widthMm, path: path(p) }));
+    c.paths.forEach((p, i) => lines.push({ label: `${c.label}${c.paths.length > 1 ? ` ${i + 1}` : ''}`, kind: 'curve', widthMm: c.widthMm, path: path(p), readBack: true }));
   }
   const text = to.text([...layout.numerals, ...layout.title]);
   const t2 = gnomon.thicknessMm / 2;

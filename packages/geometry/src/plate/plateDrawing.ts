@@ -8,6 +8,8 @@ export interface DrawnLine {
   readonly kind: MarkKind | 'curve';
   readonly widthMm: number;
   readonly path: Path;
+  /** set on a date line or mean-time curve: the shadow check reads it back (its centre-line is kept beside etch outlines) */
+  readonly readBack?: true;
 }
 
 export interface DrawnText {

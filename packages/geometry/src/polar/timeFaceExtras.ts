@@ -36,7 +36,7 @@ export function timeFaceExtras(layout: DialLayout): TimeFaceExtras {
   const dateLines = calendarLines(layout);
   const ny = dateLines.length > 0 ? nodusFootY(layout) : 0;
   const onFace = dateLines.map((l) => l.branches.map((b) => b.map(([x, y]): Vec2 => [x, y + ny])));
-  for (const [i, l] of dateLines.entries()) for (const b of onFace[i]) lines.push({ label: `date line ${l.label}`, kind: 'curve', widthMm: width, path: path(b) });
+  for (const [i, l] of dateLines.entries()) for (const b of onFace[i]) lines.push({ label: `date line ${l.label}`, kind: 'curve', widthMm: width, path: path(b), readBack: true });
   const mean = meanTimeLines(layout);
   // A line shared by two dates (e.g. the equinoxes) gets one label on each half of the face.
   const toLabel = dateLines.flatMap((l, i) =>
@@ -51,7 +51,7 @@ export function timeFaceExtras(layout: DialLayout): TimeFaceExtras {
     else unlabelled.push(`${toLabel[i].of} (${toLabel[i].text})`);
   });
 
-  for (const c of mean) for (const p of c.polylines) lines.push({ label: `mean time ${c.clockTime}`, kind: 'curve', widthMm: width, path: path(p) });
+  for (const c of mean) for (const p of c.polylines) lines.push({ label: `mean time ${c.clockTime}`, kind: 'curve', widthMm: width, path: path(p), readBack: true });
 
   const eot = equationOfTimePlate(layout);
   for (const l of eot.lines) lines.push({ label: l.label, kind: 'curve', widthMm: width, path: path(l.points, l.closed) });

@@ -44,8 +44,10 @@ export interface CheckOptions {
   readonly drawn?: readonly DrawnMark[];
   /** where the drawn marks came from, for the report (default 'layout') */
   readonly source?: 'layout' | 'plate';
-  /** the date lines and mean-time curves as drawn (default: the layout's, `drawnCurvesFromLayout`), e.g. one moved on purpose */
+  /** the date lines and mean-time curves as drawn (default: the layout's, `drawnCurvesFromLayout`), e.g. read back from plate.dxf by `curvesFromPlate` */
   readonly curves?: readonly DrawnCurve[];
+  /** where the drawn curves came from, for the report (default 'layout') */
+  readonly curveSource?: 'layout' | 'plate';
 }
 
 export interface Range {
@@ -117,6 +119,8 @@ export interface CheckResult {
   readonly hemisphere: 'north' | 'south';
   readonly reads: 'solar' | 'standard';
   readonly source: 'layout' | 'plate';
+  /** where the date lines and mean-time curves measured came from */
+  readonly curveSource: 'layout' | 'plate';
   readonly toleranceMm: number;
   /** tolerance of the date lines and mean-time curves, mm: the same as the marks' (they are drawn to 0.0005 mm of the shadow) */
   readonly curveToleranceMm: number;
@@ -187,6 +191,7 @@ interface CheckSettings extends ReturnType<typeof checkSampling> {
   readonly drawn: readonly DrawnMark[];
   readonly curves: readonly DrawnCurve[];
   readonly source: 'layout' | 'plate';
+  readonly curveSource: 'layout' | 'plate';
 }
 
 /** Gather the marks and settings: options over the spec's `check:` section; no marks at all is a SpecError. */
@@ -197,7 +202,7 @@ function checkSettings(layout: DialLayout, options: CheckOptions): CheckSettings
   const azimuthErrorDeg = options.azimuthErrorDeg ?? c.azimuthError;
   const drawn = options.drawn ?? drawnMarksFromLayout(layout);
   if (drawn.length === 0) throw new SpecError('marks', 0, 'allowed: at least one mark to check');
-  return { ...sampling, tiltErrorDeg, azimuthErrorDeg, drawn, curves: options.curves ?? drawnCurvesFromLayout(layout), source: options.source ?? 'layout' };
+  return { ...sampling, tiltErrorDeg, azimuthErrorDeg, drawn, curves: options.curves ?? drawnCurvesFromLayout(layout), source: options.source ?? 'layout', curveSource: options.curveSource ?? 'layout' };
 }
 
 /** The gnomon that casts the shadow: its part, the style height h (mm) and its top style edges on each side. */
@@ -393,6 +398,7 @@ function assembleResult(layout: DialLayout, settings: CheckSettings, caster: Cas
     hemisphere: layout.hemisphere,
     reads: layout.time.reads,
     source: settings.source,
+    curveSource: settings.curveSource,
     toleranceMm: settings.toleranceMm,
     curveToleranceMm: settings.toleranceMm,
     stepMinutes: settings.stepMinutes,
