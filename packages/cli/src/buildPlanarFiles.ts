@@ -9,7 +9,6 @@ import {
   standSolid,
   wallMount,
   WALL_ANCHOR_HOLE_MM,
-  meshVolumeMm3,
   validateMesh,
   plateSheetPart,
   finSheetPart,
@@ -22,6 +21,7 @@ import { assertToolFits, engraveFromSpec, stlHeader, toPlanarInstallMd, toPng, t
 import { cutPartFiles } from './outputs/cutParts.ts';
 import { planarStandFiles } from './outputs/planarStandOutputs.ts';
 import { utf8 } from './outputs/outputTypes.ts';
+import { stlFigures } from './outputs/meshFigures.ts';
 import { planarExtraOutputs } from './outputs/planarExtras.ts';
 import { planarPictureFiles } from './outputs/planarPictures.ts';
 import type { PlanarReport, WallMountSection } from './outputs/planarReport.ts';
@@ -147,7 +147,6 @@ async function wallMountFiles(spec: DialSpec, layout: PlanarLayout, drawing: Pla
   const t = m.part.thicknessMm;
   const mesh = await standSolid({ parts: [m.part], instances: [{ id: 'mount', part: 'mount', placement: { origin: [0, 0, t / 2], e1: [1, 0, 0], e2: [0, 1, 0], normal: [0, 0, 1] } }] });
   files.push({ name: 'mount.stl', bytes: toStl(mesh, { header: stlHeader([`umbrafab wall mount for a ${layout.faceType} face, t=${t} mm, ${m.anchors.length} anchor holes`, spec.name]) }) });
-  const b = meshBounds(mesh);
   const [W, L] = [m.part.outer.points[2][0], m.part.outer.points[2][1]];
   return {
     files,
@@ -162,7 +161,7 @@ async function wallMountFiles(spec: DialSpec, layout: PlanarLayout, drawing: Pla
       threadEngagementMm: m.threadEngagementMm,
       anchors: m.anchors.map(([x, y], i) => ({ index: i + 1, xMm: x, yMm: y, diameterMm: WALL_ANCHOR_HOLE_MM })),
       fasteners: m.fasteners,
-      files: { ...(cut ? { dxf: cut } : {}), stl: { volumeMm3: meshVolumeMm3(mesh), facets: mesh.triangles.length, bbox: { minMm: b.min, maxMm: b.max } } },
+      files: { ...(cut ? { dxf: cut } : {}), stl: stlFigures(mesh) },
     },
   };
 }

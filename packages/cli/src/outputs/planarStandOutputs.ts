@@ -2,8 +2,6 @@ import {
   equatorialStand,
   equatorialStandApplies,
   mapMesh,
-  meshBounds,
-  meshVolumeMm3,
   pieceRows,
   PRINT_FUSE_MM,
   sheetPartAreaMm2,
@@ -20,7 +18,7 @@ import { assertToolFits, piecesDrawing, stlHeader, toDxf, toStl } from '@umbrafa
 import { STAND_PART_LABELS } from './standOutputs.ts';
 import { utf8 } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
-import type { MeshFigures } from './meshFigures.ts';
+import { stlFigures, type MeshFigures } from './meshFigures.ts';
 
 /** report.json `stand` of an equatorial face: the stand that holds the plate square to the Earth's axis and the rod on it. */
 export interface EquatorialStandSection {
@@ -136,10 +134,9 @@ export async function planarStandFiles(spec: DialSpec, layout: PlanarLayout): Pr
     const mesh = print
       ? mapMesh(await standUnionSolid(equatorialStand(layout, { clearanceMm: -PRINT_FUSE_MM, reliefToolRadiusMm: 0 })), ([x, y, z]) => [x, y, z + PRINT_FUSE_MM])
       : await standSolid(stand);
-    const b = meshBounds(mesh);
     const shells = print ? 1 : stand.instances.length;
     files.push({ name: 'stand.stl', bytes: toStl(mesh, { header: stlHeader([`umbrafab equatorial stand ${latText}, x east y north z up, ${print ? 'one printed solid' : `${shells} parts as assembled`}`, spec.name]) }) });
-    out.stl = { volumeMm3: meshVolumeMm3(mesh), facets: mesh.triangles.length, shells, bbox: { minMm: b.min, maxMm: b.max } };
+    out.stl = stlFigures(mesh, shells);
   }
   const tiltDeg = (Math.acos(Math.min(1, Math.abs(stand.plate.normal[2]))) * 180) / Math.PI;
   return {

@@ -1,8 +1,6 @@
 import {
   fastenerTable,
   flatStand,
-  meshBounds,
-  meshVolumeMm3,
   mountingFixings,
   partsPlan,
   pieceRows,
@@ -13,6 +11,7 @@ import {
   type SizedStand,
 } from '@umbrafab/geometry';
 import { piecesDrawing, stlHeader, toDxf, toStl } from '@umbrafab/fabricate';
+import { stlFigures } from './meshFigures.ts';
 import { utf8, type Producer } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 
@@ -162,9 +161,8 @@ export const standOutputs: Producer<StandSections> = async ({ spec, layout }) =>
   }
   if (wantStl) {
     const mesh = await standSolid(stand);
-    const b = meshBounds(mesh);
     files.push({ name: 'stand.stl', bytes: toStl(mesh, { header: stlHeader([`umbrafab stand ${latText}, +y to ${pole}, ${stand.instances.length} parts as assembled`, spec.name]) }) });
-    standFiles.stl = { volumeMm3: meshVolumeMm3(mesh), facets: mesh.triangles.length, shells: stand.instances.length, bbox: { minMm: b.min, maxMm: b.max } };
+    standFiles.stl = stlFigures(mesh, stand.instances.length);
   }
   return { files, report: { stand: { ...standReport(stand), risesToward: pole, files: standFiles }, fixings, fasteners: fastenerTable(layout, stand) } };
 };
