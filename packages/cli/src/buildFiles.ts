@@ -1,9 +1,10 @@
 import { faceOrientationOf, layoutDial, plateDrawing, timeFaceExtras, type DialLayout, type DialSpec, type LayoutOptions } from '@umbrafab/geometry';
 import { buildPlanarFiles, type PlanarBuildResult } from './buildPlanarFiles.ts';
 import { toReportJson } from '@umbrafab/fabricate';
-import { PRODUCERS, START_ORDER } from './outputs/index.ts';
+import { PRODUCERS, START_ORDER, START_ORDER_ENGRAVING_ON_WORKER } from './outputs/index.ts';
 import { utf8, type BuildContext, type ProducerResult } from './outputs/outputTypes.ts';
 import type { PolarReport } from './outputs/report.ts';
+import type { EngraveWorker } from './engraveOnWorker.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
 /** Everything one build produces, in memory (no I/O): the CLI writes it, other front ends serve it. */
@@ -27,12 +28,13 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
   const files: OutputFile[] = [];
   const sections: Partial<PolarReport> = {};
   const notes: string[] = [...layout.notes];
-  // Producers whose work runs mostly on worker threads (PNG rendering) start
-  // first, so that their threads overlap the others' work on this one; the
+  // Producers whose work runs mostly on worker threads (the engraving on
+  // ctx.engraveWorker, PNG rendering) start first, so that their threads
+  // overlap the others' work on this one; the
   // results are still taken in PRODUCERS order, and the first failure in that
   // order is the one reported, so output and messages stay deterministic.
   const started: Promise<ProducerResult>[] = new Array(PRODUCERS.length);
-  for (const i of START_ORDER) {
+  for (const i of ctx.engraveWorker ? START_ORDER_ENGRAVING_ON_WORKER : START_ORDER) {
     try {
       started[i] = Promise.resolve(PRODUCERS[i](ctx));
     } catch (e) {
@@ -62,10 +64,11 @@ export async function buildFiles(spec: DialSpec, ctx: BuildContext = buildContex
 /**
  * `umbrafab build` for any face type: the polar plate through the producers
  * (`buildFiles`), a horizontal, wall, meridian or equatorial face through
- * `buildPlanarFiles` (spec `face.type`).
+ * `buildPlanarFiles` (spec `face.type`). `engraveWorker` (engraveOnWorker)
+ * makes the engraving programs on a worker thread; the files are the same.
  */
-export async function buildAnyFiles(spec: DialSpec): Promise<BuildResult | PlanarBuildResult> {
-  return faceOrientationOf(spec) ? buildPlanarFiles(spec, GENERATOR) : buildFiles(spec);
+export async function buildAnyFiles(spec: DialSpec, engraveWorker?: EngraveWorker): Promise<BuildResult | PlanarBuildResult> {
+  return faceOrientationOf(spec) ? buildPlanarFiles(spec, GENERATOR, engraveWorker) : buildFiles(spec, { ...buildContext(spec), engraveWorker });
 }
 
 /** The geometry every producer reads, computed once per spec (the local page draws its views from it before the full build). */

@@ -17,7 +17,7 @@ import {
   type PlanarLayout,
   type PlateDrawing,
 } from '@umbrafab/geometry';
-import { assertToolFits, engraveFromSpec, stlHeader, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
+import { assertToolFits, engraveFromSpec, engraveProgramsFor, stlHeader, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
 import { cutPartFiles } from './outputs/cutParts.ts';
 import { planarStandFiles } from './outputs/planarStandOutputs.ts';
 import { utf8 } from './outputs/outputTypes.ts';
@@ -26,6 +26,7 @@ import { planarExtraOutputs } from './outputs/planarExtras.ts';
 import { planarPictureFiles } from './outputs/planarPictures.ts';
 import type { PlanarReport, WallMountSection } from './outputs/planarReport.ts';
 import { planarPreviewSvgOptions } from './planarViews.ts';
+import type { EngraveWorker } from './engraveOnWorker.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
 /** What a planar build produces, in memory (the same shape as the polar `BuildResult`). */
@@ -42,11 +43,17 @@ export interface PlanarBuildResult {
  * programs read the one `PlateDrawing`); the gnomon (a fin as gnomon.dxf
  * for sheet work and gnomon.stl for printing, or an equatorial rod as
  * gnomon.stl); install.md; report.json. No wedge: these faces mount flat
- * on their wall, pillar or stand. Byte-identical run to run.
+ * on their wall, pillar or stand. Byte-identical run to run. With
+ * `engraveWorker` the engraving programs are made on that thread meanwhile.
  */
-export async function buildPlanarFiles(spec: DialSpec, generator: string): Promise<PlanarBuildResult> {
+export async function buildPlanarFiles(spec: DialSpec, generator: string, engraveWorker?: EngraveWorker): Promise<PlanarBuildResult> {
   const layout = layoutPlanar(spec);
   const drawing = planarPlateDrawing(layout);
+  // Started now, taken in its place below (an earlier step's failure is still the one reported).
+  const engraves = engraveProgramsFor(spec.engrave.programs, spec.process.method).length > 0;
+  if (!engraves) engraveWorker?.close();
+  const onWorker = engraves ? engraveWorker?.engrave(spec, drawing, engraveFromSpec) : undefined;
+  onWorker?.catch(() => undefined);
   const files: OutputFile[] = [];
   const part = planarGnomonSolid(layout);
   // The flat parts as cut (plate.dxf, gnomon.dxf): tool-fit check on the nominal parts, then relief for the tool.
@@ -64,7 +71,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string): Promi
   if (spec.pictures.write) files.push({ name: 'preview.png', bytes: toPng(preview, { pxPerMm: spec.pictures.pxPerMm }) });
   const pictures = spec.pictures.write ? await planarPictureFiles(spec, layout, drawing) : { files: [], notes: [] };
   files.push(...pictures.files);
-  const engraving = await engraveFromSpec(spec, drawing);
+  const engraving = await (onWorker ?? engraveFromSpec(spec, drawing));
   files.push(...engraving.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })));
 
   const b = meshBounds(part.mesh);

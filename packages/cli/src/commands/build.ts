@@ -12,11 +12,21 @@ export const buildCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
+    // The engraving worker first: it loads its code while this thread loads its own and reads the spec.
+    const { engraveOnWorker } = await import('../engraveOnWorker.ts');
+    const engraveWorker = engraveOnWorker();
     const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }, { countMarks, markCountText }] = await Promise.all([import('../buildFiles.ts'), import('../readSpec.ts'), import('../writeFilesAtomic.ts'), import('@umbrafab/geometry')]);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
-    assertOutFolder(outDir);
-    const spec = readSpecFile(args.spec);
-    const result = await buildAnyFiles(spec);
+    const { spec, result } = await (async () => {
+      try {
+        assertOutFolder(outDir);
+        const read = readSpecFile(args.spec);
+        engraveWorker?.prepare(read);
+        return { spec: read, result: await buildAnyFiles(read, engraveWorker) };
+      } finally {
+        engraveWorker?.close(); // its work is done, or not needed after a refusal
+      }
+    })();
     const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
     if (recovered) io.out(`note: ${outDir}: ${recovered}`);
     const p = result.layout.plate;

@@ -1,4 +1,4 @@
-import { engravingPlanKey, planEngraving, writeEngraving, type EngravingReport } from '@umbrafab/fabricate';
+import { engraveProgramsFor, engravingPlanKey, planEngraving, writeEngraving, type EngravingReport } from '@umbrafab/fabricate';
 import { utf8, type Producer } from './outputTypes.ts';
 import { perDrawing } from './perDrawing.ts';
 
@@ -8,16 +8,19 @@ import { perDrawing } from './perDrawing.ts';
  * chooses) and the report's `engraving` section (depths, passes, time
  * estimate, rapid travel before and after ordering with its lower bound).
  * The toolpaths are planned once per drawing and engraving settings
- * (perDrawing); each spec writes only its own header over them.
+ * (perDrawing); each spec writes only its own header over them. With the
+ * build's engraving worker (ctx.engraveWorker), the whole of it runs there.
  */
 /** The report.json section of the engraving programs. */
 export interface EngraveSections {
   readonly engraving: EngravingReport;
 }
 
-export const engraveOutputs: Producer<EngraveSections> = async ({ spec, drawing }) => {
-  const plan = await perDrawing(drawing, `engrave ${engravingPlanKey(spec)}`, () => planEngraving(spec, drawing));
-  const r = writeEngraving(plan, spec);
+export const engraveOutputs: Producer<EngraveSections> = async ({ spec, drawing, engraveWorker }) => {
+  const inThread = async () => writeEngraving(await perDrawing(drawing, `engrave ${engravingPlanKey(spec)}`, () => planEngraving(spec, drawing)), spec);
+  const onWorker = engraveWorker && engraveProgramsFor(spec.engrave.programs, spec.process.method).length > 0;
+  if (!onWorker) engraveWorker?.close();
+  const r = onWorker ? await engraveWorker.engrave(spec, drawing, inThread) : await inThread();
   return {
     files: r.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })),
     report: { engraving: r.report },

@@ -17,3 +17,6 @@ export const PRODUCERS: readonly Producer[] = [plateOutputs, partsOutputs, stand
 
 /** Indices of PRODUCERS in the order they are started: the pictures (PNGs render on worker threads) first. */
 export const START_ORDER: readonly number[] = [PRODUCERS.indexOf(picturesOutputs), ...PRODUCERS.map((_, i) => i).filter((i) => PRODUCERS[i] !== picturesOutputs)];
+
+/** START_ORDER with the engraving first, for a build with an engraving worker: its producer only hands the job over, and the worker's part is the longest. */
+export const START_ORDER_ENGRAVING_ON_WORKER: readonly number[] = [PRODUCERS.indexOf(engraveOutputs), ...START_ORDER.filter((i) => PRODUCERS[i] !== engraveOutputs)];

@@ -1,4 +1,5 @@
 import type { DialLayout, DialSpec, PlateDrawing } from '@umbrafab/geometry';
+import type { EngraveWorker } from '../engraveOnWorker.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 
 /** What every producer can read: the spec, its layout and the plate drawing (computed once). */
@@ -6,6 +7,8 @@ export interface BuildContext {
   readonly spec: DialSpec;
   readonly layout: DialLayout;
   readonly drawing: PlateDrawing;
+  /** `umbrafab build`'s worker thread for the engraving programs (engraveOnWorker); without it they are made in this thread */
+  readonly engraveWorker?: EngraveWorker;
 }
 
 /**
