@@ -97,27 +97,21 @@ export function rapidTravelMm(paths: readonly OrderablePath[], visits: readonly 
   return sum;
 }
 
-/** The larger of the spanning-tree and incoming-rapid bounds (see the file comment). */
+/**
+ * The larger of the spanning-tree and incoming-rapid bounds (see the file
+ * comment), in one pass of Prim's algorithm over the complete graph of nodes
+ * {start, path 1, …, path n}, with no weight matrix: when a node joins the
+ * tree, its weight to every node outside is computed once and lowers that
+ * node's key (the tree) and both nodes' least weight (the incoming rapids).
+ * Every pair is met exactly once (when the first of the two joins), so each
+ * node's least weight is its least over all others, as a full scan gives;
+ * O(n²) time, O(n) memory.
+ */
 export function travelLowerBoundMm(paths: readonly OrderablePath[], start: Vec2 = [0, 0]): number {
   const n = paths.length;
   if (n === 0) return 0;
   const ends: (readonly Vec2[])[] = [[start], ...paths.map(endsOf)];
-  // Node-to-node weights (the shortest distance between any of their ends),
-  // computed once into a flat matrix: both bounds read each weight often.
-  const W = nodeWeights(ends);
-  const mst = spanningTreeMm(W, n + 1);
-  let incoming = 0;
-  for (let i = 1; i <= n; i += 1) {
-    let best = Infinity;
-    for (let j = 0; j <= n; j += 1) if (j !== i) best = Math.min(best, W[i * (n + 1) + j]);
-    incoming += best;
-  }
-  return Math.max(mst, incoming);
-}
-
-/** The (m × m) matrix of least distances between any end of node i and any end of node j (each node has one or two ends). */
-function nodeWeights(ends: readonly (readonly Vec2[])[]): Float64Array {
-  const m = ends.length;
+  const m = n + 1;
   const ax = new Float64Array(m);
   const ay = new Float64Array(m);
   const bx = new Float64Array(m);
@@ -130,28 +124,20 @@ function nodeWeights(ends: readonly (readonly Vec2[])[]): Float64Array {
     bx[i] = e[e.length - 1][0];
     by[i] = e[e.length - 1][1];
   });
-  const W = new Float64Array(m * m);
-  for (let i = 0; i < m; i += 1) {
-    for (let j = i + 1; j < m; j += 1) {
-      // The root of the least squared sum is the least root (the root is monotone): one root per pair.
-      let best = (ax[i] - ax[j]) ** 2 + (ay[i] - ay[j]) ** 2;
-      if (two[j]) best = Math.min(best, (ax[i] - bx[j]) ** 2 + (ay[i] - by[j]) ** 2);
-      if (two[i]) {
-        best = Math.min(best, (bx[i] - ax[j]) ** 2 + (by[i] - ay[j]) ** 2);
-        if (two[j]) best = Math.min(best, (bx[i] - bx[j]) ** 2 + (by[i] - by[j]) ** 2);
-      }
-      const w = Math.sqrt(best);
-      W[i * m + j] = w;
-      W[j * m + i] = w;
+  /** The least distance between any end of node i and any end of node j (the same for (j, i): the same four squares). */
+  const weight = (i: number, j: number): number => {
+    // The root of the least squared sum is the least root (the root is monotone): one root per pair.
+    let best = (ax[i] - ax[j]) ** 2 + (ay[i] - ay[j]) ** 2;
+    if (two[j]) best = Math.min(best, (ax[i] - bx[j]) ** 2 + (ay[i] - by[j]) ** 2);
+    if (two[i]) {
+      best = Math.min(best, (bx[i] - ax[j]) ** 2 + (by[i] - ay[j]) ** 2);
+      if (two[j]) best = Math.min(best, (bx[i] - bx[j]) ** 2 + (by[i] - by[j]) ** 2);
     }
-  }
-  return W;
-}
-
-/** Prim's algorithm over the m nodes of the weight matrix W from node 0: the minimum spanning tree's weight. */
-function spanningTreeMm(W: Float64Array, m: number): number {
+    return Math.sqrt(best);
+  };
   const inTree = new Uint8Array(m);
   const key = new Float64Array(m).fill(Infinity);
+  const least = new Float64Array(m).fill(Infinity);
   key[0] = 0;
   let mst = 0;
   for (let step = 0; step < m; step += 1) {
@@ -159,10 +145,17 @@ function spanningTreeMm(W: Float64Array, m: number): number {
     for (let v = 0; v < m; v += 1) if (!inTree[v] && (u < 0 || key[v] < key[u])) u = v;
     inTree[u] = 1;
     mst += key[u];
-    const row = u * m;
-    for (let v = 0; v < m; v += 1) if (!inTree[v]) key[v] = Math.min(key[v], W[row + v]);
+    for (let v = 0; v < m; v += 1) {
+      if (inTree[v]) continue;
+      const w = weight(u, v);
+      if (w < key[v]) key[v] = w;
+      if (w < least[v]) least[v] = w;
+      if (w < least[u]) least[u] = w;
+    }
   }
-  return mst;
+  let incoming = 0;
+  for (let i = 1; i <= n; i += 1) incoming += least[i];
+  return Math.max(mst, incoming);
 }
 
 /** Below this many paths left, the nearest-neighbour step scans them all. */
