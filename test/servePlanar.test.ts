@@ -36,7 +36,7 @@ describe('serve: a declining wall face (fixtures/planar/wall-declining.yaml)', (
     expect(byKey.get('face.wallDeclination')).toMatchObject({ kind: 'number', unit: '°', min: -180, max: 180, default: 0 });
     expect(byKey.get('face.reclination')).toMatchObject({ kind: 'number', min: -75, max: 75 });
     expect(byKey.get('face.facing')).toMatchObject({ kind: 'choice', choices: ['east', 'west'] });
-    expect(byKey.get('face.side')).toMatchObject({ kind: 'choice', choices: ['upper', 'lower'] });
+    expect(byKey.get('face.side')).toMatchObject({ kind: 'choice', choices: ['upper', 'lower', 'both'] });
     expect(setup.values['face.type']).toBe('vertical');
     expect(setup.values['face.wallDeclination']).toBe(24.5);
   });

@@ -16,8 +16,9 @@ import {
   type DialSpec,
   type PlanarLayout,
   type PlateDrawing,
+  LOWER_FACE_STAND_NOTE,
 } from '@umbrafab/geometry';
-import { assertToolFits, engraveFromSpec, engraveProgramsFor, stlHeader, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg } from '@umbrafab/fabricate';
+import { assertToolFits, engraveFromSpec, engraveProgramsFor, stlHeader, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg, twoFaceEngraving } from '@umbrafab/fabricate';
 import { cutPartFiles } from './outputs/cutParts.ts';
 import { planarStandFiles } from './outputs/planarStandOutputs.ts';
 import { utf8 } from './outputs/outputTypes.ts';
@@ -52,7 +53,9 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string, engrav
   // Started now, taken in its place below (an earlier step's failure is still the one reported).
   const engraves = engraveProgramsFor(spec.engrave.programs, spec.process.method).length > 0;
   if (!engraves) engraveWorker?.close();
-  const onWorker = engraves ? engraveWorker?.engrave(spec, drawing, engraveFromSpec) : undefined;
+  // A plate engraved on both faces: one program set per side, the turn between them named in each header (side 1 on the worker, side 2 here).
+  const sides = twoFaceEngraving(drawing);
+  const onWorker = engraves ? engraveWorker?.engrave(spec, drawing, engraveFromSpec, sides?.upper) : undefined;
   onWorker?.catch(() => undefined);
   const files: OutputFile[] = [];
   const part = planarGnomonSolid(layout);
@@ -71,8 +74,10 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string, engrav
   if (spec.pictures.write) files.push({ name: 'preview.png', bytes: toPng(preview, { pxPerMm: spec.pictures.pxPerMm }) });
   const pictures = spec.pictures.write ? await planarPictureFiles(spec, layout, drawing) : { files: [], notes: [] };
   files.push(...pictures.files);
-  const engraving = await (onWorker ?? engraveFromSpec(spec, drawing));
+  const engraving = await (onWorker ?? engraveFromSpec(spec, drawing, sides?.upper));
   files.push(...engraving.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })));
+  const lowerEngraving = sides ? await engraveFromSpec(spec, sides.lowerDrawing, sides.lower) : undefined;
+  if (lowerEngraving) files.push(...lowerEngraving.files.map((f) => ({ name: f.name, bytes: utf8(f.text) })));
 
   const b = meshBounds(part.mesh);
   // Laid flat for printing: the fin on its side (x → z), the rod on its end; +z up, min corner at the origin.
@@ -103,9 +108,10 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string, engrav
       normalEnu: layout.face.normal,
     },
     hemisphere: layout.hemisphere,
-    marks: layout.marks.map((m) => ({ label: m.label, kind: m.kind, hourAngleDeg: m.hourAngleDeg, edge: m.edge, x0Mm: m.a[0], y0Mm: m.a[1], x1Mm: m.b[0], y1Mm: m.b[1], widthMm: m.widthMm, ...(m.underGnomon ? { underGnomon: true } : {}) })),
-    leftOut: layout.leftOut,
-    curves: layout.curves.map((c) => ({ label: c.label, kind: c.kind, pieces: c.paths.length })),
+    ...faceMarksSection(layout),
+    ...(layout.lowerFace && lowerEngraving && drawing.lowerFace
+      ? { lowerFace: { ...faceMarksSection(layout.lowerFace), normalEnu: layout.lowerFace.face.normal, flipAxisXMm: drawing.lowerFace.flipAxisX, engraving: lowerEngraving.report } }
+      : {}),
     plate: {
       widthMm: layout.plate.widthMm,
       lengthMm: layout.plate.lengthMm,
@@ -126,11 +132,20 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string, engrav
     ...extras.report,
     time: layout.time,
     engraving: engraving.report,
-    notes: [...layout.notes, ...pictures.notes],
+    notes: [...layout.notes, ...(layout.lowerFace && stand.report ? [LOWER_FACE_STAND_NOTE] : []), ...pictures.notes],
     files: names,
   };
   files.push({ name: 'report.json', bytes: utf8(toReportJson(report)) });
   return { layout, drawing, files, report };
+}
+
+/** A face's marks, the hours it leaves out and its curves, as report.json lists them. */
+function faceMarksSection(layout: PlanarLayout): Pick<PlanarReport, 'marks' | 'leftOut' | 'curves'> {
+  return {
+    marks: layout.marks.map((m) => ({ label: m.label, kind: m.kind, hourAngleDeg: m.hourAngleDeg, edge: m.edge, x0Mm: m.a[0], y0Mm: m.a[1], x1Mm: m.b[0], y1Mm: m.b[1], widthMm: m.widthMm, ...(m.underGnomon ? { underGnomon: true as const } : {}) })),
+    leftOut: layout.leftOut,
+    curves: layout.curves.map((c) => ({ label: c.label, kind: c.kind, pieces: c.paths.length })),
+  };
 }
 
 /**

@@ -14,7 +14,8 @@ export { resolveEngraveSettings, MATERIAL_NAMES, MATERIAL_PRESETS } from './engr
 export { vbitDepthMm } from './engrave/vbitDepth.ts';
 export { engraveProgramsFor } from './engrave/engravePrograms.ts';
 export { engraveSettingsFromSpec } from './engrave/engraveSettingsFromSpec.ts';
-export { engravingPlanKey, planEngraving, writeEngraving, engraveFromSpec, type EngravingReport, type SpecEngraving } from './engrave/engraveFromSpec.ts';
+export { engravingPlanKey, planEngraving, writeEngraving, engraveFromSpec, engraveFileName, type EngraveFace, type EngravingReport, type SpecEngraving } from './engrave/engraveFromSpec.ts';
+export { twoFaceEngraving, type TwoFaceEngraving } from './engrave/twoFaceEngraving.ts';
 export { clipToPlate } from './engrave/clipToPlate.ts';
 export { cutFromParts, cutFromSpec, writesCutProgram, type CutProgram, type CuttingReport } from './engrave/cutFromSpec.ts';
 
@@ -60,4 +61,4 @@ export { templateSectionMd, type TemplateGuide } from './install/templateSection
 
 export { assertToolFits } from './process/assertToolFits.ts';
 
-export { resolveStrokeMode, cutFileBase, partCutFiles, formatMm, type PartCutReport } from './cut/partCutFiles.ts';
+export { resolveStrokeMode, cutFileBase, partCutFiles, formatMm, lowerFaceNote, type PartCutReport } from './cut/partCutFiles.ts';

@@ -17,7 +17,7 @@ export { markOffsetEastMm, eastToFaceX } from './polar/markOffset.ts';
 export { layoutDial, type TimeLayout, type DialLayout, type LayoutOptions } from './polar/layoutDial.ts';
 export { countMarks, markCountText } from './polar/markCount.ts';
 
-export { plateDrawing, type PlateDrawing } from './plate/plateDrawing.ts';
+export { plateDrawing, type DrawnLine, type DrawnText, type LowerFaceDrawing, type PlateDrawing } from './plate/plateDrawing.ts';
 
 export { manifoldEngine } from './parts/manifoldEngine.ts';
 export { shoelaceArea } from './parts/ring2d.ts';
@@ -80,6 +80,7 @@ export { type CurveCheck, type DrawnCurve } from './shadow/curveCheck.ts';
 export { drawnCurvesFromLayout } from './shadow/polarCurveCheck.ts';
 export { curvesFromPlate, type PlateCurves } from './shadow/curvesFromPlate.ts';
 export { planarMarksFromPlate } from './shadow/planarMarksFromPlate.ts';
+export { lowerFacePlateLines } from './shadow/plateLine.ts';
 
 export type { AssemblyPartName, FaceFrame, PictureItem, PlacedPart } from './assembly/assemblyTypes.ts';
 export { placeAssembly, faceToWorld } from './assembly/placeAssembly.ts';
@@ -104,7 +105,7 @@ export type { FinEdge } from './planar/planarTypes.ts';
 export type { FaceType } from './spec/sections/faceSection.ts';
 export { planarPlateDrawing } from './planar/planarPlateDrawing.ts';
 export { planarGnomonSolid, type PlanarGnomonPart } from './planar/planarGnomonSolid.ts';
-export { planarInstallSheet, type PlanarInstallSheet } from './planar/planarInstallSheet.ts';
+export { LOWER_FACE_STAND_NOTE, planarInstallSheet, type PlanarInstallSheet } from './planar/planarInstallSheet.ts';
 export { pillarFixing, PILLAR_LEVELLING_GAP_MM, type PillarFixing } from './planar/pillarFixing.ts';
 export { wallDeclinationFromShadow, type ShadowReading } from './planar/wallDeclinationFromShadow.ts';
 export { MIN_THREADS_ENGAGED, tappedScrewLength, wallMount, WALL_MOUNT_RIM_MM, WALL_ANCHOR_HOLE_MM, type MountDialFixing, type WallMountFixing } from './planar/wallMount.ts';

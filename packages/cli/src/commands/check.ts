@@ -16,7 +16,7 @@ export const checkCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick; the DXF reader only with --plate.
-    const { checkDial, checkPlanar, checkTableText, countMarks, curvesFromPlate, drawnCurvesFromLayout, faceOrientationOf, layoutDial, markCountText, layoutPlanar, marksFromPlate, parseSpec, planarCheckText, planarMarksFromPlate, readRawSpec, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
+    const { checkDial, checkPlanar, checkTableText, countMarks, curvesFromPlate, drawnCurvesFromLayout, faceOrientationOf, layoutDial, markCountText, layoutPlanar, lowerFacePlateLines, marksFromPlate, parseSpec, planarCheckText, planarMarksFromPlate, readRawSpec, toCheckJson, toCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
     if (args.out !== undefined) assertOutFolder(String(args.out));
     // The spec as written, normalised once (with --year in place of calendar.year): the same path as build.
     const raw = readRawSpec(args.spec) as Record<string, unknown>;
@@ -29,33 +29,37 @@ export const checkCommand: CommandModule = {
     } else spec = parseSpec(raw);
     if (faceOrientationOf(spec)) {
       // Horizontal, wall, meridian and equatorial faces: the planar check on their own gnomon.
+      // An equatorial plate engraved on both faces: each face checked over the whole year (each is lit about half of it).
       const planarLayout = layoutPlanar(spec);
-      let planar;
-      if (args.plate !== undefined) {
-        // The marks read back from the drawing, checked against the shadow of the spec's own gnomon.
-        const { readPlateDxf } = await import('../readPlateDxf.ts');
-        const lines = readPlateDxf(String(args.plate)).lines;
+      const faces = [planarLayout, ...(planarLayout.lowerFace ? [planarLayout.lowerFace] : [])];
+      const plateLines = args.plate !== undefined ? (await import('../readPlateDxf.ts')).readPlateDxf(String(args.plate)).lines : undefined;
+      const results = faces.map((face, k) => {
+        if (!plateLines) return checkPlanar(face);
+        // The marks read back from the drawing (the lower face from its _LOWER layers), checked against the shadow of the spec's own gnomon.
+        const lines = k === 0 ? plateLines : lowerFacePlateLines(plateLines);
+        const which = k === 0 ? '' : ' (lower face)';
         // The date lines and curves first (the polylines of many points), then the marks from the other lines.
-        const curves = curvesFromPlate(planarLayout.curves, lines, planarLayout.plate);
-        const found = planarMarksFromPlate(planarLayout, lines.filter((l) => !curves.taken.has(l)));
-        planar = checkPlanar(planarLayout, { marks: found.marks, ...(curves.curves ? { curves: curves.curves } : {}) });
-        io.out(planarCheckText(planar));
-        if (curves.curves === null) io.out(`note: ${args.plate} has no centre-lines of its date lines and curves (etched outlines only); they are checked from the layout`);
-        else if (curves.curves.length) io.out(`note: the ${curves.curves.length} date line(s) and curve(s) checked were read from ${args.plate}`);
-        if (found.unmatched.length) io.out(`note: ${found.unmatched.length} line(s) in ${args.plate} match no hour line, date line or curve of the spec (first at face x ${found.unmatched[0][0].toFixed(2)} mm, y ${found.unmatched[0][1].toFixed(2)} mm); they are not checked`);
-      } else {
-        planar = checkPlanar(planarLayout);
-        io.out(planarCheckText(planar));
-      }
+        const curves = curvesFromPlate(face.curves, lines, face.plate);
+        const found = planarMarksFromPlate(face, lines.filter((l) => !curves.taken.has(l)));
+        const r = checkPlanar(face, { marks: found.marks, ...(curves.curves ? { curves: curves.curves } : {}) });
+        if (curves.curves === null) io.out(`note: ${args.plate}${which} has no centre-lines of its date lines and curves (etched outlines only); they are checked from the layout`);
+        else if (curves.curves.length) io.out(`note: the ${curves.curves.length} date line(s) and curve(s) checked${which} were read from ${args.plate}`);
+        if (found.unmatched.length) io.out(`note: ${found.unmatched.length} line(s) in ${args.plate}${which} match no hour line, date line or curve of the spec (first at face x ${found.unmatched[0][0].toFixed(2)} mm, y ${found.unmatched[0][1].toFixed(2)} mm); they are not checked`);
+        return r;
+      });
+      for (const r of results) io.out(planarCheckText(r));
       if (args.out !== undefined) {
         const dir = String(args.out);
-        writeFilesAtomic(dir, [{ name: 'check.json', bytes: utf8(toReportJson(planar)) }], Boolean(args.force));
+        const json = results.length > 1 ? { ...results[0], lowerFace: results[1], pass: results.every((r) => r.pass) } : results[0];
+        writeFilesAtomic(dir, [{ name: 'check.json', bytes: utf8(toReportJson(json)) }], Boolean(args.force));
         io.out(`umbrafab: wrote check.json to ${join(dir)}`);
       }
-      if (!planar.pass) {
-        const f = planar.failures[0];
-        const c = planar.curves.find((k) => !k.pass);
-        io.err(f ? `umbrafab check: line ${f.label} ${f.edge} is ${Math.abs(f.errorMm).toFixed(4)} mm off the simulated shadow on ${f.date} (tolerance ${planar.toleranceMm} mm)` : `umbrafab check: ${c ? `curve ${c.label} is ${c.worstMm.toFixed(4)} mm off the nodus shadow on ${c.worstDate ?? '-'}` : 'a curve lies beyond its tolerance'} (tolerance ${planar.curveToleranceMm} mm)`);
+      const failed = results.find((r) => !r.pass);
+      if (failed) {
+        const f = failed.failures[0];
+        const c = failed.curves.find((k) => !k.pass);
+        const where = failed.side && results.length > 1 ? ` on the ${failed.side} face` : '';
+        io.err(f ? `umbrafab check: line ${f.label} ${f.edge}${where} is ${Math.abs(f.errorMm).toFixed(4)} mm off the simulated shadow on ${f.date} (tolerance ${failed.toleranceMm} mm)` : `umbrafab check: ${c ? `curve ${c.label}${where} is ${c.worstMm.toFixed(4)} mm off the nodus shadow on ${c.worstDate ?? '-'}` : `a curve${where} lies beyond its tolerance`} (tolerance ${failed.curveToleranceMm} mm)`);
         return 1;
       }
       return 0;

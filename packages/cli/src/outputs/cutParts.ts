@@ -28,6 +28,11 @@ export function partOutlines(part: SheetPart, chordToleranceMm: number): Promise
   return outlines;
 }
 
+/** The union of a plate's lower-face strokes (face.side both), or undefined without a lower face. */
+export function lowerFaceOutlines(part: SheetPart, chordToleranceMm: number): Promise<StrokeOutlines> | undefined {
+  return part.lowerFace ? partOutlines({ ...part, lines: part.lowerFace.lines, text: part.lowerFace.text }, chordToleranceMm) : undefined;
+}
+
 /** How one part's cutting drawing was drawn, in report.json. */
 export interface CutFileSection extends PartCutReport {
   /** radius of the round tool the inside corners are relieved for, mm (0: no relief) */
@@ -53,7 +58,9 @@ export async function cutPartFiles(ctx: Pick<BuildContext, 'spec' | 'drawing'>, 
   const strokes = resolveStrokeMode(c.strokes, spec.process.method);
   const hasStrokes = (part.lines?.length ?? 0) + (part.text?.length ?? 0) > 0;
   const outlines = strokes !== 'centre-lines' && hasStrokes ? await partOutlines(part, c.chordTolerance) : undefined;
+  const lowerOutlines = strokes !== 'centre-lines' ? await lowerFaceOutlines(part, c.chordTolerance) : undefined;
   const r = await partCutFiles(part, {
+    lowerOutlines,
     method: spec.process.method,
     kerfMm: spec.process.kerf,
     precompensate: c.precompensate,

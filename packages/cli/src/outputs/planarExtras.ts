@@ -74,6 +74,11 @@ async function planarTemplate(spec: DialSpec, layout: PlanarLayout, drawing: Pla
   if (!spec.template.write) return null;
   const nominal = { material: spec.plate.material, reliefToolRadiusMm: 0, chordToleranceMm: spec.cutFiles.chordTolerance };
   const parts: TemplatePart[] = [];
+  // A plate engraved on both faces: its lower face as seen from below (the plate turned over about its flip axis), the same outline and holes.
+  if (drawing.lowerFace) {
+    const lower = { ...drawing, lines: drawing.lowerFace.lines, text: drawing.lowerFace.text, lowerFace: undefined };
+    parts.push({ label: 'plate, lower face seen from below (turned over about the flip axis)', part: plateSheetPart(lower, { ...nominal, thicknessMm: layout.plate.thicknessMm }) });
+  }
   if (gnomon.kind === 'fin') parts.push({ label: 'gnomon fin profile', part: finSheetPart(gnomon.profile, { ...nominal, thicknessMm: gnomon.thicknessMm }) });
   const mount: SheetPart | undefined = wallMount(layout)?.part;
   if (mount) parts.push({ label: 'wall mount', part: mount });
@@ -82,14 +87,21 @@ async function planarTemplate(spec: DialSpec, layout: PlanarLayout, drawing: Pla
   const g = layout.gnomon;
   const intro = [
     `${layout.faceType} face. Gnomon: ${g.kind === 'fin' ? `fin ${g.thicknessMm} mm thick` : `rod ${g.thicknessMm} mm across`}, style height ${g.styleHeightDeg.toFixed(2)}° to the face.`,
+    ...(drawing.lowerFace
+      ? [
+          'Engraved on both faces: the plate drawing is the upper face; the lower face, seen from below, follows this table.',
+          `Lower face: turn the plate over about its vertical centre line x = ${drawing.lowerFace.flipAxisX.toFixed(1)} mm (through the rod hole); its lines are listed as 'lower'.`,
+        ]
+      : []),
     `The face origin (the fin's root, on the substyle) lies at x ${layout.plate.substyleX.toFixed(1)}, y ${layout.plate.faceOriginY.toFixed(1)} mm from the plate's lower-left corner.`,
   ];
   const tOpts = { paper: spec.template.paper, orientation: spec.template.orientation, overlapMm: spec.template.overlap, marginMm: spec.template.margin };
-  const input = { drawing, title: spec.name, intro, parts };
+  const plateLabel = drawing.lowerFace ? 'plate, upper face' : 'plate';
+  const input = { drawing, title: spec.name, intro, parts, plateLabel };
   const pdf = await toPartsTemplatePdf(input, tOpts);
   const tiles = partsTemplateTiles(input, tOpts);
   const plateSheets = tiles.plate.columns * tiles.plate.rows;
-  const drawings: { label: string; firstSheet: number; lastSheet: number }[] = [{ label: 'plate', firstSheet: 1, lastSheet: plateSheets }];
+  const drawings: { label: string; firstSheet: number; lastSheet: number }[] = [{ label: plateLabel, firstSheet: 1, lastSheet: plateSheets }];
   const tableLast = tiles.pages - tiles.parts.reduce((n, t) => n + t.columns * t.rows, 0);
   let next = tableLast + 1;
   parts.forEach((p, i) => {

@@ -44,6 +44,26 @@ export interface PlanarSections {
   readonly pictures?: PlanarPicturesSection;
   /** how the dial reads and the corrections to clock time */
   readonly time: TimeLayout;
+  /** the upper face's programs (the only face's, for one face); with both faces, side 1 of 2 */
+  readonly engraving: EngravingReport;
+  /** an equatorial plate engraved on both faces (face.side both): its lower face; `marks` … `engraving` above are then the upper face's */
+  readonly lowerFace?: LowerFaceSection;
+}
+
+/**
+ * The lower face of an equatorial plate engraved on both faces, in its own
+ * face coordinates (seen from below: plate.dxf's _LOWER layers once the
+ * plate is turned over about x = flipAxisXMm), with its programs (side 2 of 2,
+ * the files ending -lower).
+ */
+export interface LowerFaceSection {
+  readonly marks: readonly PlanarMarkSection[];
+  readonly leftOut: readonly LeftOutHour[];
+  readonly curves: readonly PlanarCurveSection[];
+  /** outward unit normal of the lower face in the site's horizon frame (x east, y north, z up) */
+  readonly normalEnu: Vec3;
+  /** plate x of the flip axis (the plate's vertical centre line, through the rod hole), mm */
+  readonly flipAxisXMm: number;
   readonly engraving: EngravingReport;
 }
 

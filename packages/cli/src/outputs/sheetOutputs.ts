@@ -3,6 +3,7 @@ import {
   cutDrawing,
   cutFileBase,
   formatMm,
+  lowerFaceNote,
   nominalProfiles,
   offsetProfiles,
   piecesDrawing,
@@ -13,7 +14,7 @@ import {
   type CutDrawing,
   type CutProfiles,
 } from '@umbrafab/fabricate';
-import { cutParts, partOutlines } from './cutParts.ts';
+import { cutParts, lowerFaceOutlines, partOutlines } from './cutParts.ts';
 import { utf8, type Producer } from './outputTypes.ts';
 import type { OutputFile } from '../writeFilesAtomic.ts';
 
@@ -77,13 +78,15 @@ export async function sheetFiles(spec: DialSpec, plateThicknessMm: number, all: 
     const hasStrokes = (part.lines?.length ?? 0) + (part.text?.length ?? 0) > 0;
     const mode = hasStrokes ? strokes : 'centre-lines';
     const outlines = mode !== 'centre-lines' ? await partOutlines(part, c.chordTolerance) : undefined;
-    drawn.set(part.name, cutDrawing(part, { profiles, strokes: mode, outlines, notes: [] }));
+    const lowerOutlines = mode !== 'centre-lines' ? await lowerFaceOutlines(part, c.chordTolerance) : undefined;
+    drawn.set(part.name, cutDrawing(part, { profiles, strokes: mode, outlines, lowerOutlines, notes: [] }));
   }
   const notes = [
     `sheet: ${formatMm(nest.widthMm)} x ${formatMm(nest.lengthMm)} mm of ${stock.material} ${formatMm(stock.thicknessMm)} mm, ${nest.pieces.length} pieces, ${formatMm(gapMm)} mm apart (kerf ${formatMm(kerf)} + margin ${formatMm(c.sheetMargin)} mm).`,
     pre
       ? `PRE-COMPENSATED cut profiles, offset ${formatMm(kerf / 2)} mm = kerf / 2. Do NOT apply a kerf or tool offset in the machine.`
       : `TRUE SIZE (nominal) cut profiles. Apply the machine's own kerf or tool offset (${spec.process.method}, kerf ${formatMm(kerf)} mm).`,
+    ...parts.filter((p) => p.lowerFace).map((p) => `${p.name}: ${lowerFaceNote(p.lowerFace!.flipAxisX)} (x in the ${p.name}'s own frame)`),
   ];
   const labels = new Map(parts.map((p) => [p.name, p.name]));
   const pieces = piecesDrawing(parts, nest.pieces, labels, notes, 3, (part) => drawn.get(part.name)!);

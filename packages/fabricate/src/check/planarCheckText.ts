@@ -9,7 +9,7 @@ const mm = (x: number) => (Math.abs(x) < 0.0005 ? x.toExponential(1) : x.toFixed
  */
 export function planarCheckText(r: PlanarCheckResult): string {
   const out: string[] = [];
-  out.push(`umbrafab check: ${r.faceType} face, year ${r.year}, sweep every ${r.stepMinutes} min, every ${r.everyDays} day(s), refraction ${r.refraction}, ${r.sunPositions} sun positions; ${r.litMinutes} lit minutes`);
+  out.push(`umbrafab check: ${r.faceType}${r.side ? ` ${r.side}` : ''} face, year ${r.year}, sweep every ${r.stepMinutes} min, every ${r.everyDays} day(s), refraction ${r.refraction}, ${r.sunPositions} sun positions; ${r.litMinutes} lit minutes`);
   out.push(`gnomon: ${r.gnomon.kind} mesh, ${r.gnomon.triangles} triangles, ${r.gnomon.styleEdges} style edges; tolerance ${r.toleranceMm} mm (curves ${r.curveToleranceMm} mm)`);
   out.push('');
   out.push('line     edge    H deg    lit  reached  worst mm     worst s      date');

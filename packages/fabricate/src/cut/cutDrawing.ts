@@ -1,4 +1,4 @@
-import type { Circle, CutLayerKey, Path, SheetPart, StrokeOutlines, Vec2 } from '@umbrafab/geometry';
+import type { Circle, CutLayerKey, DrawnLine, DrawnText, Path, SheetPart, StrokeOutlines, Vec2 } from '@umbrafab/geometry';
 import { LAYER_ORDER } from '../dxf/cutLayers.ts';
 
 /** One entity of a cutting drawing, on a layer, mm. */
@@ -37,6 +37,8 @@ export interface CutDrawingOptions {
   readonly strokes: StrokeMode;
   /** the union of the part's strokes, needed for 'outlines' and 'both' */
   readonly outlines?: StrokeOutlines;
+  /** the same for the part's lower face (`part.lowerFace`), when it has one */
+  readonly lowerOutlines?: StrokeOutlines;
   /** note lines, written on the reference layer below the part and at the head of the file */
   readonly notes: readonly string[];
   /** text height of the notes, mm (default 2.5) */
@@ -50,6 +52,9 @@ export interface CutDrawingOptions {
  * - outlines: LINE_ETCH_OUTLINE (every ring of the stroke union) and, for
  *   `umbrafab check --plate`, the centre-lines of the marks, date lines and
  *   mean-time curves (`readBack`) on MARK_CENTRE_NO_CUT;
+ * - a plate's lower face (`part.lowerFace`, face.side both) the same way on
+ *   the `_LOWER` layers, drawn as seen from below once the part is turned
+ *   over about its flip axis;
  * - REFERENCE_NO_CUT: the part's reference lines and the notes.
  * @example cutDrawing(part, { profiles: nominalProfiles(part), strokes: 'centre-lines', notes: [] })
  */
@@ -60,18 +65,11 @@ export function cutDrawing(part: SheetPart, options: CutDrawingOptions): CutDraw
   for (const f of profiles.inner) {
     out.push(f.kind === 'circle' ? { kind: 'circle', layer: 'cut', cx: f.cx, cy: f.cy, r: f.radiusMm } : { kind: 'polyline', layer: 'cut', points: f.points, closed: true });
   }
-  const lines = part.lines ?? [];
-  const text = part.text ?? [];
-  if (options.strokes !== 'outlines') {
-    for (const l of lines) out.push({ kind: 'polyline', layer: 'score', points: l.path.points, closed: l.path.closed });
-    for (const b of text) for (const s of b.strokes) out.push({ kind: 'polyline', layer: 'text', points: s.points, closed: s.closed });
-  }
-  if (options.strokes !== 'centre-lines') {
-    if (!options.outlines) throw new Error('cutDrawing: strokes "outlines" needs the stroke outlines');
-    for (const r of options.outlines.regions) for (const ring of [r.outer, ...r.holes]) out.push({ kind: 'polyline', layer: 'etch', points: ring, closed: true });
-    if (options.strokes === 'outlines') {
-      for (const l of lines) if (l.kind !== 'curve' || l.readBack) out.push({ kind: 'polyline', layer: 'markCentres', points: l.path.points, closed: l.path.closed });
-    }
+  const upper = { score: 'score', etch: 'etch', text: 'text', markCentres: 'markCentres' } as const;
+  out.push(...faceStrokes(part.lines ?? [], part.text ?? [], options.strokes, options.outlines, upper));
+  if (part.lowerFace) {
+    const lower = { score: 'scoreLower', etch: 'etchLower', text: 'textLower', markCentres: 'markCentresLower' } as const;
+    out.push(...faceStrokes(part.lowerFace.lines, part.lowerFace.text, options.strokes, options.lowerOutlines, lower));
   }
   for (const ref of part.reference ?? []) out.push({ kind: 'polyline', layer: 'reference', points: ref.path.points, closed: ref.path.closed });
   const h = options.noteHeightMm ?? 2.5;
@@ -82,6 +80,29 @@ export function cutDrawing(part: SheetPart, options: CutDrawingOptions): CutDraw
   used.add('cut');
   used.add('reference');
   return { entities: out, notes: options.notes, layers: LAYER_ORDER.filter((k) => used.has(k)) };
+}
+
+/** One face's engraving on its layers: centre-lines, outlines, or both. */
+function faceStrokes(
+  lines: readonly DrawnLine[],
+  text: readonly DrawnText[],
+  strokes: StrokeMode,
+  outlines: StrokeOutlines | undefined,
+  layer: { readonly score: CutLayerKey; readonly etch: CutLayerKey; readonly text: CutLayerKey; readonly markCentres: CutLayerKey },
+): CutEntity[] {
+  const out: CutEntity[] = [];
+  if (strokes !== 'outlines') {
+    for (const l of lines) out.push({ kind: 'polyline', layer: layer.score, points: l.path.points, closed: l.path.closed });
+    for (const b of text) for (const s of b.strokes) out.push({ kind: 'polyline', layer: layer.text, points: s.points, closed: s.closed });
+  }
+  if (strokes !== 'centre-lines') {
+    if (!outlines) throw new Error('cutDrawing: strokes "outlines" needs the stroke outlines');
+    for (const r of outlines.regions) for (const ring of [r.outer, ...r.holes]) out.push({ kind: 'polyline', layer: layer.etch, points: ring, closed: true });
+    if (strokes === 'outlines') {
+      for (const l of lines) if (l.kind !== 'curve' || l.readBack) out.push({ kind: 'polyline', layer: layer.markCentres, points: l.path.points, closed: l.path.closed });
+    }
+  }
+  return out;
 }
 
 /** A part's own (nominal) profiles: no offset. */

@@ -14,6 +14,8 @@ export interface PartCutOptions {
   readonly strokes: StrokeMode;
   /** the union of the part's strokes (strokeOutlines), needed unless strokes is 'centre-lines' */
   readonly outlines?: StrokeOutlines;
+  /** the same for its lower face (`part.lowerFace`) */
+  readonly lowerOutlines?: StrokeOutlines;
   readonly chordToleranceMm: number;
   /** also write the R12 copy and the SVG copy */
   readonly r12: boolean;
@@ -62,9 +64,10 @@ export async function partCutFiles(part: SheetPart, options: PartCutOptions): Pr
     pre
       ? `${part.name}: PRE-COMPENSATED cut profiles, offset ${k} mm = kerf ${formatMm(options.kerfMm)} mm / 2 (outer profile grown, holes and slots shrunk). Do NOT apply a kerf or tool offset in the machine.`
       : `${part.name}: TRUE SIZE (nominal) cut profiles. Apply the machine's own kerf or tool offset (${options.method}, kerf ${formatMm(options.kerfMm)} mm).`,
-    `stock: ${part.material} ${formatMm(part.thicknessMm)} mm. Only CUT_PROFILE, LINE_SCORE, LINE_ETCH_OUTLINE and TEXT_ENGRAVE plot; layers ending _NO_CUT are off and never cut.`,
+    `stock: ${part.material} ${formatMm(part.thicknessMm)} mm. Only CUT_PROFILE, LINE_SCORE, LINE_ETCH_OUTLINE and TEXT_ENGRAVE${part.lowerFace ? ' and their _LOWER layers' : ''} plot; layers ending _NO_CUT are off and never cut.`,
+    ...(part.lowerFace ? [lowerFaceNote(part.lowerFace.flipAxisX)] : []),
   ];
-  const drawing = cutDrawing(part, { profiles, strokes: options.strokes, outlines: options.outlines, notes });
+  const drawing = cutDrawing(part, { profiles, strokes: options.strokes, outlines: options.outlines, lowerOutlines: options.lowerOutlines, notes });
   const base = cutFileBase(part, options.kerfMm, options.precompensate);
   const files = [{ name: `${base}.dxf`, text: toDxf(drawing) }];
   if (options.r12) files.push({ name: `${base}-r12.dxf`, text: toDxfR12(drawing) });
@@ -82,6 +85,14 @@ export async function partCutFiles(part: SheetPart, options: PartCutOptions): Pr
       copies: files.slice(1).map((f) => f.name),
     },
   };
+}
+
+/**
+ * The note on a plate engraved on both faces: which layers are which face,
+ * the flip axis and what registers the second side.
+ */
+export function lowerFaceNote(flipAxisX: number): string {
+  return `TWO FACES: LINE_SCORE, LINE_ETCH_OUTLINE, TEXT_ENGRAVE = upper face; the _LOWER layers = lower face as seen from below. Cut and engrave the upper face, then turn the plate over about the flip axis x = ${formatMm(flipAxisX)} mm (its vertical centre line through the rod hole, left edge to right) and engrave the _LOWER layers: outline and holes fall where they were.`;
 }
 
 /** A length for a file name or note: up to 4 decimals, no trailing zeros. */

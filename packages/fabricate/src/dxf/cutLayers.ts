@@ -24,7 +24,11 @@ export const DXF_LAYERS: Readonly<Record<CutLayerKey, CutLayer>> = {
   text: { name: CUT_LAYER_NAMES.text, color: 3, plots: true, operation: 'engrave single-stroke text along the centre-line' },
   reference: { name: CUT_LAYER_NAMES.reference, color: 8, plots: false, operation: 'reference, notes and part names: do not cut' },
   markCentres: { name: CUT_LAYER_NAMES.markCentres, color: 8, plots: false, operation: "the marks' centre-lines, read back by umbrafab check: do not cut" },
+  scoreLower: { name: CUT_LAYER_NAMES.scoreLower, color: 4, plots: true, operation: 'lower face, plate turned over about its flip axis: score or engrave along the centre-line' },
+  etchLower: { name: CUT_LAYER_NAMES.etchLower, color: 200, plots: true, operation: 'lower face, plate turned over about its flip axis: etch or fill inside the closed outlines' },
+  textLower: { name: CUT_LAYER_NAMES.textLower, color: 2, plots: true, operation: 'lower face, plate turned over about its flip axis: engrave single-stroke text along the centre-line' },
+  markCentresLower: { name: CUT_LAYER_NAMES.markCentresLower, color: 8, plots: false, operation: "the lower face's marks' centre-lines, read back by umbrafab check: do not cut" },
 };
 
 /** The layer keys in drawing order. */
-export const LAYER_ORDER: readonly CutLayerKey[] = ['cut', 'score', 'etch', 'text', 'reference', 'markCentres'];
+export const LAYER_ORDER: readonly CutLayerKey[] = ['cut', 'score', 'etch', 'text', 'scoreLower', 'etchLower', 'textLower', 'reference', 'markCentres', 'markCentresLower'];

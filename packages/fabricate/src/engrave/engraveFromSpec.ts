@@ -245,19 +245,44 @@ export async function planEngraving(spec: DialSpec, drawing: PlateDrawing): Prom
 }
 
 /**
- * The program texts of a plan under a spec's header (engraveTitleLines):
- * only the header is written anew, the body text is the plan's.
+ * One face of a plate engraved on both faces (an equatorial face.side
+ * both): the programs' file names take `fileSuffix` before the extension
+ * (engrave-lower.ngc) and their header, after its first line, holds
+ * `headerLines` (which side this is, the turn between the two).
  */
-export function writeEngraving(plan: EngravingPlan, spec: DialSpec): SpecEngraving {
+export interface EngraveFace {
+  readonly fileSuffix: string;
+  readonly headerLines: readonly string[];
+}
+
+/** A program's file name, with a face's suffix before the extension. */
+export function engraveFileName(program: EngraveProgram, face?: EngraveFace): string {
+  const name = ENGRAVE_FILE_NAMES[program];
+  if (!face) return name;
+  const dot = name.lastIndexOf('.');
+  return `${name.slice(0, dot)}${face.fileSuffix}${name.slice(dot)}`;
+}
+
+/**
+ * The program texts of a plan under a spec's header (engraveTitleLines):
+ * only the header is written anew, the body text is the plan's. With a
+ * `face`, its lines open the header and the files are named for it.
+ */
+export function writeEngraving(plan: EngravingPlan, spec: DialSpec, face?: EngraveFace): SpecEngraving {
   const { settings } = plan;
   if (!plan.job || !settings) return { files: [], report: plan.report };
   const job: EngraveJob = { ...plan.job, title: engraveTitleLines(spec) };
+  const sided = (program: EngraveProgram): EngraveJob => (face ? { ...job, side: { fileName: engraveFileName(program, face), lines: face.headerLines } } : job);
   const files: { name: string; text: string }[] = [];
   for (const program of plan.report.programs) {
-    if (program === 'ngc' && plan.ngc) files.push({ name: ENGRAVE_FILE_NAMES.ngc, text: toNgc(job, settings, {}, plan.ngc) });
-    if (program === 'laser' && plan.laser) files.push({ name: ENGRAVE_FILE_NAMES.laser, text: toLaserGcode(job, settings, {}, plan.laser) });
+    if (program === 'ngc' && plan.ngc) files.push({ name: engraveFileName('ngc', face), text: toNgc(sided('ngc'), settings, {}, plan.ngc) });
+    if (program === 'laser' && plan.laser) files.push({ name: engraveFileName('laser', face), text: toLaserGcode(sided('laser'), settings, {}, plan.laser) });
   }
-  return { files, report: plan.report, job };
+  const r = plan.report;
+  const report: EngravingReport = face
+    ? { ...r, ...(r.ngc ? { ngc: { ...r.ngc, file: engraveFileName('ngc', face) } } : {}), ...(r.laser ? { laser: { ...r.laser, file: engraveFileName('laser', face) } } : {}) }
+    : r;
+  return { files, report, job };
 }
 
 /**
@@ -266,12 +291,13 @@ export function writeEngraving(plan: EngravingPlan, spec: DialSpec): SpecEngravi
  *
  * @param spec the normalised spec (parseSpec)
  * @param drawing plateDrawing(layoutDial(spec)), plate coordinates as plate.dxf
+ * @param face one face of a plate engraved on both (file names, header lines)
  * @returns the files (engrave.ngc, engrave-laser.gcode) and the report section
  * @throws SpecError (field, value, allowed) for a material without a preset, a
  *   V-bit too narrow for the widest line, a groove deeper than the sheet
  *   allows; feeds of zero never get here (the schema rejects them)
  * @example (await engraveFromSpec(spec, plateDrawing(layoutDial(spec)))).files.map((f) => f.name)
  */
-export async function engraveFromSpec(spec: DialSpec, drawing: PlateDrawing): Promise<SpecEngraving> {
-  return writeEngraving(await planEngraving(spec, drawing), spec);
+export async function engraveFromSpec(spec: DialSpec, drawing: PlateDrawing, face?: EngraveFace): Promise<SpecEngraving> {
+  return writeEngraving(await planEngraving(spec, drawing), spec, face);
 }

@@ -37,6 +37,8 @@ export interface EngraveJob {
   };
   /** Spec summary lines for header comments. */
   readonly title: readonly string[];
+  /** One side of a plate engraved on both faces: the program's file name and the header lines on the side and the turn. */
+  readonly side?: { readonly fileName: string; readonly lines: readonly string[] };
 }
 
 const ON_STOCK_TOL_MM = 1e-6;

@@ -80,7 +80,8 @@ export function toLaserGcode(job: EngraveJob, settings: EngraveSettings, options
   const f = fill ?? planned?.fill;
   const s = settings;
   const header: GcodeRecord[] = [
-    { kind: 'comment', text: 'umbrafab engrave-laser.gcode: laser scoring program, GRBL laser mode [$32=1]' },
+    { kind: 'comment', text: `umbrafab ${job.side?.fileName ?? 'engrave-laser.gcode'}: laser scoring program, GRBL laser mode [$32=1]` },
+    ...(job.side?.lines ?? []).map((text): GcodeRecord => ({ kind: 'comment', text })),
     ...stockComments(job, 'laser'),
     ...safetyComments('laser'),
     {

@@ -113,7 +113,8 @@ export function toNgc(job: EngraveJob, settings: EngraveSettings, options: Gcode
   const usesFlat = cuts.some((c) => c.tool === 'flat');
   const maxPasses = cuts.reduce((m, c) => Math.max(m, c.depthPassesMm.length), 0);
   const header: GcodeRecord[] = [
-    { kind: 'comment', text: 'umbrafab engrave.ngc: engraving program, RS-274/NGC' },
+    { kind: 'comment', text: `umbrafab ${job.side?.fileName ?? 'engrave.ngc'}: engraving program, RS-274/NGC` },
+    ...(job.side?.lines ?? []).map((text): GcodeRecord => ({ kind: 'comment', text })),
     ...stockComments(job, 'mill'),
     ...safetyComments('mill'),
     { kind: 'comment', text: `T1: ${toolName('vbit', s)} - load before start` },

@@ -158,6 +158,8 @@ export interface PartsTemplateInput {
   /** lines printed above the table of line ends (the face, the style root, the gnomon) */
   readonly intro: readonly string[];
   readonly parts: readonly TemplatePart[];
+  /** the plate drawing's heading (default 'plate') */
+  readonly plateLabel?: string;
 }
 
 /**
@@ -182,10 +184,10 @@ export async function toPartsTemplatePdf(input: PartsTemplateInput, options: Par
   const rows = lineEndRows(d);
   const rowsPerSheet = tableRowsPerSheet(tiles);
   const tablePages = Math.max(1, Math.ceil(rows.length / rowsPerSheet));
-  const sheets: Sheet[] = [...tileSheets(d, tiles, 'plate')];
+  const sheets: Sheet[] = [...tileSheets(d, tiles, input.plateLabel ?? 'plate')];
   for (let p = 0; p < tablePages; p++) {
     sheets.push({
-      heading: `ends of the lines, from the plate's lower-left corner${tablePages > 1 ? ` (${p + 1}/${tablePages})` : ''}`,
+      heading: `ends of the lines, from the plate's lower-left corner${d.lowerFace ? ' (lower face: of the turned plate)' : ''}${tablePages > 1 ? ` (${p + 1}/${tablePages})` : ''}`,
       draw: (doc) => lineEndTable(doc, tiles, rows.slice(p * rowsPerSheet, (p + 1) * rowsPerSheet), input, p === tablePages - 1),
     });
   }
@@ -214,7 +216,10 @@ export interface LineEndRow {
 /** Every straight line of a drawing (two points; curves left out) with its ends rounded to 0.1 mm. */
 export function lineEndRows(drawing: PlateDrawing): LineEndRow[] {
   const r = ([x, y]: Vec2): Vec2 => [roundTo(x, 1), roundTo(y, 1)];
-  return drawing.lines.filter((l) => l.kind !== 'curve' && l.path.points.length === 2).map((l) => ({ label: l.label, kind: l.kind, fromMm: r(l.path.points[0]), toMm: r(l.path.points[1]) }));
+  const rows = (lines: PlateDrawing['lines'], prefix: string) =>
+    lines.filter((l) => l.kind !== 'curve' && l.path.points.length === 2).map((l) => ({ label: `${prefix}${l.label}`, kind: l.kind, fromMm: r(l.path.points[0]), toMm: r(l.path.points[1]) }));
+  // A plate engraved on both faces: the lower face's lines after the upper's, in the turned plate's frame.
+  return [...rows(drawing.lines, ''), ...(drawing.lowerFace ? rows(drawing.lowerFace.lines, 'lower ') : [])];
 }
 
 /** The sheet tiling used for a drawing (exported for reports and tests). */

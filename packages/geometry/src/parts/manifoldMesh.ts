@@ -6,8 +6,11 @@ import type { Mesh, Triangle, Vec3 } from './mesh.ts';
  * `getMesh().vertProperties` (float32, the first three properties), index
  * triples from `triVerts`, with exact duplicate positions welded into one
  * index so shared corners are shared (as validateMesh and STL readers
- * expect). Throws if welding collapses a triangle (the result would not be
- * a clean mesh; never seen with manifold's output, checked anyway).
+ * expect). A sliver whose two corners weld into one (they round to the same
+ * float32 point) is dropped: it has no area, and its two remaining edges,
+ * the same edge both ways, leave every other edge's pairing as it was, so
+ * the mesh stays closed (validateMesh checks). A triangle whose three
+ * corners weld into one point is dropped the same way.
  */
 export function meshFromManifold(solid: Manifold): Mesh {
   const m = solid.getMesh();
@@ -29,9 +32,7 @@ export function meshFromManifold(solid: Manifold): Mesh {
   const triangles: Triangle[] = [];
   for (let t = 0; t < m.triVerts.length; t += 3) {
     const tri: Triangle = [remap[m.triVerts[t]], remap[m.triVerts[t + 1]], remap[m.triVerts[t + 2]]];
-    if (tri[0] === tri[1] || tri[1] === tri[2] || tri[2] === tri[0]) {
-      throw new Error(`meshFromManifold: triangle ${t / 3} collapses when equal float32 corners are welded`);
-    }
+    if (tri[0] === tri[1] || tri[1] === tri[2] || tri[2] === tri[0]) continue;
     triangles.push(tri);
   }
   return { positions, triangles };

@@ -14,6 +14,7 @@ import { standFoot } from '../stand/standFoot.ts';
 import { cheekTabSlots, indexOf, path, rectPath, relieveAlong, slotCut, tabCorners, turnedSlotCut, type NominalSlot } from '../stand/standJoinery.ts';
 import type { JoinedStand, PartPlacement, StandInstance, StandJoint } from '../stand/standTypes.ts';
 import type { Circle, Path, Vec2 } from '../types.ts';
+import type { DialSpec } from '../spec/schema.ts';
 import type { PlanarLayout } from './layoutPlanar.ts';
 
 /**
@@ -147,10 +148,10 @@ export function equatorialStand(layout: PlanarLayout, options: Partial<Equatoria
   if (st.anchors > 0 && anchor === null) {
     throw new SpecError('stand.anchorDiameter', st.anchorDiameter, 'allowed: at least 3.4 mm (the ISO 273 clearance hole of an M3 anchor), or stand.anchors: 0');
   }
-  const reliefRoom = tool > 0 ? 4 * (2 * (tool + RELIEF_OVERSIZE_MM) + 0.5) : 0;
+  const reliefRoom = reliefRoomMm(tool);
 
   // ---- seat rails: the plate's hole rows (the end rails flush with its edges), the rod's hole inside one
-  const b = Math.max(2 * spec.holes.inset, RAIL_MIN_WIDTH_MM, holeDia + 10, reliefRoom);
+  const b = equatorialSeatRailWidthMm(spec, tool);
   const spans: [number, number][] = [[0, b]];
   for (const y of [...new Set(corner.map((h) => h.cy))].sort((p, q) => p - q)) {
     if (y + holeDia / 2 <= b || y - holeDia / 2 >= L - b) continue;
@@ -159,10 +160,13 @@ export function equatorialStand(layout: PlanarLayout, options: Partial<Equatoria
   spans.push([L - b, L]);
   const rodSpan: [number, number] = [Math.max(0, yR - rr - 3), Math.min(L, yR + rr + 3)];
   const hit = spans.find(([lo, hi]) => lo < rodSpan[1] && hi > rodSpan[0]);
+  // With both faces engraved no rail runs under the rod's row, across the lower face: the plate's hole and the hub's hold the rod.
+  const bothFaces = spec.face?.side === 'both';
+  if (hit && bothFaces) throw new Error('equatorialStand: a seat rail reaches the rod on a plate engraved on both faces (layoutPlanar keeps the rod inside the border)');
   if (hit) {
     hit[0] = Math.min(hit[0], rodSpan[0]);
     hit[1] = Math.max(hit[1], rodSpan[1]);
-  } else spans.push([Math.max(0, yR - b / 2), Math.min(L, yR + b / 2)]);
+  } else if (!bothFaces) spans.push([Math.max(0, yR - b / 2), Math.min(L, yR + b / 2)]);
   spans.sort((p, q) => p[0] - q[0]);
   const merged: [number, number][] = [];
   for (const s of spans) {
@@ -372,6 +376,23 @@ export function equatorialStand(layout: PlanarLayout, options: Partial<Equatoria
       plateLowestMm: plateLowest,
     },
   };
+}
+
+/** Room along a joint for a relieved tab and slot, mm: four reliefs of the round tool and 0.5 mm each. */
+function reliefRoomMm(toolRadiusMm: number): number {
+  return toolRadiusMm > 0 ? 4 * (2 * (toolRadiusMm + RELIEF_OVERSIZE_MM) + 0.5) : 0;
+}
+
+/**
+ * Width of the equatorial stand's seat rails, mm: twice the holes' inset,
+ * RAIL_MIN_WIDTH_MM, the hole + 10 mm and room for the relieved tabs,
+ * whichever is most. With both faces engraved the plate's border is at
+ * least this wide (`layoutPlanar`), so the end rails stay off the lower
+ * face's engraving.
+ */
+export function equatorialSeatRailWidthMm(spec: DialSpec, reliefToolRadiusMm = reliefToolRadius(spec)): number {
+  const holeDia = spec.holes.count > 0 ? spec.holes.diameter : 0;
+  return Math.max(2 * spec.holes.inset, RAIL_MIN_WIDTH_MM, holeDia + 10, reliefRoomMm(reliefToolRadiusMm));
 }
 
 /** Whether `equatorialStand` is built for a layout: an equatorial face within EQUATORIAL_STAND_MAX_LATITUDE_DEG. */

@@ -22,6 +22,8 @@ import type { FaceOrientation, FinEdge, PlanarFace } from './planarTypes.ts';
 import { plateFrame, substyleFromVerticalRad } from './plateFrame.ts';
 import { isEquatorialFace, isParallelFace, type PlanarGnomon } from './styleEdgeAnchor.ts';
 import { lineHourAngleDeg } from '../clock/lineHourAngle.ts';
+import { METRIC_SIZES, screwForHole } from '../stand/metricFasteners.ts';
+import { equatorialSeatRailWidthMm } from './equatorialStand.ts';
 import { markKindAt } from '../clock/markKind.ts';
 
 /** Gap between bands (line ends, numerals, title), mm. */
@@ -114,6 +116,23 @@ export interface PlanarLayout {
   readonly plate: PlanarPlateLayout;
   readonly time: TimeLayout;
   readonly notes: readonly string[];
+  /**
+   * face.side both: the plate's lower face, laid out in its own frame (seen
+   * from below; its spec's face.side is 'lower') on the same plate: the
+   * same size, holes and outline, the rod on the flip axis x = width / 2,
+   * so turning the plate over about that axis brings the lower face's
+   * drawing onto the plate's outline and holes. Absent for one face.
+   */
+  readonly lowerFace?: PlanarLayout;
+}
+
+/** What a face needs of the plate beyond its own engraving (face.side both: both faces' room, shared). */
+interface PlateRoom {
+  /** the engraving's box in face coordinates, mm */
+  readonly engraved: Box;
+  readonly titleWidthMm: number;
+  /** the clear border around it, mm (`plateMarginMm`) */
+  readonly marginMm: number;
 }
 
 /** The face orientation a spec asks for (null for the polar plate). */
@@ -126,7 +145,7 @@ export function faceOrientationOf(spec: DialSpec): FaceOrientation | null {
     declinationRad: f.wallDeclination * DEG,
     reclinationRad: f.reclination * DEG,
     facing: f.facing,
-    side: f.side,
+    side: f.side === 'lower' ? 'lower' : 'upper',
   };
 }
 
@@ -151,6 +170,53 @@ export function faceOrientationOf(spec: DialSpec): FaceOrientation | null {
  * @example layoutPlanar(parseSpec({ site, face: { type: 'horizontal' } })).marks.length
  */
 export function layoutPlanar(spec: DialSpec): PlanarLayout {
+  const f = spec.face;
+  if (f?.type === 'equatorial' && f.side === 'both') return layoutBothFaces(spec);
+  return layoutFace(spec);
+}
+
+/**
+ * face.side both: the upper face and the lower face on one plate. Each face
+ * is laid out alone first; the plate then takes both engravings (the lower
+ * face's x turned over, as it lies on the plate) made symmetric about the
+ * rod, so the rod's hole lies on the plate's vertical centre line, the flip
+ * axis, and the outline and the holes are their own mirror images. Both
+ * faces are then laid out again on that plate. A mid-length row of holes
+ * (holes.count 2) is refused: its seat rail would cross the lower face.
+ */
+function layoutBothFaces(spec: DialSpec): PlanarLayout {
+  if (spec.holes.count === 2) {
+    throw new SpecError('holes.count', 2, 'allowed: 0 or 4 for an equatorial plate engraved on both faces (face.side both)', 'the seat rail under a mid-length row of holes would lie across the lower face');
+  }
+  const sideSpec = (side: 'upper' | 'lower'): DialSpec => ({ ...spec, face: { ...spec.face!, side } });
+  const [upperSpec, lowerSpec] = [sideSpec('upper'), sideSpec('lower')];
+  const rooms = [plateRoomOf(upperSpec), plateRoomOf(lowerSpec)];
+  const [u, l] = [rooms[0].engraved, rooms[1].engraved];
+  const halfWidth = Math.max(Math.abs(u.xMinMm), Math.abs(u.xMaxMm), Math.abs(l.xMinMm), Math.abs(l.xMaxMm));
+  // The rod's hole with 3 mm around it stays inside the box too, so the end seat rails (beyond the border) never reach the rod.
+  const rodRoom = spec.gnomon.thickness / 2 + spec.process.clearance + 3;
+  const room: PlateRoom = {
+    engraved: { xMinMm: -halfWidth, xMaxMm: halfWidth, yMinMm: Math.min(u.yMinMm, l.yMinMm, -rodRoom), yMaxMm: Math.max(u.yMaxMm, l.yMaxMm, rodRoom) },
+    titleWidthMm: Math.max(rooms[0].titleWidthMm, rooms[1].titleWidthMm),
+    marginMm: plateMarginMm(spec, 'equatorial'),
+  };
+  const upper = layoutFace(upperSpec, room);
+  const lower = layoutFace(lowerSpec, room);
+  return { ...upper, spec, notes: [...upper.notes.map((n) => `upper face: ${n}`), ...lower.notes.map((n) => `lower face: ${n}`)], lowerFace: lower };
+}
+
+/** The room a face's engraving takes (its layout alone). */
+function plateRoomOf(spec: DialSpec): PlateRoom {
+  let room: PlateRoom | undefined;
+  layoutFace(spec, undefined, (r) => (room = r));
+  return room!;
+}
+
+/**
+ * One face: `room` (face.side both) sizes the plate for both faces instead
+ * of this face's engraving alone; `onRoom` hears this face's own room.
+ */
+function layoutFace(spec: DialSpec, room?: PlateRoom, onRoom?: (r: PlateRoom) => void): PlanarLayout {
   const orientation = faceOrientationOf(spec);
   if (!orientation) throw new Error('layoutPlanar: the polar plate is laid out by layoutDial');
   const faceType = orientation.type as Exclude<FaceType, 'polar'>;
@@ -252,15 +318,16 @@ export function layoutPlanar(spec: DialSpec): PlanarLayout {
   const titleLines = titleText(spec, faceType, psiDeg);
   const titleHeight = (titleLines.length - 1) * 1.7 * textH + textH;
   const titleWidth = Math.max(...titleLines.map((l) => strokeTextWidthMm(l, textH)));
-  const engraved = boundsOf([
+  const ownEngraved = boundsOf([
     ...marks.flatMap((m) => [m.a, m.b]),
     ...numerals.flatMap((n) => n.strokes.flatMap((s) => s.points)),
     [-t / 2, gnomon.y0Mm],
     [t / 2, gnomon.y1Mm],
   ]);
-  const holes = spec.holes;
-  const margin = Math.max(spec.plate.margin, holes.count > 0 ? holes.inset + holes.diameter / 2 + 2 : 0);
-  const contentW = Math.max(engraved.xMaxMm - engraved.xMinMm, titleWidth) + 2 * margin;
+  onRoom?.({ engraved: ownEngraved, titleWidthMm: titleWidth, marginMm: plateMarginMm(spec, faceType) });
+  const engraved = room?.engraved ?? ownEngraved;
+  const margin = room?.marginMm ?? plateMarginMm(spec, faceType);
+  const contentW = Math.max(engraved.xMaxMm - engraved.xMinMm, room?.titleWidthMm ?? titleWidth) + 2 * margin;
   const contentL = engraved.yMaxMm - engraved.yMinMm + BAND_GAP_MM + titleHeight + 2 * margin;
   const widthMm = spec.plate.width === 'auto' ? Math.ceil(contentW) : spec.plate.width;
   const lengthMm = spec.plate.length === 'auto' ? Math.ceil(contentL) : spec.plate.length;
@@ -300,6 +367,25 @@ export function layoutPlanar(spec: DialSpec): PlanarLayout {
     time,
     notes,
   };
+}
+
+/**
+ * The clear border around the engraving, mm: plate.margin, widened to take
+ * the mounting holes (their edge 2 mm clear of the engraving's box). On an
+ * equatorial face the screws' pan heads or washers lie on an engraved face
+ * (the upper face's, or the lower face's when it hangs under its rails), so
+ * the border also keeps the engraving's box a washer radius + 1 mm from each
+ * hole's centre; with both faces engraved, the seat rails under the plate's
+ * two ends cover a band of the lower face as wide as a rail, and the border
+ * is at least that band + 2 mm.
+ */
+function plateMarginMm(spec: DialSpec, faceType: Exclude<FaceType, 'polar'>): number {
+  const holes = spec.holes;
+  const fixed = holes.count > 0 ? holes.inset + holes.diameter / 2 + 2 : 0;
+  if (faceType !== 'equatorial') return Math.max(spec.plate.margin, fixed);
+  const washer = holes.count > 0 ? holes.inset + (screwForHole(holes.diameter) ?? METRIC_SIZES[0]).washerOdMm / 2 + 1 : 0;
+  const rails = spec.face?.side === 'both' ? equatorialSeatRailWidthMm(spec) + 2 : 0;
+  return Math.max(spec.plate.margin, fixed, washer, rails);
 }
 
 function summariseLeftOut(left: readonly LeftOutHour[]): string {

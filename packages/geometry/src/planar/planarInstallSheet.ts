@@ -24,6 +24,18 @@ export interface PlanarInstallSheet {
   readonly cautions: readonly string[];
 }
 
+/**
+ * What a build of a plate engraved on both faces says of its stand: the
+ * stand (cheeks, seat rails, hub) stands under the plate, on the lower
+ * face's side, so it can shade that face. Measured on
+ * fixtures/planar/equatorial-both.yaml by rays from the lower face's lines
+ * toward the Sun at their hours (the ray test of test/equatorialStand.test.ts):
+ * at the winter solstice the 07:30 and 16:30 lines, at declination −12° every
+ * line from sunrise to 07:30 and from 16:30, near the equinoxes the outer
+ * ends of most lines.
+ */
+export const LOWER_FACE_STAND_NOTE = "the stand stands under the lower face: its cheeks shade the lower face's lines near 6 o'clock when the winter Sun is low across the plate, and the outer ends of more lines in the weeks around the equinoxes";
+
 const f1 = (x: number) => x.toFixed(1);
 const f2 = (x: number) => x.toFixed(2);
 
@@ -70,12 +82,15 @@ export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
       );
       break;
     case 'equatorial':
+      if (layout.lowerFace) steps.push(twoFaceStep(layout));
       if (equatorialStandApplies(layout)) {
         steps.push(...equatorialStandSteps(layout));
         break;
       }
       steps.push(
-        `The plate lies square to the Earth's axis: tilt it ${f2(90 - Math.abs(lat))}° from the horizontal (90° − |latitude|), its ${spec.face!.side} face toward the ${spec.face!.side === 'upper' ? `celestial ${pole} pole` : `${eqWard}ern sky`}.`,
+        spec.face!.side === 'both'
+          ? `The plate lies square to the Earth's axis: tilt it ${f2(90 - Math.abs(lat))}° from the horizontal (90° − |latitude|), its upper face toward the celestial ${pole} pole, its lower face toward the ${eqWard}ern sky.`
+          : `The plate lies square to the Earth's axis: tilt it ${f2(90 - Math.abs(lat))}° from the horizontal (90° − |latitude|), its ${spec.face!.side} face toward the ${spec.face!.side === 'upper' ? `celestial ${pole} pole` : `${eqWard}ern sky`}.`,
         `Turn it so the 12 line points straight down the slope, on the true meridian; the rod then points at the celestial ${pole} pole.`,
         `Push the rod (${f1(layout.gnomon.thicknessMm)} mm diameter) through the centre hole until ${f1(layout.gnomon.heightMm)} mm stands above each face; the rod's shadow is a band centred on the line.`,
       );
@@ -98,6 +113,16 @@ export function planarInstallSheet(layout: PlanarLayout): PlanarInstallSheet {
     fasteners: faceFasteners(layout),
     cautions: INSTALL_CAUTIONS,
   };
+}
+
+/**
+ * The plate engraved on both faces: which face is read when, and how the
+ * shop makes it (side 1, the turn about the flip axis, side 2).
+ */
+function twoFaceStep(layout: PlanarLayout): string {
+  const north = layout.spec.site.latitude >= 0;
+  const lower = layout.lowerFace!;
+  return `The plate is engraved on both faces. The upper face (toward the celestial ${north ? 'north' : 'south'} pole) is read from the ${north ? 'March to the September' : 'September to the March'} equinox, the lower face the other half of the year; around the equinoxes the Sun grazes both. Making it: cut the plate and engrave the upper face (plate.dxf's LINE_SCORE and TEXT_ENGRAVE layers, the programs without -lower), then turn the plate over about its flip axis, the vertical centre line through the rod hole (x = ${f1(layout.plate.widthMm / 2)} mm; left edge to right), and engrave the lower face (the _LOWER layers, the programs ending -lower) from the same corner: the outline and holes fall where they were. The lower face carries ${lower.marks.filter((m) => !m.underGnomon).length} lines, the upper ${layout.marks.filter((m) => !m.underGnomon).length}.${equatorialStandApplies(layout) ? ` Note: ${LOWER_FACE_STAND_NOTE}.` : ''}`;
 }
 
 /**

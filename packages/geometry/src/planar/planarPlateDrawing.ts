@@ -10,7 +10,9 @@ import type { PlanarLayout } from './layoutPlanar.ts';
  * programs read every face type alike. Face coordinates move to plate
  * coordinates by (substyleX, faceOriginY). References (never cut): the
  * substyle, the gnomon's footprint and, on a wall whose substyle leans, the
- * plumb line through the face origin.
+ * plumb line through the face origin. An equatorial plate engraved on both
+ * faces adds its lower face (`lowerFace`), as seen from below after turning
+ * the plate over about its vertical centre line, the rod's line.
  *
  * @example planarPlateDrawing(layoutPlanar(spec)).lines.length
  */
@@ -44,5 +46,9 @@ export function planarPlateDrawing(layout: PlanarLayout): PlateDrawing {
     const box = { xMinMm: -dx, xMaxMm: plate.widthMm - dx, yMinMm: -dy, yMaxMm: plate.lengthMm - dy };
     for (const piece of clipPolyline([[-u[0] * r, -u[1] * r], [u[0] * r, u[1] * r]], box)) reference.push({ label: 'plumb line', path: path(piece) });
   }
-  return assemblePlateDrawing(plate, { lines, text, reference });
+  const drawing = assemblePlateDrawing(plate, { lines, text, reference });
+  if (!layout.lowerFace) return drawing;
+  // The lower face's own drawing is already in the turned plate's coordinates: the rod lies on the flip axis.
+  const lower = planarPlateDrawing(layout.lowerFace);
+  return { ...drawing, lowerFace: { flipAxisX: plate.widthMm / 2, lines: lower.lines, text: lower.text } };
 }

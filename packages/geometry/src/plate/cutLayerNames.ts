@@ -14,6 +14,10 @@
  * - MARK_CENTRE_NO_CUT: the marks' centre-lines when the marks are drawn as
  *   etch outlines (read back by `umbrafab check --plate`); off and
  *   non-plotting.
+ * - the same four engraving layers with `_LOWER` before any `_NO_CUT`: an
+ *   equatorial plate's lower face (face.side both), drawn as seen from
+ *   below once the plate is turned over about its flip axis; the layers
+ *   without it are then the upper face's.
  */
 export const CUT_LAYER_NAMES = {
   cut: 'CUT_PROFILE',
@@ -22,6 +26,10 @@ export const CUT_LAYER_NAMES = {
   text: 'TEXT_ENGRAVE',
   reference: 'REFERENCE_NO_CUT',
   markCentres: 'MARK_CENTRE_NO_CUT',
+  scoreLower: 'LINE_SCORE_LOWER',
+  etchLower: 'LINE_ETCH_OUTLINE_LOWER',
+  textLower: 'TEXT_ENGRAVE_LOWER',
+  markCentresLower: 'MARK_CENTRE_LOWER_NO_CUT',
 } as const;
 
 export type CutLayerKey = keyof typeof CUT_LAYER_NAMES;

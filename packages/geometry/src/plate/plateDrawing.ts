@@ -36,6 +36,21 @@ export interface PlateDrawing {
   readonly text: readonly DrawnText[];
   /** Lines for checking, never cut: the substyle, the gnomon's footprint, the 45° check. */
   readonly reference: readonly { readonly label: string; readonly path: Path }[];
+  /** An equatorial plate engraved on both faces (face.side both): its lower face. */
+  readonly lowerFace?: LowerFaceDrawing;
+}
+
+/**
+ * The lower face of a plate engraved on both faces, drawn as seen from below
+ * once the plate is turned over about its flip axis, the vertical line
+ * x = flipAxisX (left edge to right): plate coordinates of the turned plate,
+ * in which the outline and the holes, symmetric about that axis, lie where
+ * they lay before the turn, so they register the second side's job.
+ */
+export interface LowerFaceDrawing {
+  readonly flipAxisX: number;
+  readonly lines: readonly DrawnLine[];
+  readonly text: readonly DrawnText[];
 }
 
 /** The plate's outer profile in plate coordinates: a rounded rectangle from the origin at its lower-left corner. */

@@ -55,6 +55,8 @@ export type PlanarCurveCheck = CurveCheck;
 
 export interface PlanarCheckResult {
   readonly faceType: PlanarLayout['faceType'];
+  /** an equatorial face: which of the plate's faces this is */
+  readonly side?: 'upper' | 'lower';
   readonly year: number;
   readonly toleranceMm: number;
   /** tolerance of the date lines and mean-time curves, mm: the same as the lines' (they are sampled finely enough, `planarMeanTimeCurve`) */
@@ -167,6 +169,7 @@ export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = 
     .sort((p, q) => Math.abs(q.errorMm) - Math.abs(p.errorMm) || p.label.localeCompare(q.label));
   return {
     faceType: layout.faceType,
+    ...(layout.faceType === 'equatorial' ? { side: layout.spec.face?.side === 'lower' ? ('lower' as const) : ('upper' as const) } : {}),
     year,
     toleranceMm,
     curveToleranceMm: toleranceMm,

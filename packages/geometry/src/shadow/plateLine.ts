@@ -16,6 +16,24 @@ export interface PlateLine {
  */
 export const MARK_LAYERS = { score: CUT_LAYER_NAMES.score, centres: CUT_LAYER_NAMES.markCentres, etch: CUT_LAYER_NAMES.etch } as const;
 
+/** The same layers of an equatorial plate's lower face (face.side both), drawn as seen from below. */
+export const LOWER_MARK_LAYERS = { score: CUT_LAYER_NAMES.scoreLower, centres: CUT_LAYER_NAMES.markCentresLower, etch: CUT_LAYER_NAMES.etchLower } as const;
+
+/**
+ * The lower face's lines of a plate drawing, each on the mark layer it
+ * stands for (LINE_SCORE_LOWER as LINE_SCORE, …), so the lower face is read
+ * back as any face is; the upper face's lines are left out.
+ * @example planarMarksFromPlate(layout.lowerFace, lowerFacePlateLines(readPlateDxf('plate.dxf').lines))
+ */
+export function lowerFacePlateLines(lines: readonly PlateLine[]): PlateLine[] {
+  const as = new Map<string, string>([
+    [LOWER_MARK_LAYERS.score, MARK_LAYERS.score],
+    [LOWER_MARK_LAYERS.centres, MARK_LAYERS.centres],
+    [LOWER_MARK_LAYERS.etch, MARK_LAYERS.etch],
+  ]);
+  return lines.filter((l) => as.has(l.layer)).map((l) => ({ ...l, layer: as.get(l.layer)! }));
+}
+
 /** Farthest a drawn line may sit from its mark's layout position and still be taken for it, mm. */
 export const MATCH_RADIUS_MM = 5;
 

@@ -1,4 +1,4 @@
-import type { DrawnLine, DrawnText } from '../plate/plateDrawing.ts';
+import type { DrawnLine, DrawnText, LowerFaceDrawing } from '../plate/plateDrawing.ts';
 import type { Circle, Path } from '../types.ts';
 
 /**
@@ -23,6 +23,8 @@ export interface SheetPart {
   /** Engraved lines and text on the part (single-stroke centre lines), if any. */
   readonly lines?: readonly DrawnLine[];
   readonly text?: readonly DrawnText[];
+  /** The plate's lower face (an equatorial plate engraved on both faces), drawn as seen from below once the part is turned over about its flip axis. */
+  readonly lowerFace?: LowerFaceDrawing;
   /** Lines for checking, never cut (the plate's substyle, the gnomon's face line), if any. */
   readonly reference?: readonly { readonly label: string; readonly path: Path }[];
 }

@@ -60,6 +60,7 @@ export function plateSheetPart(drawing: PlateDrawing, o: FlatPartOptions): Sheet
     lines: drawing.lines,
     text: drawing.text,
     reference: drawing.reference,
+    ...(drawing.lowerFace ? { lowerFace: drawing.lowerFace } : {}),
   };
 }
 

@@ -4,6 +4,9 @@ import { boundedNumber as num } from '../boundedNumber.ts';
 /** The planar dial kinds (our names; docs/design.md §8). */
 export const FACE_TYPES = ['polar', 'horizontal', 'vertical', 'meridian', 'equatorial'] as const;
 export type FaceType = (typeof FACE_TYPES)[number];
+/** The faces of an equatorial plate a spec asks for (`face.side`). */
+export const EQUATORIAL_SIDES = ['upper', 'lower', 'both'] as const;
+export type EquatorialSide = (typeof EQUATORIAL_SIDES)[number];
 
 const oneOf = <const T extends readonly [string, ...string[]]>(values: T) =>
   z.enum(values, { error: `allowed: ${values.map((v) => JSON.stringify(v)).join(', ')}` });
@@ -24,6 +27,6 @@ export const faceSection = z
     wallDeclination: num({ min: -180, max: 180, unit: '°' }).default(0).describe('vertical: degrees the wall turns from facing the equator (due south in the north), positive toward the west, e.g. 25 for a wall facing south-south-west; `umbrafab wall` measures it'),
     reclination: num({ min: -75, max: 75, unit: '°' }).default(0).describe('vertical: degrees the face leans back from upright (negative: leans forward)'),
     facing: oneOf(['east', 'west']).default('east').describe('meridian: the horizon the face looks at'),
-    side: oneOf(['upper', 'lower']).default('upper').describe('equatorial: the face drawn on plate.dxf, upper (toward the elevated pole, sunlit from the March to the September equinox in the north) or lower (the other half of the year)'),
+    side: oneOf(EQUATORIAL_SIDES).default('upper').describe('equatorial: the faces engraved, upper (toward the elevated pole, sunlit from the March to the September equinox in the north) or lower (the other half of the year) alone, or both (one plate read on its upper face in the summer half of the year and on its lower face in the winter half)'),
   })
   .optional();
