@@ -15,7 +15,7 @@ import { strokeText, strokeTextWidthMm } from '../text/strokeText.ts';
 import type { Circle, Hemisphere, MarkKind, TextBlock, Vec2 } from '../types.ts';
 import { litDeclinations } from './faceSeesSun.ts';
 import { hourLine } from './hourLine.ts';
-import { planarDateLine } from './planarDateLine.ts';
+import { planarSiteDateLine } from './planarDateLine.ts';
 import { planarFace } from './planarFace.ts';
 import { planarMeanTimeCurve } from './planarMeanTimeCurve.ts';
 import type { FaceOrientation, FinEdge, PlanarFace } from './planarTypes.ts';
@@ -30,7 +30,7 @@ import { markKindAt } from '../clock/markKind.ts';
 const BAND_GAP_MM = 3;
 /** Least style height for a fin rising from a root: below it the fin would be more than 11 gnomon heights long. */
 export const MIN_STYLE_HEIGHT_DEG = 5;
-/** Hour-angle step of the date lines, degrees. */
+/** First hour-angle step of the date lines, degrees (then halved to the chord tolerance, `planarSiteDateLine`). */
 const DATE_LINE_STEP_DEG = 0.25;
 
 /** One line on a planar face, face coordinates of the plate frame (see `plateFrame`), mm. */
@@ -493,7 +493,7 @@ function planarCurves(spec: DialSpec, face: PlanarFace, model: PlanarGnomon, gno
   for (const e of dateLineEntries(spec)) {
     if (seen.some((d) => Math.abs(d - e.declinationRad) < 0.1 * DEG)) continue;
     seen.push(e.declinationRad);
-    keep(e.label, 'date', planarDateLine(face, model, e.declinationRad, hours, along));
+    keep(e.label, 'date', planarSiteDateLine(face, model, { declinationRad: e.declinationRad, distanceAu: e.distanceAu, hourAngles: hours, alongStyleMm: along }));
   }
   if (spec.dial.meanTimeCurves) {
     const whole = [...new Set(marks.filter((m) => m.kind === 'hour').map((m) => m.minutes))];

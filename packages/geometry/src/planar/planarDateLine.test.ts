@@ -1,6 +1,9 @@
+import { Body, Equator, MakeTime, Observer, SiderealTime } from 'astronomy-engine';
 import { describe, expect, it } from 'vitest';
+import { distanceToPaths } from '../shadow/curveCheck.ts';
 import { DEG } from '../guards.ts';
-import { planarDateLine } from './planarDateLine.ts';
+import { nodusShadowOf, planarDateLine, planarSiteDateLine } from './planarDateLine.ts';
+import { sunDirectionEnu } from './sunDirectionEnu.ts';
 import { planarFace } from './planarFace.ts';
 import { planarMeanTimeCurve } from './planarMeanTimeCurve.ts';
 
@@ -47,5 +50,42 @@ describe('date lines of a nodus on any face', () => {
     // E ranges about −14…+16 min (common practice): ±(3.5°…4°) of hour angle, a few mm either side at 80 mm.
     expect(Math.min(...xs)).toBeLessThan(-3);
     expect(Math.max(...xs)).toBeGreaterThan(3);
+  });
+
+  it('seen from the site: within 0.0005 mm of the nodus shadow of astronomy-engine\'s site-based Sun at the line\'s declination (a declining wall and a horizontal face)', () => {
+    // Reference (astronomy-engine): through 21 June 2027 every 2 minutes, the real Sun's parallax (topocentric
+    // Equator from Observer(47.4° N, 8.5° E) minus geocentric) applied to the line's declination, then the nodus shadow.
+    const LAT = 47.4;
+    const LON = 8.5;
+    const site = new Observer(LAT, LON, 0);
+    const centre = new Observer(0, 0, -6378136.6);
+    const g = { thicknessMm: 4, heightMm: 90 };
+    const dec = 23.4 * DEG;
+    for (const face of [planarFace({ type: 'vertical', latitudeRad: LAT * DEG, declinationRad: 24.5 * DEG }), planarFace({ type: 'horizontal', latitudeRad: LAT * DEG })]) {
+      const runs = planarSiteDateLine(face, g, { declinationRad: dec, distanceAu: 1.016, hourAngles: hours.filter((_, i) => i % 5 === 0) });
+      // As drawn before: the geocentric Sun every 0.25° of hour angle.
+      const geo = planarDateLine(face, g, dec, Array.from({ length: 561 }, (_, i) => (-70 + i / 4) * DEG));
+      let worst = 0;
+      let worstGeo = 0;
+      let n = 0;
+      for (let ms = Date.UTC(2027, 5, 21, 3); ms < Date.UTC(2027, 5, 21, 19); ms += 120_000) {
+        const t = MakeTime(new Date(ms));
+        const topo = Equator(Body.Sun, t, site, true, true);
+        const gc = Equator(Body.Sun, t, centre, true, true);
+        const H = ((((SiderealTime(t) * 15 + LON - topo.ra * 15 + 540) % 360) - 180) * DEG);
+        if (Math.abs(H) > 68 * DEG) continue;
+        const X = nodusShadowOf(face, g, { sun: sunDirectionEnu(LAT * DEG, H, dec + (topo.dec - gc.dec) * DEG), hourAngleRad: H });
+        if (!X || Math.hypot(X.point[0], X.point[1]) > 400) continue;
+        const d = distanceToPaths(X.point, runs.map((r) => r.points));
+        const dGeo = distanceToPaths(X.point, geo.map((r) => r.points));
+        if (d === null || dGeo === null) continue;
+        worst = Math.max(worst, d);
+        worstGeo = Math.max(worstGeo, dGeo);
+        n++;
+      }
+      console.log(`${face.orientation.type}: site-based ${worst.toExponential(2)} mm, geocentric every 0.25° ${worstGeo.toExponential(2)} mm, over ${n} Sun positions`);
+      expect(n).toBeGreaterThan(100);
+      expect(worst).toBeLessThan(0.00051);
+    }
   });
 });

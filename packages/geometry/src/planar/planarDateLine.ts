@@ -1,3 +1,6 @@
+import { refineByChord, CURVE_CHORD_TOLERANCE_MM } from '../calendar/refineByChord.ts';
+import { DEG } from '../guards.ts';
+import { observerMeridianAu, topocentricSun } from '../sun/topocentricSun.ts';
 import type { Vec2 } from '../types.ts';
 import { faceSeesSun } from './faceSeesSun.ts';
 import { nodusPoint } from './nodusPoint.ts';
@@ -31,6 +34,43 @@ export function planarDateLine(face: PlanarFace, gnomon: PlanarGnomon, declinati
     hourAngles.map((H) => ({ sun: sunDirectionEnu(phi, H, declinationRad), hourAngleRad: H })),
     alongStyleMm,
   );
+}
+
+/** Options of `planarSiteDateLine`. */
+export interface PlanarSiteDateLineOptions {
+  /** the line's declination seen from the Earth's centre, north positive */
+  readonly declinationRad: number;
+  /** the Sun's distance on the line's date, AU */
+  readonly distanceAu: number;
+  /** the first hour angles, radians, ascending (refined between them) */
+  readonly hourAngles: readonly number[];
+  readonly alongStyleMm?: number;
+  /** largest distance of the line from a drawn chord, mm (default `CURVE_CHORD_TOLERANCE_MM`, 0.0005) */
+  readonly chordToleranceMm?: number;
+}
+
+/** Halvings of a first step at most. */
+const MAX_HALVINGS = 12;
+
+/**
+ * The date line of declination δ as the site sees it: `planarDateLine`'s
+ * nodus shadow, with the Sun at δ and each hour angle moved from the
+ * Earth's centre to the site (`topocentricSun`: the diurnal parallax, up to
+ * 8.8″, a few µm on the face), each step between the given hour angles
+ * halved while the line strays more than `chordToleranceMm` from its chord
+ * (`refineByChord`); split into runs as `planarDateLine`.
+ *
+ * @example planarSiteDateLine(face, { thicknessMm: 0, heightMm: 90 }, { declinationRad: 0.409, distanceAu: 1.016, hourAngles: [-1, 0, 1] })
+ */
+export function planarSiteDateLine(face: PlanarFace, gnomon: PlanarGnomon, options: PlanarSiteDateLineOptions): readonly NodusTrace[] {
+  const phi = face.orientation.latitudeRad;
+  const observer = observerMeridianAu(phi / DEG, 0);
+  const at = (H: number) => {
+    const seen = topocentricSun(H, options.declinationRad, options.distanceAu, phi, observer);
+    return nodusShadowOf(face, gnomon, { sun: seen.enu, hourAngleRad: seen.hourAngleRad }, options.alongStyleMm);
+  };
+  const toleranceMm = options.chordToleranceMm ?? CURVE_CHORD_TOLERANCE_MM;
+  return shadowRuns(refineByChord(options.hourAngles, at, { toleranceMm, maxHalvings: MAX_HALVINGS, sameRun: (a, b) => a.edge === b.edge }));
 }
 
 /** One Sun position of a date line or mean-time curve. */

@@ -43,7 +43,10 @@ export interface DateLineEntry {
   readonly label: string;
   readonly engraved: string;
   readonly date: string;
+  /** the Sun's geocentric apparent declination, north positive */
   readonly declinationRad: number;
+  /** the Sun's distance on that date (at 12:00 UT), AU: for its parallax as seen from the site */
+  readonly distanceAu: number;
   readonly custom: boolean;
 }
 
@@ -103,7 +106,7 @@ export function dateLineEntries(spec: DialSpec): DateLineEntry[] {
       if (!pick) continue;
       const ms = l.dateUtc.getTime();
       const date = formatIsoDate(ms + offsetHoursAt(zone, ms) * 3_600_000);
-      out.push({ label: l.label, engraved: shortDate(date), date, declinationRad: l.declinationRad, custom: false });
+      out.push({ label: l.label, engraved: shortDate(date), date, declinationRad: l.declinationRad, distanceAu: distanceOn(date), custom: false });
     }
   }
   spec.calendar.dates.forEach((d, i) => {
@@ -113,9 +116,14 @@ export function dateLineEntries(spec: DialSpec): DateLineEntry[] {
     } catch {
       throw new SpecError(`calendar.dates.${i}.date`, d.date, `allowed: a real date in ${year} written "MM-DD"`);
     }
-    out.push({ label: d.label, engraved: d.label, date, declinationRad: declinationOnDate(date, spec.site.longitude), custom: true });
+    out.push({ label: d.label, engraved: d.label, date, declinationRad: declinationOnDate(date, spec.site.longitude), distanceAu: distanceOn(date), custom: true });
   });
   return out;
+}
+
+/** The Sun's distance at 12:00 UT of a date, AU (it changes by at most 0.0003 AU a day). */
+function distanceOn(date: string): number {
+  return sunEquatorOfDate(new Date(Date.parse(`${date}T12:00:00Z`))).distanceAu;
 }
 
 /** "2027-06-21" → "21 JUN". */
@@ -133,8 +141,7 @@ function lineBranches(layout: DialLayout, entry: DateLineEntry): FacePolyline[] 
   const reach = Math.max(-f.xMinMm, f.xMaxMm) - t / 2;
   if (!(reach > 0)) return [];
   const maxHourAngleRad = Math.min(Math.atan(reach / h) + END_MARGIN_RAD, 89 * DEG);
-  const distanceAu = sunEquatorOfDate(new Date(Date.parse(`${entry.date}T12:00:00Z`))).distanceAu;
-  const b = siteDateLine({ declinationRad: entry.declinationRad, distanceAu, latitudeDeg: layout.spec.site.latitude, heightMm: h, thicknessMm: t, hemisphere: layout.hemisphere, maxHourAngleRad });
+  const b = siteDateLine({ declinationRad: entry.declinationRad, distanceAu: entry.distanceAu, latitudeDeg: layout.spec.site.latitude, heightMm: h, thicknessMm: t, hemisphere: layout.hemisphere, maxHourAngleRad });
   const box = { xMinMm: f.xMinMm, xMaxMm: f.xMaxMm, yMinMm: f.yMinMm - ny, yMaxMm: f.yMaxMm - ny };
   return [b.west, b.east].flatMap((p) => clipPolyline(p, box)).sort((p, q) => p[0][0] - q[0][0]);
 }

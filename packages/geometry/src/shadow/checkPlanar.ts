@@ -12,7 +12,8 @@ import { planarGnomonSolid } from '../planar/planarGnomonSolid.ts';
 import type { FinEdge } from '../planar/planarTypes.ts';
 import { sunDirectionEnu } from '../planar/sunDirectionEnu.ts';
 import { checkSampling } from './checkSampling.ts';
-import { insideBox, measureCurve, nearestDay, projectOnFace, type CurveCheck, type CurveSunPosition } from './curveCheck.ts';
+import { topocentricSun } from '../sun/topocentricSun.ts';
+import { DATE_LINE_TEST_STEP_DEG, insideBox, measureCurve, nearestDay, projectOnFace, type CurveCheck, type CurveSunPosition } from './curveCheck.ts';
 import { markErrorSummary, newMarkErrorTally, tallyReached } from './markErrorTally.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
 
@@ -90,9 +91,10 @@ export interface PlanarCheckResult {
  *    error is the perpendicular distance of that shadow from the drawn line
  *    where the shadow overlaps it, and in seconds through the shadow's
  *    speed across the line (the Sun turned by one second of hour angle);
- * 3. date lines: on each line's date, at the hour angles of the sweep, the
- *    nodus (the style's point at `nodusAlongStyleMm` on the mesh edge) cast
- *    with the declination held at the line's own (the drawing's claim);
+ * 3. date lines: on each line's date, every 0.1° of hour angle, the nodus
+ *    (the style's point at `nodusAlongStyleMm` on the mesh edge) cast by
+ *    the Sun at the line's own declination seen from the site
+ *    (`topocentricSun`: the drawing's claim);
  *    mean-time curves: the real Sun at the curve's clock time on every
  *    simulated day. Each: distance of the shadow from the drawn polyline.
  *
@@ -185,7 +187,7 @@ export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = 
       'instant: topocentric hour angle = the line\'s hour angle (Newton on the track)',
       part.kind === 'rod' ? 'shadow: the centre of the rod mesh\'s top, projected along the rays onto the face' : 'shadow: the style edges found in the fin mesh (planarGnomonSolid), projected along the rays onto the face',
       'error: perpendicular distance of the shadow from the drawn line where they overlap; seconds: that distance over the shadow\'s motion in one second of hour angle',
-      `curves: nodus on the mesh's style edge; date lines at the line's declination on its date; mean-time curves with the real Sun at the clock time; distance to the drawn polyline, tolerance ${toleranceMm} mm as for the lines`,
+      `curves: nodus on the mesh's style edge; date lines every 0.1° of hour angle on their date, the Sun at the line's declination seen from the site; mean-time curves with the real Sun at the clock time; distance to the drawn polyline, tolerance ${toleranceMm} mm as for the lines`,
     ],
     marks,
     curves,
@@ -308,13 +310,11 @@ function checkCurves(
       const e = entries.find((en) => curve.label === en.label) ?? entries.find((en) => curve.label.startsWith(en.label));
       if (!e) continue;
       const day = nearestDay(days, e.date);
-      // Between the drawn vertices (0.25° apart) as well as on them: 0.125° off, every 0.5°.
-      for (let Hd = Math.min(...hs) + 0.125; Hd <= Math.max(...hs); Hd += 0.5) {
-        const t = instantAtHourAngle(track, day, Hd * DEG);
-        const s = sunOnDay(track, day, t);
-        if (!isLit(s)) continue;
-        // The real hour angle of that instant, the declination held at the line's.
-        positions.push(at(sunDirectionEnu(phi, s.hourAngleRad, e.declinationRad), s.hourAngleRad, day.date));
+      // Every 0.1° of hour angle across the lines, the Sun at the line's declination seen from the site (what the line claims).
+      for (let Hd = Math.min(...hs) + DATE_LINE_TEST_STEP_DEG / 2; Hd <= Math.max(...hs); Hd += DATE_LINE_TEST_STEP_DEG) {
+        const seen = topocentricSun(Hd * DEG, e.declinationRad, e.distanceAu, phi, track.observerAu);
+        if (!(seen.enu[2] > 0)) continue;
+        positions.push(at(seen.enu, seen.hourAngleRad, day.date));
       }
     } else {
       const minutes = parseClock('curve', curve.label.slice(0, 5));

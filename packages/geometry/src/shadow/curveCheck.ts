@@ -2,6 +2,9 @@ import type { Vec3 } from '../parts/mesh.ts';
 import type { SunDay } from '../sun/sunTrack.ts';
 import type { Vec2 } from '../types.ts';
 
+/** Hour-angle step of a date line's test positions in both checks, degrees (started half a step in from the first line). */
+export const DATE_LINE_TEST_STEP_DEG = 0.1;
+
 /** The year's result for one date line or mean-time curve (the polar and the planar check). */
 export interface CurveCheck {
   readonly label: string;

@@ -9,7 +9,7 @@ import { parseClock } from '../spec/parseClock.ts';
 import { instantAtHourAngle, sunOnDay, type SunTrack } from '../sun/sunTrack.ts';
 import { topocentricSun } from '../sun/topocentricSun.ts';
 import type { StyleEdge, Vec2 } from '../types.ts';
-import { insideBox, measureCurve, nearestDay, type CurveCheck, type CurveSunPosition, type DrawnCurve } from './curveCheck.ts';
+import { DATE_LINE_TEST_STEP_DEG, insideBox, measureCurve, nearestDay, type CurveCheck, type CurveSunPosition, type DrawnCurve } from './curveCheck.ts';
 import { toDialFrame, type DialFrame } from './dialFrame.ts';
 import type { Edge3 } from './styleEdges.ts';
 
@@ -24,9 +24,6 @@ export interface PolarCurveSetting {
   readonly nodusYMm: number | null;
   readonly toleranceMm: number;
 }
-
-/** Hour-angle step of a date line's test positions, degrees, started half a step in from the first line. */
-const DATE_LINE_TEST_STEP_DEG = 0.1;
 
 /** The layout's own date lines and mean-time curves as drawn (face coordinates: date lines moved from the nodus foot). */
 export function drawnCurvesFromLayout(layout: DialLayout): DrawnCurve[] {
