@@ -72,7 +72,7 @@ export const checkCommand: CommandModule = {
       // The date lines and curves first (the polylines of many points), then the marks from the other lines.
       const curves = curvesFromPlate(drawnCurvesFromLayout(layout), plate.lines, layout.plate);
       const found = marksFromPlate(layout, plate.lines.filter((l) => !curves.taken.has(l)));
-      result = checkDial(layout, { drawn: found.drawn, source: 'plate', ...(curves.curves ? { curves: curves.curves, curveSource: 'plate' as const } : {}) });
+      result = checkDial(layout, { drawn: found.drawn, source: 'plate', ...(curves.curves?.length ? { curves: curves.curves, curveSource: 'plate' as const } : {}) });
       if (curves.curves === null) io.out(`note: ${args.plate} has no centre-lines of its date lines and curves (etched outlines only); they are checked from the layout`);
       if (found.unmatched.length) io.out(`note: ${found.unmatched.length} line(s) in ${args.plate} match no mark, date line or curve of the spec (first at face x ${found.unmatched[0][0].toFixed(2)} mm, y ${found.unmatched[0][1].toFixed(2)} mm); they are not checked`);
     } else {
