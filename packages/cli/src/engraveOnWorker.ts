@@ -35,10 +35,10 @@ export interface WorkerError {
  * One build's engraving on a worker thread (engraveWorker.ts), for
  * `umbrafab build`: the toolpaths, the laser fill and the program texts are
  * most of a laser build's CPU time and need nothing the other outputs make,
- * so on two cores they run beside them. Start it first thing (the worker
- * loads its code while this thread reads the spec and lays out the dial);
- * `engrave` hands it the spec and plate drawing once, and the worker stops
- * once it has answered.
+ * so on two cores they run beside them. Start it once the spec is read (a
+ * refused spec costs no thread; the worker loads its code while this thread
+ * lays out the dial); `engrave` hands it the spec and plate drawing once, and
+ * the worker stops once it has answered.
  *
  * The same function runs there on the same plain data (structured clone
  * copies every number exactly), so the files are byte for byte those of an

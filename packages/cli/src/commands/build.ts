@@ -12,21 +12,22 @@ export const buildCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
-    // The engraving worker first: it loads its code while this thread loads its own and reads the spec.
-    const { engraveOnWorker } = await import('../engraveOnWorker.ts');
-    const engraveWorker = engraveOnWorker();
-    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }, { countMarks, markCountText }] = await Promise.all([import('../buildFiles.ts'), import('../readSpec.ts'), import('../writeFilesAtomic.ts'), import('@umbrafab/geometry')]);
+    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }, { countMarks, markCountText }, { engraveOnWorker }] = await Promise.all([
+      import('../buildFiles.ts'),
+      import('../readSpec.ts'),
+      import('../writeFilesAtomic.ts'),
+      import('@umbrafab/geometry'),
+      import('../engraveOnWorker.ts'),
+    ]);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
-    const { spec, result } = await (async () => {
-      try {
-        assertOutFolder(outDir);
-        const read = readSpecFile(args.spec);
-        engraveWorker?.prepare(read);
-        return { spec: read, result: await buildAnyFiles(read, engraveWorker) };
-      } finally {
-        engraveWorker?.close(); // its work is done, or not needed after a refusal
-      }
-    })();
+    assertOutFolder(outDir);
+    const spec = readSpecFile(args.spec);
+    // The engraving worker once the spec is good (a refused spec starts no thread): it loads its
+    // code (and manifold-3d for a filled laser program) while this thread lays out the dial.
+    const engraveWorker = engraveOnWorker();
+    engraveWorker?.prepare(spec);
+    // Stopped once the build is done (its work is in) or failed (not needed).
+    const result = await buildAnyFiles(spec, engraveWorker).finally(() => engraveWorker?.close());
     const { recovered } = writeFilesAtomic(outDir, result.files, args.force);
     if (recovered) io.out(`note: ${outDir}: ${recovered}`);
     const p = result.layout.plate;
