@@ -182,7 +182,7 @@ export function polarTemplateGuide(ctx: BuildContext): TemplateGuide | null {
   if (!ctx.spec.template.write) return null;
   const { input, tOpts } = polarTemplateInput(ctx);
   const plan = templateDrawings({ drawing: ctx.drawing, ...input }, tOpts);
-  return { paper: templateTiles(ctx.drawing, tOpts).paper, pages: plan.pages, drawings: plan.drawings, tableSheets: plan.tableSheets, tableLists: "each line's distance from the style edge (the gnomon's side) at the line's middle, mm", checkSheet: plan.checkSheet };
+  return { paper: templateTiles(ctx.drawing, tOpts).paper, pages: plan.pages, drawings: plan.drawings, tableSheets: plan.tableSheets, tableLists: "each line's distance from the style edge (the gnomon's side) at the line's middle, mm", checkSheet: plan.checkSheet, printed: ctx.spec.process.method === 'print' };
 }
 
 /** template.pdf and the report's `template` section. */

@@ -109,7 +109,7 @@ async function planarTemplate(spec: DialSpec, layout: PlanarLayout, drawing: Pla
     drawings.push({ label: p.label, firstSheet: next, lastSheet: next + n - 1 });
     next += n;
   });
-  const guide: TemplateGuide = { paper: tiles.plate.paper, pages: tiles.pages, drawings, tableSheets: [plateSheets + 1, tableLast], tableLists: "the ends of every line and the hole centres, mm from the plate's lower-left corner" };
+  const guide: TemplateGuide = { paper: tiles.plate.paper, pages: tiles.pages, drawings, tableSheets: [plateSheets + 1, tableLast], tableLists: "the ends of every line and the hole centres, mm from the plate's lower-left corner", printed: spec.process.method === 'print' };
   return {
     files: [{ name: 'template.pdf', bytes: pdf }],
     report: {

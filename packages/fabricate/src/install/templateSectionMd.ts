@@ -9,6 +9,8 @@ export interface TemplateGuide {
   /** the sheet(s) with the table of measurements, and what it lists (e.g. "the ends of every line and the hole centres, mm from the plate's lower-left corner") */
   readonly tableSheets: readonly [number, number];
   readonly tableLists: string;
+  /** the parts are printed, not cut from stock (process.method print): the sheets check them, nothing is scribed */
+  readonly printed?: boolean;
   /** the sheet of the 45° check triangle (the polar plate's template), absent where there is none */
   readonly checkSheet?: number;
 }
@@ -24,7 +26,7 @@ export function templateSectionMd(t: TemplateGuide): string[] {
   const entries = [
     ...t.drawings.map((d) => ({
       first: d.firstSheet,
-      text: `${range(d.firstSheet, d.lastSheet)}: the ${escapeMarkdownText(d.label)} at 1:1${d.firstSheet === d.lastSheet ? '' : ' (trim and glue the overlaps so the crosses coincide)'}. Lay the cut part on it to check the outline and the holes, or glue it on the stock to scribe, centre-punch and drill by hand.`,
+      text: `${range(d.firstSheet, d.lastSheet)}: the ${escapeMarkdownText(d.label)} at 1:1${d.firstSheet === d.lastSheet ? '' : ' (trim and glue the overlaps so the crosses coincide)'}. ${t.printed ? 'Lay the printed part on it to check the outline and the holes.' : 'Lay the cut part on it to check the outline and the holes, or glue it on the stock to scribe, centre-punch and drill by hand.'}`,
     })),
     { first: t.tableSheets[0], text: `${range(t.tableSheets[0], t.tableSheets[1])}: ${t.tableLists}, to check with a rule.` },
     ...(t.checkSheet !== undefined ? [{ first: t.checkSheet, text: `${range(t.checkSheet, t.checkSheet)}: the 45° check triangle at 1:1, to cut out and stand on the face against the style (the Assembly steps say where).` }] : []),
