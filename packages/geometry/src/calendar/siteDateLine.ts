@@ -3,7 +3,14 @@ import { observerMeridianAu, topocentricSun } from '../sun/topocentricSun.ts';
 import { assertHemisphere, declinationTowardPoleRad } from './declinationTowardPoleRad.ts';
 import { CURVE_CHORD_TOLERANCE_MM, refineByChord } from './refineByChord.ts';
 import type { FacePoint, FacePolyline, Hemisphere } from './types.ts';
-import type { DateLineBranches } from './dateLinePoints.ts';
+
+/** The two branches of a date line, one per style edge. */
+export interface DateLineBranches {
+  /** morning branch: shadow of the nodus on the west style edge */
+  readonly west: FacePolyline;
+  /** afternoon branch: shadow of the nodus on the east style edge */
+  readonly east: FacePolyline;
+}
 
 /** Options of `siteDateLine` (lengths mm, angles radians unless named Deg). */
 export interface SiteDateLineOptions {
@@ -42,7 +49,7 @@ const MAX_HALVINGS = 12;
  * with H′, δ′ the topocentric hour angle and declination and δp′ measured
  * toward the elevated pole; x east-positive in the north, mirrored in the
  * south. Without the parallax this is the handbook hyperbola
- * y = −tan δp · √(h² + (|x| − t/2)²) of `dateLinePoints`. Sampled every 1°
+ * y = −tan δp · √(h² + (|x| − t/2)²) (docs/design.md §2). Sampled every 1°
  * of H, each step halved while the curve's point at its middle lies more
  * than `chordToleranceMm` from the chord (`refineByChord`). Each branch is
  * listed by increasing face x, y from the nodus foot; not clipped.

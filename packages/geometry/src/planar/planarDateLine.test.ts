@@ -2,10 +2,22 @@ import { Body, Equator, MakeTime, Observer, SiderealTime } from 'astronomy-engin
 import { describe, expect, it } from 'vitest';
 import { distanceToPaths } from '../shadow/curveCheck.ts';
 import { DEG } from '../guards.ts';
-import { nodusShadowOf, planarDateLine, planarSiteDateLine } from './planarDateLine.ts';
+import { nodusShadowOf, planarSiteDateLine, shadowRuns, type NodusTrace } from './planarDateLine.ts';
+import type { PlanarFace } from './planarTypes.ts';
+import type { PlanarGnomon } from './styleEdgeAnchor.ts';
 import { sunDirectionEnu } from './sunDirectionEnu.ts';
 import { planarFace } from './planarFace.ts';
 import { planarMeanTimeCurve } from './planarMeanTimeCurve.ts';
+
+/**
+ * The textbook date line, the reference of these tests (no longer drawn: the layouts use the site-based
+ * `planarSiteDateLine`): the nodus shadow X = N − s (n · (N − O))/(n · s) (docs/design.md §8) with the Sun
+ * seen from the Earth's centre at a fixed declination δ, over the given hour angles, split into runs.
+ */
+function geocentricDateLine(face: PlanarFace, gnomon: PlanarGnomon, declinationRad: number, hourAngles: readonly number[]): readonly NodusTrace[] {
+  const phi = face.orientation.latitudeRad;
+  return shadowRuns(hourAngles.map((H) => nodusShadowOf(face, gnomon, { sun: sunDirectionEnu(phi, H, declinationRad), hourAngleRad: H })));
+}
 
 const hours = Array.from({ length: 141 }, (_, i) => (-70 + i) * DEG);
 
@@ -15,7 +27,7 @@ describe('date lines of a nodus on any face', () => {
     const g = { thicknessMm: 3, heightMm: 50 };
     let worst = 0;
     for (const d of [-23.44, -11.5, 11.5, 23.44]) {
-      for (const run of planarDateLine(face, g, d * DEG, hours)) {
+      for (const run of geocentricDateLine(face, g, d * DEG, hours)) {
         for (const [x, y] of run.points) worst = Math.max(worst, Math.abs(y + Math.tan(d * DEG) * Math.hypot(50, Math.abs(x) - 1.5)));
       }
     }
@@ -24,7 +36,7 @@ describe('date lines of a nodus on any face', () => {
 
   it('horizontal and declining faces: the equinox line is straight (the equinoctial line, common practice)', () => {
     for (const face of [planarFace({ type: 'horizontal', latitudeRad: 52 * DEG }), planarFace({ type: 'vertical', latitudeRad: 40 * DEG, declinationRad: 30 * DEG, reclinationRad: 10 * DEG })]) {
-      const runs = planarDateLine(face, { thicknessMm: 0, heightMm: 60 }, 0, hours);
+      const runs = geocentricDateLine(face, { thicknessMm: 0, heightMm: 60 }, 0, hours);
       const pts = runs.flatMap((r) => r.points);
       expect(pts.length).toBeGreaterThan(50);
       const [a, b] = [pts[0], pts[pts.length - 1]];
@@ -37,7 +49,7 @@ describe('date lines of a nodus on any face', () => {
   it('summer and winter lines lie on opposite sides of the equinox line on a horizontal face', () => {
     const face = planarFace({ type: 'horizontal', latitudeRad: 52 * DEG });
     const g = { thicknessMm: 0, heightMm: 60 };
-    const yAtNoon = (d: number) => planarDateLine(face, g, d * DEG, [0, 1e-6]).flatMap((r) => r.points)[0][1];
+    const yAtNoon = (d: number) => geocentricDateLine(face, g, d * DEG, [0, 1e-6]).flatMap((r) => r.points)[0][1];
     // Seen from above, north up: summer noon shadows are short (close to the root), winter ones long.
     expect(yAtNoon(23.44)).toBeLessThan(yAtNoon(0));
     expect(yAtNoon(0)).toBeLessThan(yAtNoon(-23.44));
@@ -64,7 +76,7 @@ describe('date lines of a nodus on any face', () => {
     for (const face of [planarFace({ type: 'vertical', latitudeRad: LAT * DEG, declinationRad: 24.5 * DEG }), planarFace({ type: 'horizontal', latitudeRad: LAT * DEG })]) {
       const runs = planarSiteDateLine(face, g, { declinationRad: dec, distanceAu: 1.016, hourAngles: hours.filter((_, i) => i % 5 === 0) });
       // As drawn before: the geocentric Sun every 0.25° of hour angle.
-      const geo = planarDateLine(face, g, dec, Array.from({ length: 561 }, (_, i) => (-70 + i / 4) * DEG));
+      const geo = geocentricDateLine(face, g, dec, Array.from({ length: 561 }, (_, i) => (-70 + i / 4) * DEG));
       let worst = 0;
       let worstGeo = 0;
       let n = 0;

@@ -8,32 +8,11 @@ import { nodusShadow } from './nodusShadow.ts';
 import type { FinEdge, PlanarFace } from './planarTypes.ts';
 import { hourLine } from './hourLine.ts';
 import type { PlanarGnomon } from './styleEdgeAnchor.ts';
-import { sunDirectionEnu } from './sunDirectionEnu.ts';
 
 /** A run of shadow points cast by one edge's nodus. */
 export interface NodusTrace {
   readonly edge: FinEdge;
   readonly points: readonly Vec2[];
-}
-
-/**
- * The date line (a conic) of declination δ: the nodus shadow over the given
- * hour angles (docs/design.md §8: X = N − s (n · (N − O))/(n · s) at fixed δ), each
- * point from the nodus on the edge that casts at that H (the edge of
- * `hourLine`; both edges at H₀, the first taken), kept only where the face
- * sees the Sun, and split into runs wherever the casting edge changes or
- * the Sun leaves the face.
- *
- * @param hourAngles hour angles to sample, radians, ascending
- */
-export function planarDateLine(face: PlanarFace, gnomon: PlanarGnomon, declinationRad: number, hourAngles: readonly number[], alongStyleMm?: number): readonly NodusTrace[] {
-  const phi = face.orientation.latitudeRad;
-  return nodusTraces(
-    face,
-    gnomon,
-    hourAngles.map((H) => ({ sun: sunDirectionEnu(phi, H, declinationRad), hourAngleRad: H })),
-    alongStyleMm,
-  );
 }
 
 /** Options of `planarSiteDateLine`. */
@@ -53,12 +32,15 @@ export interface PlanarSiteDateLineOptions {
 const MAX_HALVINGS = 12;
 
 /**
- * The date line of declination δ as the site sees it: `planarDateLine`'s
- * nodus shadow, with the Sun at δ and each hour angle moved from the
+ * The date line (a conic) of declination δ as the site sees it: the nodus
+ * shadow (docs/design.md §8: X = N − s (n · (N − O))/(n · s)), each point
+ * from the nodus on the edge that casts at its hour angle (`nodusShadowOf`),
+ * with the Sun at δ and each hour angle moved from the
  * Earth's centre to the site (`topocentricSun`: the diurnal parallax, up to
  * 8.8″, a few µm on the face), each step between the given hour angles
  * halved while the line strays more than `chordToleranceMm` from its chord
- * (`refineByChord`); split into runs as `planarDateLine`.
+ * (`refineByChord`); split into runs wherever the casting edge changes or
+ * the Sun leaves the face (`shadowRuns`).
  *
  * @example planarSiteDateLine(face, { thicknessMm: 0, heightMm: 90 }, { declinationRad: 0.409, distanceAu: 1.016, hourAngles: [-1, 0, 1] })
  */
@@ -89,11 +71,6 @@ export function nodusShadowOf(face: PlanarFace, gnomon: PlanarGnomon, sample: No
   const edge = set?.lines[0]?.edge;
   const X = edge ? nodusShadow(face, nodusPoint(face, gnomon, edge, alongStyleMm), sample.sun) : null;
   return edge && X ? { edge, point: X } : null;
-}
-
-/** Nodus shadows for a sequence of (Sun, hour angle) samples, split into runs (shared by date lines and mean-time curves). */
-export function nodusTraces(face: PlanarFace, gnomon: PlanarGnomon, samples: readonly NodusSample[], alongStyleMm?: number): readonly NodusTrace[] {
-  return shadowRuns(samples.map((s) => nodusShadowOf(face, gnomon, s, alongStyleMm)));
 }
 
 /** Shadow points in order (null where the face is dark) split into runs wherever the casting edge changes or the Sun leaves the face; single points dropped. */
