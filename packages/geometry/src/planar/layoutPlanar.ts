@@ -21,8 +21,10 @@ import { planarMeanTimeCurve } from './planarMeanTimeCurve.ts';
 import type { FaceOrientation, FinEdge, PlanarFace } from './planarTypes.ts';
 import { plateFrame, substyleFromVerticalRad } from './plateFrame.ts';
 import { isEquatorialFace, isParallelFace, type PlanarGnomon } from './styleEdgeAnchor.ts';
+import { clipToCurveField, curveFieldOf, type CurveField } from './curveField.ts';
 import { lineHourAngleDeg } from '../clock/lineHourAngle.ts';
 import { METRIC_SIZES, screwForHole } from '../stand/metricFasteners.ts';
+import { OBLIQUITY_J2000_RAD } from '../calendar/obliquity.ts';
 import { equatorialSeatRailWidthMm } from './equatorialStand.ts';
 import { markKindAt } from '../clock/markKind.ts';
 
@@ -30,6 +32,8 @@ import { markKindAt } from '../clock/markKind.ts';
 const BAND_GAP_MM = 3;
 /** Least style height for a fin rising from a root: below it the fin would be more than 11 gnomon heights long. */
 export const MIN_STYLE_HEIGHT_DEG = 5;
+/** How far beyond the solstice's date line an equatorial face's hour lines reach with a nodus, in rod heights (ours: about a month of date either side of the solstice, δ down to 21.4°). */
+const EQUATORIAL_NODUS_BAND = 0.25;
 /** First hour-angle step of the date lines, degrees (then halved to the chord tolerance, `planarSiteDateLine`). */
 const DATE_LINE_STEP_DEG = 0.25;
 
@@ -248,7 +252,7 @@ function layoutFace(spec: DialSpec, room?: PlateRoom, onRoom?: (r: PlateRoom) =>
   const from = parseClock('hours.from', spec.hours.from);
   const to = parseClock('hours.to', spec.hours.to);
   const step = spec.hours.step;
-  const R = parallel ? 0 : equatorial ? h : h / Math.tan(face.styleHeightRad);
+  const R = parallel ? 0 : equatorial ? equatorialLineRadiusMm(spec) : h / Math.tan(face.styleHeightRad);
   const marks: PlanarMark[] = [];
   const leftOut: LeftOutHour[] = [];
   for (let m = Math.ceil(from / step) * step; m <= to; m += step) {
@@ -307,7 +311,7 @@ function layoutFace(spec: DialSpec, room?: PlateRoom, onRoom?: (r: PlateRoom) =>
   const numerals = fitNumerals(spec, marks, parallel, notes);
 
   // Date lines and mean-time curves, clipped to the marks' field.
-  const field = boundsOf(marks.flatMap((m) => [m.a, m.b]));
+  const field = curveFieldOf(marks, equatorial);
   const curves = spec.gnomon.nodus ? planarCurves(spec, face, model, gnomon, marks, time, field, notes) : [];
   if (!spec.gnomon.nodus && spec.dial.meanTimeCurves) {
     throw new SpecError('dial.meanTimeCurves', true, 'allowed: false unless gnomon.nodus is true (the curves are read off the nodus shadow)');
@@ -367,6 +371,21 @@ function layoutFace(spec: DialSpec, room?: PlateRoom, onRoom?: (r: PlateRoom) =>
     time,
     notes,
   };
+}
+
+/**
+ * How far an equatorial face's hour lines reach from the rod, mm: the rod's
+ * height h; with a nodus at the rod's tip, beyond the solstice's date line.
+ * On an equatorial face the Sun stands δ above the face's plane, so the
+ * nodus shadow lies h · cot |δ| from the rod: the date lines are circles
+ * about it, the nearest the solstice's at h / tan ε (ε the obliquity, 2.3 h),
+ * every other date farther out (the equinox at infinity). The lines then
+ * end EQUATORIAL_NODUS_BAND × h beyond that circle, so the solstice's circle
+ * and the solstice loops of the mean-time curves lie in their field.
+ */
+function equatorialLineRadiusMm(spec: DialSpec): number {
+  const h = spec.gnomon.height;
+  return spec.gnomon.nodus ? h / Math.tan(OBLIQUITY_J2000_RAD) + EQUATORIAL_NODUS_BAND * h : h;
 }
 
 /**
@@ -468,12 +487,12 @@ function hourNumerals(spec: DialSpec, marks: readonly PlanarMark[], heightMm: nu
 
 /**
  * The date lines and mean-time curves of a face with a nodus, clipped to the
- * hour lines' field; one asked for that is not drawn is named in `notes`
+ * hour lines' field (`curveFieldOf`: their box, or an equatorial face's disc); one asked for that is not drawn is named in `notes`
  * with the reason (its nodus shadow falls wholly beyond that field, as a
  * summer date line below a wall dial's lines; or the face never sees the Sun
  * at that clock time), so no line goes missing unsaid.
  */
-function planarCurves(spec: DialSpec, face: PlanarFace, model: PlanarGnomon, gnomon: PlanarGnomonLayout, marks: readonly PlanarMark[], time: TimeLayout, field: Box, notes: string[]): PlanarCurve[] {
+function planarCurves(spec: DialSpec, face: PlanarFace, model: PlanarGnomon, gnomon: PlanarGnomonLayout, marks: readonly PlanarMark[], time: TimeLayout, field: CurveField, notes: string[]): PlanarCurve[] {
   const along = gnomon.nodusAlongStyleMm ?? undefined;
   const hs = marks.map((m) => m.hourAngleDeg);
   const hMin = Math.min(...hs);
@@ -485,7 +504,7 @@ function planarCurves(spec: DialSpec, face: PlanarFace, model: PlanarGnomon, gno
   const beyond: string[] = [];
   const unlit: string[] = [];
   const keep = (label: string, kind: PlanarCurve['kind'], runs: readonly { readonly points: readonly Vec2[] }[]) => {
-    const paths = runs.flatMap((r) => clipPolyline(r.points, field));
+    const paths = runs.flatMap((r) => clipToCurveField(r.points, field));
     if (paths.length) out.push({ label, kind, widthMm: width, paths });
     else (runs.some((r) => r.points.length > 1) ? beyond : unlit).push(label);
   };
@@ -503,7 +522,7 @@ function planarCurves(spec: DialSpec, face: PlanarFace, model: PlanarGnomon, gno
     }
   }
   if (beyond.length) notes.push(`${beyond.length} date line(s) or curve(s) not drawn: the nodus shadow falls beyond the hour lines' field all along them (${beyond.join(', ')})`);
-  if (unlit.length) notes.push(`${unlit.length} mean-time curve(s) not drawn: the face never sees the Sun at that clock time (${unlit.join(', ')})`);
+  if (unlit.length) notes.push(`${unlit.length} date line(s) or curve(s) not drawn: the face never sees the Sun along them, on that date or at that clock time (${unlit.join(', ')})`);
   return out;
 }
 

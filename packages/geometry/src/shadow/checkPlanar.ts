@@ -11,6 +11,7 @@ import type { PlanarCurve, PlanarLayout, PlanarMark } from '../planar/layoutPlan
 import { planarGnomonSolid } from '../planar/planarGnomonSolid.ts';
 import type { FinEdge } from '../planar/planarTypes.ts';
 import { sunDirectionEnu } from '../planar/sunDirectionEnu.ts';
+import { curveFieldOf, insideCurveField } from '../planar/curveField.ts';
 import { checkSampling } from './checkSampling.ts';
 import { topocentricSun } from '../sun/topocentricSun.ts';
 import { DATE_LINE_TEST_STEP_DEG, insideBox, measureCurve, nearestDay, projectOnFace, type CurveCheck, type CurveSunPosition } from './curveCheck.ts';
@@ -301,8 +302,10 @@ function checkCurves(
   const phi = spec.site.latitude * DEG;
   const entries = dateLineEntries(spec);
   const hs = layout.marks.map((m) => m.hourAngleDeg);
+  // Inside the drawn field (the layout's own, `curveFieldOf`), where the curves were kept.
+  const field = curveFieldOf(layout.marks, layout.faceType === 'equatorial');
   const out: PlanarCurveCheck[] = [];
-  const inside = (X: Vec2) => insideField(layout, X);
+  const inside = (X: Vec2) => insideCurveField(field, X, 0.5);
   const at = (sunEnu: Vec3, H: number, date: string): CurveSunPosition => ({ sun: frame(sunEnu), later: frame(turnSun(sunEnu, phi, HOUR_ANGLE_RAD_PER_S)), nodus: nodusOf(edgeForHourAngle(layout, H)), date });
   for (const curve of drawnCurves) {
     const positions: CurveSunPosition[] = [];
@@ -334,10 +337,4 @@ function edgeForHourAngle(layout: PlanarLayout, H: number): FinEdge {
   return dot3(layout.face.fin, e) < 0 ? 'plusF' : 'minusF';
 }
 
-/** Inside the drawn field (the box of the marks, 0.5 mm in), where the curves were kept. */
-function insideField(layout: PlanarLayout, X: Vec2): boolean {
-  const pts = layout.marks.flatMap((m) => [m.a, m.b]);
-  const xs = pts.map((p) => p[0]);
-  const ys = pts.map((p) => p[1]);
-  return insideBox({ xMinMm: Math.min(...xs), xMaxMm: Math.max(...xs), yMinMm: Math.min(...ys), yMaxMm: Math.max(...ys) }, X, 0.5);
-}
+
