@@ -45,6 +45,22 @@ describe.each(GOLDEN_SPECS)('the bin writes the golden files of %s', (spec) => {
   });
 });
 
+describe('the bin builds every planar fixture with its pictures, from a folder outside the repository', () => {
+  it.each(['garden-horizontal', 'wall-declining', 'equatorial-both'])('%s: exit 0, preview.png and assembly.png written, the same bytes as the in-process build', async (name) => {
+    // Run from another folder and without pnpm's environment: every package must resolve from the bundle itself.
+    const out = join(work, `planar-${name}`);
+    const r = spawnSync(process.execPath, [BIN, 'build', join(ROOT, `fixtures/planar/${name}.yaml`), '--out', out], { cwd: work, encoding: 'utf8', env: { PATH: process.env.PATH ?? '', HOME: work } });
+    expect(r.status, r.stderr).toBe(0);
+    const names = readdirSync(out);
+    expect(names).toContain('preview.png');
+    expect(names).toContain('assembly.png');
+    const inProcess = join(work, `planar-${name}-src`);
+    expect((await runCli(['build', join(ROOT, `fixtures/planar/${name}.yaml`), '--out', inProcess])).code).toBe(0);
+    const differ = names.filter((n) => !readFileSync(join(out, n)).equals(readFileSync(join(inProcess, n))));
+    expect(differ).toEqual([]);
+  });
+});
+
 describe('a bad engraving input found on the worker thread', () => {
   it('is the same SpecError as in one thread: exit 1, the same message, no files', async () => {
     // The router fixture with a 0.5 mm V-bit for its 1 mm hour marks: refused by the engraving's tool check, which runs on the worker.

@@ -18,7 +18,7 @@ import {
   type PlateDrawing,
   LOWER_FACE_STAND_NOTE,
 } from '@umbrafab/geometry';
-import { assertToolFits, engraveFromSpec, engraveProgramsFor, stlHeader, toPlanarInstallMd, toPng, toReportJson, toStl, toSvg, twoFaceEngraving } from '@umbrafab/fabricate';
+import { assertToolFits, engraveFromSpec, engraveProgramsFor, stlHeader, toPlanarInstallMd, toPngAsync, toReportJson, toStl, toSvg, twoFaceEngraving } from '@umbrafab/fabricate';
 import { cutPartFiles } from './outputs/cutParts.ts';
 import { planarStandFiles } from './outputs/planarStandOutputs.ts';
 import { utf8 } from './outputs/outputTypes.ts';
@@ -71,7 +71,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string, engrav
   files.push(...plateCut.files);
   const preview = toSvg(drawing, planarPreviewSvgOptions({ spec, layout }));
   files.push({ name: 'preview.svg', bytes: utf8(preview) });
-  if (spec.pictures.write) files.push({ name: 'preview.png', bytes: toPng(preview, { pxPerMm: spec.pictures.pxPerMm }) });
+  if (spec.pictures.write) files.push({ name: 'preview.png', bytes: await toPngAsync(preview, { pxPerMm: spec.pictures.pxPerMm }) });
   const pictures = spec.pictures.write ? await planarPictureFiles(spec, layout, drawing) : { files: [], notes: [] };
   files.push(...pictures.files);
   const engraving = await (onWorker ?? engraveFromSpec(spec, drawing, sides?.upper));

@@ -28,6 +28,11 @@ const PX_PER_IN = 96;
  * same on every machine: only paths are drawn (the umbrafab SVGs draw their
  * letters as single strokes; a `<text>` element would be left out).
  *
+ * Synchronous, for tests and scripts run from the sources: its CommonJS
+ * load resolves from this file's own folder, which the CLI's bundle
+ * (packages/cli/dist/) does not have. Code the bundle runs uses `toPngAsync`,
+ * whose `import()` the bundler points at the package.
+ *
  * @returns the PNG file bytes (W3C PNG, 2nd ed. / ISO/IEC 15948)
  * @example toPng(svg, { pxPerMm: 4 })
  */
