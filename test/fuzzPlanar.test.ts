@@ -43,7 +43,7 @@ const faceArb = fc.oneof(
   fc.constant({ type: 'horizontal' }),
   fc.record({ type: fc.constant('vertical'), wallDeclination: fc.double({ min: -180, max: 180, noNaN: true }).map(round1), reclination: fc.oneof(fc.constant(0), fc.double({ min: -75, max: 75, noNaN: true }).map(round1)) }),
   fc.record({ type: fc.constant('meridian'), facing: fc.constantFrom('east', 'west') }),
-  fc.record({ type: fc.constant('equatorial'), side: fc.constantFrom('upper', 'lower') }),
+  fc.record({ type: fc.constant('equatorial'), side: fc.constantFrom('upper', 'lower', 'both') }),
 );
 
 const specArb = fc
