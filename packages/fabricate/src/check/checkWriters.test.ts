@@ -1,6 +1,7 @@
 import { describe, expect, test } from 'vitest';
-import { checkDial, layoutDial, parseSpec } from '@umbrafab/geometry';
+import { checkDial, checkPlanar, layoutDial, layoutPlanar, parseSpec } from '@umbrafab/geometry';
 import { checkTableText } from './checkTableText.ts';
+import { planarCheckText } from './planarCheckText.ts';
 import { toCheckJson } from './toCheckJson.ts';
 import { toCheckSvg } from './toCheckSvg.ts';
 
@@ -48,5 +49,23 @@ describe('check writers', () => {
     expect(bad.length).toBeGreaterThan(0);
     expect(checkTableText(tight).match(/^FAIL: curve .+: nodus shadow \d+\.\d{4} mm \(\d+\.\d s\) off the drawn curve on 2027-\d\d-\d\d; beyond 0\.000 mm$/gm)?.length).toBe(bad.length);
     expect(JSON.parse(toCheckJson(ok)).curves.length).toBe(ok.curves.length);
+  });
+
+  test('planar table: the date lines and curves as the polar table has them, a FAIL line naming each curve beyond the tolerance', () => {
+    const wall = layoutPlanar(parseSpec({ site: { latitude: 47.4, longitude: 8.5, timezone: 'Europe/Zurich' }, face: { type: 'vertical', wallDeclination: 24.5 }, gnomon: { height: 90, thickness: 4, nodus: true }, dial: { meanTimeCurves: true }, hours: { from: '07:00', to: '17:00', step: 60 }, calendar: { lines: ['solstices', 'equinox'] } }));
+    const ok = checkPlanar(wall, { everyDays: 30 });
+    expect(ok.curves.length).toBeGreaterThan(3);
+    const t = planarCheckText(ok).split('\n');
+    const header = t.findIndex((l) => /^curve +samples +worst mm +worst s +worst day$/.test(l));
+    expect(header).toBeGreaterThan(0);
+    ok.curves.forEach((c, i) => expect(t[header + 2 + i].startsWith(c.label) && t[header + 2 + i].endsWith(c.worstDate ?? '-')).toBe(true));
+    expect(t.find((l) => l.startsWith('worst curve:'))).toMatch(/; \d+ date line\(s\) and curve\(s\), tolerance 0\.050 mm$/);
+    expect(t).toContain('pass: every line and curve within tolerance' + (ok.worst ? `; worst line ${ok.worst.label} ${ok.worst.edge} ${Math.abs(ok.worst.errorMm) < 0.0005 ? ok.worst.errorMm.toExponential(1) : ok.worst.errorMm.toFixed(3)} mm on ${ok.worst.date}` : ''));
+    const tight = checkPlanar(wall, { everyDays: 30, toleranceMm: 1e-6 });
+    const bad = tight.curves.filter((c) => !c.pass);
+    expect(bad.length).toBeGreaterThan(0);
+    const text = planarCheckText(tight);
+    for (const c of bad) expect(text).toContain(`FAIL: curve ${c.label}: nodus shadow `);
+    expect(text.match(/^FAIL: curve /gm)?.length).toBe(bad.length);
   });
 });

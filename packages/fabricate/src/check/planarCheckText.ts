@@ -1,11 +1,14 @@
 import type { PlanarCheckResult } from '@umbrafab/geometry';
+import { curveSectionLines } from './checkSummaryText.ts';
 
 const mm = (x: number) => (Math.abs(x) < 0.0005 ? x.toExponential(1) : x.toFixed(3));
 
 /**
  * The terminal table of `umbrafab check` for a horizontal, wall, meridian or
  * equatorial face: one row per line (lit and reached days, worst error in mm
- * and seconds, its date), one per curve, then the verdict.
+ * and seconds, its date), then the date lines and curves as the polar table
+ * has them (`curveSectionLines`: a row each, the worst curve, a FAIL line
+ * naming each curve beyond its tolerance), then the verdict.
  */
 export function planarCheckText(r: PlanarCheckResult): string {
   const out: string[] = [];
@@ -16,11 +19,13 @@ export function planarCheckText(r: PlanarCheckResult): string {
   for (const m of r.marks) {
     out.push(`${m.label.padEnd(8)} ${m.edge.padEnd(7)} ${m.hourAngleDeg.toFixed(2).padStart(7)} ${String(m.litDays).padStart(5)} ${String(m.reachedDays).padStart(8)}  ${mm(m.errorMm.worst).padStart(10)} ${mm(m.errorS.worst).padStart(10)}  ${m.worstDate ?? '-'}`);
   }
-  if (r.curves.length) {
-    out.push('', 'curve                      samples  worst mm   worst s  date');
-    for (const c of r.curves) out.push(`${c.label.padEnd(26)} ${String(c.samples).padStart(7)}  ${mm(c.worstMm).padStart(8)} ${c.worstS.toFixed(2).padStart(9)}  ${c.worstDate ?? '-'}${c.pass ? '' : '  FAIL'}`);
+  const curves = curveSectionLines(r);
+  if (curves.table.length) out.push('', ...curves.table);
+  out.push('', ...curves.worst);
+  if (r.pass) out.push(`pass: every line and curve within tolerance${r.worst ? `; worst line ${r.worst.label} ${r.worst.edge} ${mm(r.worst.errorMm)} mm on ${r.worst.date}` : ''}`);
+  else {
+    if (r.failures.length) out.push(`FAIL: ${r.failures.length} line(s) beyond ${r.toleranceMm} mm`);
+    out.push(...curves.failures);
   }
-  out.push('');
-  out.push(r.pass ? `pass: every line and curve within tolerance${r.worst ? `; worst line ${r.worst.label} ${r.worst.edge} ${mm(r.worst.errorMm)} mm on ${r.worst.date}` : ''}` : `FAIL: ${r.failures.length} line(s) beyond ${r.toleranceMm} mm${r.curves.some((c) => !c.pass) ? ', and curves beyond theirs' : ''}`);
   return `${out.join('\n')}\n`;
 }

@@ -12,7 +12,8 @@ import type { CurveCheck, DrawnCurve } from './curveCheck.ts';
 import { drawnMarksFromLayout, type DrawnMark } from './drawnMarks.ts';
 import { gnomonForLayout } from './gnomonForLayout.ts';
 import { checkPolarCurves, drawnCurvesFromLayout } from './polarCurveCheck.ts';
-import { checkSampling } from './checkSampling.ts';
+import { checkSampling, type SamplingOptions } from './checkSampling.ts';
+import { checkPasses, curveSunPositions, marksOverTolerance, worstReachedMark, type CheckSummary, type MarkFailure, type MarkSummary, type WorstMark } from './checkSummary.ts';
 import { markErrorSummary, newMarkErrorTally, tallyReached, type MarkErrorTally, type WorstMean } from './markErrorTally.ts';
 import { styleEdges, type Edge3 } from './styleEdges.ts';
 import { instantAtHourAngle, sunOnDay, type RefractionModel, type SunDay, type SunSample, type SunTrack } from '../sun/sunTrack.ts';
@@ -26,20 +27,11 @@ import { KM_PER_AU } from 'astronomy-engine';
 const HOUR_ANGLE_RAD_PER_S = (2 * Math.PI) / 86_400;
 
 /** Options of `checkDial`; every one defaults from the layout's spec (`check:` section). */
-export interface CheckOptions {
-  /** largest accepted |shadow x − mark x|, mm (default spec.check.tolerance, 0.05) */
-  readonly toleranceMm?: number;
-  /** shadow sweep step, minutes (default spec.check.sampling.stepMinutes, 1) */
-  readonly stepMinutes?: number;
-  /** simulate every n-th day (default spec.check.sampling.everyDays, 1) */
-  readonly everyDays?: number;
-  readonly refraction?: RefractionModel;
+export interface CheckOptions extends SamplingOptions {
   /** installed tilt − |latitude|, degrees (default spec.check.tiltError, 0) */
   readonly tiltErrorDeg?: number;
   /** installed style azimuth − true meridian, degrees clockwise from above (default spec.check.azimuthError, 0) */
   readonly azimuthErrorDeg?: number;
-  /** calendar year simulated (default spec.calendar.year) */
-  readonly year?: number;
   /** the marks as drawn (default: the layout's own marks), e.g. read back from plate.dxf by `marksFromPlate` */
   readonly drawn?: readonly DrawnMark[];
   /** where the drawn marks came from, for the report (default 'layout') */
@@ -55,26 +47,12 @@ export interface Range {
   readonly max: number;
 }
 
-/** The year's result for one mark. */
-export interface MarkCheck {
-  readonly label: string;
+/** The year's result for one mark: `MarkSummary` (errorMm: shadow x − mark x; errorS: through dx/dH) and what only the polar check measures. */
+export interface MarkCheck extends MarkSummary {
   readonly kind: MarkKind;
   readonly style: StyleEdge;
-  readonly hourAngleDeg: number;
   /** x of the drawn line at its middle, face coordinates, mm */
   readonly xMm: number;
-  /** days on which the Sun is above the horizon and in front of the face at this mark's hour angle */
-  readonly litDays: number;
-  /** lit days on which the style's shadow reaches the mark's y-range */
-  readonly reachedDays: number;
-  /** shadow x − mark x, mm: worst (signed) and mean |·| over the reached days */
-  readonly errorMm: WorstMean;
-  /** seconds after the mark's hour angle at which the shadow reaches the line (+: the dial reads late there), via dx/dH */
-  readonly errorS: WorstMean;
-  /** date of the worst error, 'YYYY-MM-DD' (null if never reached) */
-  readonly worstDate: string | null;
-  /** days whose |error| exceeds the tolerance */
-  readonly daysOverTolerance: number;
   /** penumbra width across the line, mm, over the lit days (2hα / (cos δ cos² H), docs/design.md §3) */
   readonly penumbraMm: Range;
   /**
@@ -103,48 +81,31 @@ export interface CheckDay {
 }
 
 /** A mark whose shadow falls beyond the tolerance on some day (its worst day). */
-export interface CheckFailure {
-  readonly label: string;
+export interface CheckFailure extends MarkFailure {
   readonly style: StyleEdge;
-  readonly date: string;
-  readonly errorMm: number;
   readonly errorS: number;
   readonly daysOverTolerance: number;
 }
 
-/** The whole check, plain data (check.json is this, rounded). */
-export interface CheckResult {
-  readonly year: number;
+/** The whole check, plain data (check.json is this, rounded); the fields both checks share are `CheckSummary`'s. */
+export interface CheckResult extends CheckSummary {
   readonly site: { readonly latitudeDeg: number; readonly longitudeDeg: number; readonly timezone: string };
   readonly hemisphere: 'north' | 'south';
   readonly reads: 'solar' | 'standard';
   readonly source: 'layout' | 'plate';
   /** where the date lines and mean-time curves measured came from */
   readonly curveSource: 'layout' | 'plate';
-  readonly toleranceMm: number;
-  /** tolerance of the date lines and mean-time curves, mm: the same as the marks' (they are drawn to 0.0005 mm of the shadow) */
-  readonly curveToleranceMm: number;
-  readonly stepMinutes: number;
-  readonly everyDays: number;
-  readonly refraction: RefractionModel;
   readonly tiltErrorDeg: number;
   readonly azimuthErrorDeg: number;
   readonly gnomon: { readonly heightMm: number; readonly thicknessMm: number; readonly styleEdges: number };
-  /** Sun positions computed: the sweep samples plus the per-mark instants */
-  readonly sunPositions: number;
   /** astronomy-engine calls behind the track */
   readonly ephemerisCalls: number;
-  readonly method: readonly string[];
   readonly days: readonly CheckDay[];
   readonly marks: readonly MarkCheck[];
-  /** the single worst (mark, day), or null if no mark is ever reached */
-  readonly worst: { readonly label: string; readonly style: StyleEdge; readonly date: string; readonly errorMm: number; readonly errorS: number } | null;
-  /** marks beyond the tolerance, worst first */
+  readonly worst: (WorstMark & { readonly style: StyleEdge }) | null;
   readonly failures: readonly CheckFailure[];
-  /** each drawn date line and mean-time curve against the nodus shadow (`checkPolarCurves`); empty without a nodus */
+  /** the date lines and mean-time curves measured by `checkPolarCurves` */
   readonly curves: readonly CurveCheck[];
-  /** every mark and every curve within its tolerance */
-  readonly pass: boolean;
 }
 
 /**
@@ -370,21 +331,13 @@ function markCheck(d: DrawnMark, a: Accumulator): MarkCheck {
 
 /** The single worst (mark, day) over all marks, or null if no mark is ever reached (the first of equals wins). */
 function worstOfMarks(marks: readonly MarkCheck[]): CheckResult['worst'] {
-  let worst: CheckResult['worst'] = null;
-  for (const m of marks) {
-    if (m.worstDate !== null && (worst === null || Math.abs(m.errorMm.worst) > Math.abs(worst.errorMm))) {
-      worst = { label: m.label, style: m.style, date: m.worstDate, errorMm: m.errorMm.worst, errorS: m.errorS.worst };
-    }
-  }
-  return worst;
+  const m = worstReachedMark(marks);
+  return m && { label: m.label, style: m.style, date: m.worstDate, errorMm: m.errorMm.worst, errorS: m.errorS.worst };
 }
 
 /** The marks beyond the tolerance on some day, worst first (then by label). */
 function failuresOfMarks(marks: readonly MarkCheck[]): CheckFailure[] {
-  return marks
-    .filter((m) => m.daysOverTolerance > 0 && m.worstDate !== null)
-    .map((m) => ({ label: m.label, style: m.style, date: m.worstDate as string, errorMm: m.errorMm.worst, errorS: m.errorS.worst, daysOverTolerance: m.daysOverTolerance }))
-    .sort((p, q) => Math.abs(q.errorMm) - Math.abs(p.errorMm) || p.label.localeCompare(q.label));
+  return marksOverTolerance(marks).map((m) => ({ label: m.label, style: m.style, date: m.worstDate, errorMm: m.errorMm.worst, errorS: m.errorS.worst, daysOverTolerance: m.daysOverTolerance }));
 }
 
 /** Assemble the result: the settings it ran with, the gnomon, the days, the marks, the worst and the failures. */
@@ -407,7 +360,7 @@ function assembleResult(layout: DialLayout, settings: CheckSettings, caster: Cas
     tiltErrorDeg: settings.tiltErrorDeg,
     azimuthErrorDeg: settings.azimuthErrorDeg,
     gnomon: { heightMm: part.styleHeightMm, thicknessMm: part.thicknessMm, styleEdges: edges.minusX.length + edges.plusX.length },
-    sunPositions: run.sunPositions + curves.reduce((n, c) => n + c.samples, 0),
+    sunPositions: run.sunPositions + curveSunPositions(curves),
     ephemerisCalls: settings.track.ephemerisCalls,
     method: CHECK_METHOD(settings.refraction, curves.length > 0, settings.toleranceMm),
     days: run.days,
@@ -415,7 +368,7 @@ function assembleResult(layout: DialLayout, settings: CheckSettings, caster: Cas
     worst: worstOfMarks(marks),
     failures,
     curves,
-    pass: failures.length === 0 && curves.every((c) => c.pass),
+    pass: checkPasses(failures, curves),
   };
 }
 

@@ -4,7 +4,7 @@ import type { Vec3 } from '../parts/mesh.ts';
 import { dot3 } from '../parts/vec3.ts';
 import { dateLineEntries } from '../polar/calendarLines.ts';
 import { parseClock } from '../spec/parseClock.ts';
-import { instantAtHourAngle, sunOnDay, sunTrack, type RefractionModel, type SunDay, type SunSample } from '../sun/sunTrack.ts';
+import { instantAtHourAngle, sunOnDay, sunTrack, type SunDay, type SunSample } from '../sun/sunTrack.ts';
 import type { Vec2 } from '../types.ts';
 import { edgeSign } from '../planar/styleEdgeAnchor.ts';
 import type { PlanarCurve, PlanarLayout, PlanarMark } from '../planar/layoutPlanar.ts';
@@ -12,7 +12,8 @@ import { planarGnomonSolid } from '../planar/planarGnomonSolid.ts';
 import type { FinEdge } from '../planar/planarTypes.ts';
 import { sunDirectionEnu } from '../planar/sunDirectionEnu.ts';
 import { curveFieldOf, insideCurveField } from '../planar/curveField.ts';
-import { checkSampling } from './checkSampling.ts';
+import { checkSampling, type SamplingOptions } from './checkSampling.ts';
+import { checkPasses, curveSunPositions, marksOverTolerance, worstReachedMark, type CheckSummary, type MarkFailure, type MarkSummary, type WorstMark } from './checkSummary.ts';
 import { topocentricSun } from '../sun/topocentricSun.ts';
 import { DATE_LINE_TEST_STEP_DEG, insideBox, measureCurve, nearestDay, projectOnFace, type CurveCheck, type CurveSunPosition } from './curveCheck.ts';
 import { markErrorSummary, newMarkErrorTally, tallyReached } from './markErrorTally.ts';
@@ -21,61 +22,33 @@ import { styleEdges, type Edge3 } from './styleEdges.ts';
 /** Rate of the hour angle, rad per second of time (one turn per solar day, as the polar check). */
 const HOUR_ANGLE_RAD_PER_S = (2 * Math.PI) / 86_400;
 
-export interface PlanarCheckOptions {
-  /** largest accepted shadow-to-line distance, mm (default spec.check.tolerance) */
-  readonly toleranceMm?: number;
-  /** sweep step, minutes (default spec.check.sampling.stepMinutes, 1) */
-  readonly stepMinutes?: number;
-  readonly everyDays?: number;
-  readonly refraction?: RefractionModel;
-  readonly year?: number;
+export interface PlanarCheckOptions extends SamplingOptions {
   /** the lines as drawn (default: the layout's marks), e.g. one moved on purpose */
   readonly marks?: readonly PlanarMark[];
   /** the date lines and mean-time curves as drawn (default: the layout's curves), e.g. one moved on purpose */
   readonly curves?: readonly PlanarCurve[];
 }
 
-export interface PlanarMarkCheck {
-  readonly label: string;
+/** A line's year on a planar face: `MarkSummary` (errorMm: the perpendicular distance of the style's shadow from the drawn line) and its fin edge. */
+export interface PlanarMarkCheck extends MarkSummary {
   readonly kind: PlanarMark['kind'];
   readonly edge: FinEdge;
-  readonly hourAngleDeg: number;
-  /** days on which the Sun is up and in front of the face at this mark's hour angle */
-  readonly litDays: number;
-  /** lit days on which the style's shadow reaches the drawn line */
-  readonly reachedDays: number;
-  /** perpendicular distance of the style's shadow from the drawn line, mm: worst (signed) and mean |·| */
-  readonly errorMm: { readonly worst: number; readonly meanAbs: number };
-  /** the same in seconds of time (distance / the shadow's speed across the line) */
-  readonly errorS: { readonly worst: number; readonly meanAbs: number };
-  readonly worstDate: string | null;
-  readonly daysOverTolerance: number;
 }
 
 /** A date line's or mean-time curve's year on a planar face (`measureCurve`, shared with the polar check). */
 export type PlanarCurveCheck = CurveCheck;
 
-export interface PlanarCheckResult {
+/** A planar face's check, plain data (check.json); the fields both checks share are `CheckSummary`'s. */
+export interface PlanarCheckResult extends CheckSummary {
   readonly faceType: PlanarLayout['faceType'];
   /** an equatorial face: which of the plate's faces this is */
   readonly side?: 'upper' | 'lower';
-  readonly year: number;
-  readonly toleranceMm: number;
-  /** tolerance of the date lines and mean-time curves, mm: the same as the lines' (they are sampled finely enough, `planarMeanTimeCurve`) */
-  readonly curveToleranceMm: number;
-  readonly stepMinutes: number;
-  readonly everyDays: number;
-  readonly refraction: RefractionModel;
   /** minutes of sunshine on the face over the simulated days, at the sweep step */
   readonly litMinutes: number;
-  readonly sunPositions: number;
   readonly gnomon: { readonly kind: 'fin' | 'rod'; readonly styleEdges: number; readonly triangles: number };
-  readonly method: readonly string[];
   readonly marks: readonly PlanarMarkCheck[];
-  readonly curves: readonly PlanarCurveCheck[];
-  readonly worst: { readonly label: string; readonly edge: FinEdge; readonly date: string; readonly errorMm: number; readonly errorS: number } | null;
-  readonly failures: readonly { readonly label: string; readonly edge: FinEdge; readonly errorMm: number; readonly date: string }[];
-  readonly pass: boolean;
+  readonly worst: (WorstMark & { readonly edge: FinEdge }) | null;
+  readonly failures: readonly (MarkFailure & { readonly edge: FinEdge })[];
 }
 
 /**
@@ -158,18 +131,11 @@ export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = 
   });
 
   const curves = checkCurves(layout, options.curves ?? layout.curves, toleranceMm, track.days, frame, nodusOf, (s) => lit(s, frame(s.enu)), track);
-  sunPositions += curves.reduce((n, cv) => n + cv.samples, 0);
+  sunPositions += curveSunPositions(curves);
 
-  let worst: PlanarCheckResult['worst'] = null;
-  for (const m of marks) {
-    if (m.worstDate !== null && (worst === null || Math.abs(m.errorMm.worst) > Math.abs(worst.errorMm))) {
-      worst = { label: m.label, edge: m.edge, date: m.worstDate, errorMm: m.errorMm.worst, errorS: m.errorS.worst };
-    }
-  }
-  const failures = marks
-    .filter((m) => m.daysOverTolerance > 0 && m.worstDate !== null)
-    .map((m) => ({ label: m.label, edge: m.edge, errorMm: m.errorMm.worst, date: m.worstDate as string }))
-    .sort((p, q) => Math.abs(q.errorMm) - Math.abs(p.errorMm) || p.label.localeCompare(q.label));
+  const w = worstReachedMark(marks);
+  const worst: PlanarCheckResult['worst'] = w && { label: w.label, edge: w.edge, date: w.worstDate, errorMm: w.errorMm.worst, errorS: w.errorS.worst };
+  const failures = marksOverTolerance(marks).map((m) => ({ label: m.label, edge: m.edge, errorMm: m.errorMm.worst, date: m.worstDate }));
   return {
     faceType: layout.faceType,
     ...(layout.faceType === 'equatorial' ? { side: layout.spec.face?.side === 'lower' ? ('lower' as const) : ('upper' as const) } : {}),
@@ -194,7 +160,7 @@ export function checkPlanar(layout: PlanarLayout, options: PlanarCheckOptions = 
     curves,
     worst,
     failures,
-    pass: failures.length === 0 && curves.every((cv) => cv.pass),
+    pass: checkPasses(failures, curves),
   };
 }
 

@@ -4,10 +4,15 @@ import { sunTrack, type RefractionModel, type SunTrack } from '../sun/sunTrack.t
 
 /** The sampling options both checks take; each defaults from the spec's `check:` section. */
 export interface SamplingOptions {
+  /** largest accepted distance of the shadow from a drawn mark, mm (default spec.check.tolerance, 0.05) */
   readonly toleranceMm?: number;
+  /** shadow sweep step, minutes (default spec.check.sampling.stepMinutes, 1) */
   readonly stepMinutes?: number;
+  /** simulate every n-th day (default spec.check.sampling.everyDays, 1) */
   readonly everyDays?: number;
+  /** (default spec.check.refraction) */
   readonly refraction?: RefractionModel;
+  /** calendar year simulated (default spec.calendar.year) */
   readonly year?: number;
 }
 

@@ -1,0 +1,62 @@
+import type { CheckSummary, CurveCheck } from '@umbrafab/geometry';
+
+/** Fixed-decimals text of a number, "-0.000" shown as "0.000". */
+export function fx(v: number, d: number): string {
+  const s = v.toFixed(d);
+  return /^-0\.?0*$/.test(s) ? s.slice(1) : s;
+}
+
+/** Fixed decimals with the sign always shown. */
+export function signed(v: number, d: number): string {
+  const s = fx(v, d);
+  return s.startsWith('-') ? s : `+${s}`;
+}
+
+/** Signed, with 4 decimals, or in exponent form when smaller than that shows. */
+export function tiny(v: number): string {
+  if (v !== 0 && Math.abs(v) < 5e-5) return `${v < 0 ? '' : '+'}${v.toExponential(1)}`;
+  return signed(v, 4);
+}
+
+/** Rows padded to their columns: the first column left-aligned, the `left` ones too, the others right-aligned; a rule under the header. */
+export function tableLines(header: readonly string[], body: readonly string[][], left: readonly number[]): string[] {
+  const rows = [header, ...body];
+  const widths = header.map((_, c) => Math.max(...rows.map((r) => r[c].length)));
+  const lines = rows.map((r) => r.map((cell, c) => (c === 0 || left.includes(c) ? cell.padEnd(widths[c]) : cell.padStart(widths[c]))).join('  ').trimEnd());
+  lines.splice(1, 0, widths.map((w) => '-'.repeat(w)).join('  '));
+  return lines;
+}
+
+const CURVE_COLUMNS = ['curve', 'samples', 'worst mm', 'worst s', 'worst day'] as const;
+
+function curveRow(c: CurveCheck): string[] {
+  return [c.label, `${c.samples}`, tiny(c.worstMm).replace(/^\+/, ''), fx(c.worstS, 3), c.worstDate ?? '-'];
+}
+
+/** The drawn curve of largest worst distance (the first of equals), or null without curves. */
+export function worstCurve(curves: readonly CurveCheck[]): CurveCheck | null {
+  return curves.length ? curves.reduce((a, c) => (c.worstMm > a.worstMm ? c : a), curves[0]) : null;
+}
+
+/**
+ * The part of `umbrafab check`'s text both checks (polar and planar) write
+ * alike from a `CheckSummary`: the table of date lines and mean-time curves
+ * (samples, worst distance from the nodus shadow in mm and seconds, its day;
+ * nothing without curves) and the summary lines under it: the worst curve
+ * with the curve tolerance, and one FAIL line per curve beyond it.
+ * `source` says where the curves were read ('layout' or 'plate'), when known.
+ *
+ * @example curveSectionLines(checkPlanar(layout)).table
+ */
+export function curveSectionLines(r: CheckSummary, source?: 'layout' | 'plate'): { readonly table: string[]; readonly worst: string[]; readonly failures: string[] } {
+  const wc = worstCurve(r.curves);
+  if (!wc) return { table: [], worst: [], failures: [] };
+  const from = source === undefined ? '' : ` (${source === 'plate' ? 'read from the plate drawing' : 'from the layout'})`;
+  return {
+    table: tableLines(CURVE_COLUMNS, r.curves.map(curveRow), [4]),
+    worst: [`worst curve: ${tiny(wc.worstMm).replace(/^\+/, '')} mm (${fx(wc.worstS, 3)} s) on ${wc.label}${wc.worstDate ? ` on ${wc.worstDate}` : ''}; ${r.curves.length} date line(s) and curve(s)${from}, tolerance ${fx(r.curveToleranceMm, 3)} mm`],
+    failures: r.curves
+      .filter((k) => !k.pass)
+      .map((c) => `FAIL: curve ${c.label}: nodus shadow ${fx(c.worstMm, 4)} mm (${fx(c.worstS, 1)} s) off the drawn curve on ${c.worstDate ?? '-'}; beyond ${fx(r.curveToleranceMm, 3)} mm`),
+  };
+}
