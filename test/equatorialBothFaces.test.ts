@@ -76,6 +76,11 @@ describe('equatorial plate engraved on both faces (face.side both)', () => {
     expect(install).toMatch(/engraved on both faces/);
     expect(install).toMatch(/flip axis, the vertical centre line through the rod hole/);
     expect(install).toMatch(/clear of every engraved line of both faces/);
+    // A preview of each face: the lower one as seen from below, captioned so.
+    for (const f of ['preview.svg', 'preview-lower.svg']) expect(report.files).toContain(f);
+    const lowerSvg = readFileSync(join(out, 'preview-lower.svg'), 'utf8');
+    expect(lowerSvg).toContain('LOWER FACE seen from below');
+    expect(lowerSvg).not.toBe(readFileSync(join(out, 'preview.svg'), 'utf8'));
   });
 
   it("each face's lines are 15° of turn about the rod per hour (common practice), the two faces turning opposite ways", () => {

@@ -72,6 +72,12 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string, engrav
   const preview = toSvg(drawing, planarPreviewSvgOptions({ spec, layout }));
   files.push({ name: 'preview.svg', bytes: utf8(preview) });
   if (spec.pictures.write) files.push({ name: 'preview.png', bytes: await toPngAsync(preview, { pxPerMm: spec.pictures.pxPerMm }) });
+  if (sides) {
+    // The lower face as the shop sees it after the flip (the LINE_SCORE_LOWER and TEXT_ENGRAVE_LOWER layers), at 1:1.
+    const lowerPreview = toSvg(sides.lowerDrawing, { caption: `${spec.name} - ${layout.faceType} face, LOWER FACE seen from below, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+    files.push({ name: 'preview-lower.svg', bytes: utf8(lowerPreview) });
+    if (spec.pictures.write) files.push({ name: 'preview-lower.png', bytes: await toPngAsync(lowerPreview, { pxPerMm: spec.pictures.pxPerMm }) });
+  }
   const pictures = spec.pictures.write ? await planarPictureFiles(spec, layout, drawing) : { files: [], notes: [] };
   files.push(...pictures.files);
   const engraving = await (onWorker ?? engraveFromSpec(spec, drawing, sides?.upper));
