@@ -53,6 +53,7 @@ export { fitPixelBudget, MAX_PICTURE_PIXELS } from './pictures/fitPixelBudget.ts
 
 export { toCheckJson } from './check/toCheckJson.ts';
 export { toCheckSvg } from './check/toCheckSvg.ts';
+export { toPlanarCheckSvg } from './check/toPlanarCheckSvg.ts';
 export { checkTableText } from './check/checkTableText.ts';
 export { planarCheckText } from './check/planarCheckText.ts';
 

@@ -1,24 +1,22 @@
 import { countMarks, type CheckResult } from '@umbrafab/geometry';
-import { roundTo } from '../process/roundTo.ts';
+import { CHECK_SVG_WIDTH, curvePanel, formatMm, r2, serialiseSvg, type SvgRecord } from './checkSvgRecords.ts';
 
 /** Plot box in SVG user units (px). */
-const W = 900;
+const W = CHECK_SVG_WIDTH;
 const H = 480;
 const M = { left: 70, right: 160, top: 40, bottom: 50 } as const;
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
-
-/** One plot record before serialisation. */
-type SvgRecord =
-  | { readonly kind: 'line'; readonly x1: number; readonly y1: number; readonly x2: number; readonly y2: number; readonly cls: string }
-  | { readonly kind: 'path'; readonly d: string; readonly cls: string; readonly title: string }
-  | { readonly kind: 'text'; readonly x: number; readonly y: number; readonly text: string; readonly cls: string; readonly anchor: 'start' | 'middle' | 'end' };
 
 /**
  * check.svg: the geometric error of every mark (shadow x − mark x, mm) over
  * the simulated year, one polyline per mark (morning marks blue, afternoon
  * red, the noon band grey), broken on days the mark is unlit or not reached;
- * dashed lines at ± the tolerance; months along the bottom. SVG 1.1, numbers
- * rounded to 2 decimals through `roundTo`, no timestamps (byte-stable).
+ * dashed lines at ± the tolerance; months along the bottom. With a nodus,
+ * below it the date lines and mean-time curves check.json `curves` lists,
+ * one labelled row each: a bar of its worst distance from the nodus shadow
+ * against the dashed curve tolerance, the value and the day (`curvePanel`,
+ * shared with the planar plot). SVG 1.1, numbers rounded to 2 decimals
+ * through `roundTo`, no timestamps (byte-stable).
  *
  * @example toCheckSvg(checkDial(layout))
  */
@@ -29,7 +27,7 @@ export function toCheckSvg(result: CheckResult): string {
   for (const m of result.marks) for (const e of m.errorsMm) if (e !== null) peak = Math.max(peak, Math.abs(e) * 1.1);
   const px = (i: number) => M.left + ((W - M.left - M.right) * i) / n;
   const py = (e: number) => M.top + ((H - M.top - M.bottom) * (peak - e)) / (2 * peak);
-  const r = (v: number) => roundTo(v, 2);
+  const r = r2;
   const rec: SvgRecord[] = [];
 
   // Axes, zero line, tolerance band.
@@ -70,44 +68,7 @@ export function toCheckSvg(result: CheckResult): string {
   rec.push({ kind: 'text', x: M.left, y: 24, text: `Shadow minus mark over ${result.year}, ${countMarks(result.marks).marks} engraved marks (${result.source}); worst ${w ? `${formatMm(w.errorMm)} at ${w.label} ${w.style} on ${w.date}` : 'none'}; ${result.pass ? 'PASS' : 'FAIL'}`, cls: 'title', anchor: 'start' });
   rec.push({ kind: 'text', x: 16, y: M.top + (H - M.top - M.bottom) / 2, text: 'mm', cls: 'small', anchor: 'start' });
 
-  return serialise(rec, r);
-}
-
-/** Millimetres with enough digits for the scale (µm-level errors still readable). */
-function formatMm(v: number): string {
-  const a = Math.abs(v);
-  if (a !== 0 && a < 1e-4) return `${v < 0 ? '−' : ''}${a.toExponential(1)} mm`;
-  const d = a === 0 ? 0 : a >= 0.1 ? 3 : 4;
-  return `${v < 0 ? '−' : ''}${a.toFixed(d)} mm`;
-}
-
-function esc(s: string): string {
-  return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
-}
-
-function serialise(records: readonly SvgRecord[], r: (v: number) => number): string {
-  const out: string[] = [
-    `<svg xmlns="http://www.w3.org/2000/svg" version="1.1" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}">`,
-    '<style>.axis{stroke:#444;stroke-width:1}.tol{stroke:#c60;stroke-width:1;stroke-dasharray:6 4}.am,.pm,.noon{fill:none;stroke-width:1}.am{stroke:#2860c0}.pm{stroke:#c02828}.noon{stroke:#777}text{font-family:sans-serif;fill:#222}.small{font-size:11px}.title{font-size:14px}</style>',
-    `<rect x="0" y="0" width="${W}" height="${H}" fill="#fff"/>`,
-  ];
-  for (const rec of records) {
-    switch (rec.kind) {
-      case 'line':
-        out.push(`<line class="${rec.cls}" x1="${r(rec.x1)}" y1="${r(rec.y1)}" x2="${r(rec.x2)}" y2="${r(rec.y2)}"/>`);
-        break;
-      case 'path':
-        out.push(`<path class="${rec.cls}" d="${rec.d}"><title>${esc(rec.title)}</title></path>`);
-        break;
-      case 'text':
-        out.push(`<text class="${rec.cls}" x="${r(rec.x)}" y="${r(rec.y)}" text-anchor="${rec.anchor}">${esc(rec.text)}</text>`);
-        break;
-      default: {
-        const never: never = rec;
-        throw new Error(`unknown SVG record ${JSON.stringify(never)}`);
-      }
-    }
-  }
-  out.push('</svg>');
-  return out.join('\n') + '\n';
+  const curves = curvePanel(result, H);
+  rec.push(...curves.records);
+  return serialiseSvg(rec, H + curves.height);
 }
