@@ -16,7 +16,7 @@ export const checkCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick; the DXF reader only with --plate.
-    const { checkDial, checkPlanar, checkTableText, countMarks, curvesFromPlate, drawnCurvesFromLayout, faceOrientationOf, layoutDial, markCountText, layoutPlanar, lowerFacePlateLines, marksFromPlate, parseSpec, planarCheckText, planarMarksFromPlate, readRawSpec, toCheckJson, toCheckSvg, toPlanarCheckSvg, toReportJson, writeFilesAtomic } = await import('./checkDeps.ts');
+    const { checkDial, checkPlanar, checkTableText, countMarks, curvesFromPlate, drawnCurvesFromLayout, faceOrientationOf, layoutDial, markCountText, layoutPlanar, lowerFacePlateLines, marksFromPlate, parseSpec, planarCheckText, planarMarksFromPlate, readRawSpec, toCheckJson, toCheckSvg, toPlanarCheckSvg, writeFilesAtomic } = await import('./checkDeps.ts');
     if (args.out !== undefined) assertOutFolder(String(args.out));
     // The spec as written, normalised once (with --year in place of calendar.year): the same path as build.
     const raw = readRawSpec(args.spec) as Record<string, unknown>;
@@ -52,7 +52,7 @@ export const checkCommand: CommandModule = {
         const dir = String(args.out);
         const json = results.length > 1 ? { ...results[0], lowerFace: results[1], pass: results.every((r) => r.pass) } : results[0];
         writeFilesAtomic(dir, [
-          { name: 'check.json', bytes: utf8(toReportJson(json)) },
+          { name: 'check.json', bytes: utf8(toCheckJson(json)) },
           { name: 'check.svg', bytes: utf8(toPlanarCheckSvg(results)) },
         ], Boolean(args.force));
         io.out(`umbrafab: wrote check.json, check.svg to ${join(dir)}`);
