@@ -99,11 +99,8 @@ export function relieveTabRoots(profile: readonly Vec2[], toolRadiusMm: number, 
   const onFace = (p: Vec2) => Math.abs(p[1] - faceZ) < 1e-9;
   const out: Vec2[] = [];
   for (let i = 0; i < n; i++) {
-    const a = profile[(i - 1 + n) % n];
-    const p = profile[i];
-    const b = profile[(i + 1) % n];
-    const cross = (p[0] - a[0]) * (b[1] - p[1]) - (p[1] - a[1]) * (b[0] - p[0]);
-    if (!(cross < 0) || !onFace(p)) {
+    const { a, p, b, reflex } = cornerOf(profile, i);
+    if (!reflex || !onFace(p)) {
       out.push(p);
       continue;
     }
@@ -131,12 +128,17 @@ export function relieveTabRoots(profile: readonly Vec2[], toolRadiusMm: number, 
 
 /** Whether vertex i of a counter-clockwise outline is a reflex corner on the face line. */
 function isTabRoot(profile: readonly Vec2[], i: number, faceZ: number): boolean {
+  const { p, reflex } = cornerOf(profile, i);
+  return reflex && Math.abs(p[1] - faceZ) < 1e-9;
+}
+
+/** Vertex i of a counter-clockwise outline with its neighbours, and whether it is a reflex (inside) corner. */
+function cornerOf(profile: readonly Vec2[], i: number): { readonly a: Vec2; readonly p: Vec2; readonly b: Vec2; readonly reflex: boolean } {
   const n = profile.length;
   const a = profile[(i - 1 + n) % n];
   const p = profile[i];
   const b = profile[(i + 1) % n];
-  const cross = (p[0] - a[0]) * (b[1] - p[1]) - (p[1] - a[1]) * (b[0] - p[0]);
-  return cross < 0 && Math.abs(p[1] - faceZ) < 1e-9;
+  return { a, p, b, reflex: (p[0] - a[0]) * (b[1] - p[1]) - (p[1] - a[1]) * (b[0] - p[0]) < 0 };
 }
 
 /**
@@ -161,11 +163,8 @@ export function relieveNodusNotch(profile: readonly Vec2[], toolRadiusMm: number
   const n = profile.length;
   const out: Vec2[] = [];
   for (let i = 0; i < n; i++) {
-    const a = profile[(i - 1 + n) % n];
-    const p = profile[i];
-    const b = profile[(i + 1) % n];
-    const cross = (p[0] - a[0]) * (b[1] - p[1]) - (p[1] - a[1]) * (b[0] - p[0]);
-    if (!(cross < 0) || !(p[1] > faceZ + 1e-9) || Math.abs(a[1] - b[1]) > 1e-9) {
+    const { a, p, b, reflex } = cornerOf(profile, i);
+    if (!reflex || !(p[1] > faceZ + 1e-9) || Math.abs(a[1] - b[1]) > 1e-9) {
       out.push(p);
       continue;
     }
