@@ -74,7 +74,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string, engrav
   if (spec.pictures.write) files.push({ name: 'preview.png', bytes: await toPngAsync(preview, { pxPerMm: spec.pictures.pxPerMm }) });
   if (sides) {
     // The lower face as the shop sees it after the flip (the LINE_SCORE_LOWER and TEXT_ENGRAVE_LOWER layers), at 1:1.
-    const lowerPreview = toSvg(sides.lowerDrawing, { caption: `${spec.name} - ${layout.faceType} face, LOWER FACE seen from below, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` });
+    const lowerPreview = toSvg(sides.lowerDrawing, planarPreviewSvgOptions({ spec, layout }, true));
     files.push({ name: 'preview-lower.svg', bytes: utf8(lowerPreview) });
     if (spec.pictures.write) files.push({ name: 'preview-lower.png', bytes: await toPngAsync(lowerPreview, { pxPerMm: spec.pictures.pxPerMm }) });
   }

@@ -18,7 +18,10 @@ export function planarContext(spec: DialSpec): PlanarContext {
   return { spec, layout, drawing: planarPlateDrawing(layout) };
 }
 
-/** How a planar face's preview.svg is drawn (its caption); with `previewFrame` the page finds the plate in it. */
-export function planarPreviewSvgOptions({ spec, layout }: Pick<PlanarContext, 'spec' | 'layout'>): SvgOptions {
-  return { caption: `${spec.name} - ${layout.faceType} face, preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` };
+/**
+ * How a planar face's preview.svg is drawn (its caption); with `previewFrame` the page finds the plate in it.
+ * `lower`: the caption of preview-lower.svg, the lower face of a plate engraved on both faces, seen from below.
+ */
+export function planarPreviewSvgOptions({ spec, layout }: Pick<PlanarContext, 'spec' | 'layout'>, lower = false): SvgOptions {
+  return { caption: `${spec.name} - ${layout.faceType} face, ${lower ? 'LOWER FACE seen from below, ' : ''}preview at 1:1, plate ${layout.plate.widthMm} x ${layout.plate.lengthMm} mm` };
 }
