@@ -2,7 +2,7 @@ import type { Vec2 } from '../types.ts';
 
 /**
  * Largest distance of a drawn date line or mean-time curve from its chords,
- * mm: half the 0.001 mm the shadow check holds every curve to (issue #18),
+ * mm: half the 0.001 mm the shadow-check tests hold every mark and curve to,
  * leaving the other half to the ephemeris and the check's own sampling.
  */
 export const CURVE_CHORD_TOLERANCE_MM = 0.0005;
