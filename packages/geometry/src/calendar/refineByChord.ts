@@ -64,9 +64,18 @@ export function refineByChord<S extends CurveSample>(params: readonly number[], 
 
 /** Distance of m from the segment a–b, mm. */
 export function chordSag(a: Vec2, m: Vec2, b: Vec2): number {
+  return projectOnSegment(a, m, b).distanceMm;
+}
+
+/**
+ * m projected on the line a–b: where along it (`along`, 0 at a, 1 at b,
+ * unclamped) and the distance from m to the nearest point of the segment.
+ */
+export function projectOnSegment(a: Vec2, m: Vec2, b: Vec2): { readonly along: number; readonly distanceMm: number } {
   const dx = b[0] - a[0];
   const dy = b[1] - a[1];
   const l2 = dx * dx + dy * dy;
-  const u = l2 > 0 ? Math.max(0, Math.min(1, ((m[0] - a[0]) * dx + (m[1] - a[1]) * dy) / l2)) : 0;
-  return Math.hypot(m[0] - a[0] - u * dx, m[1] - a[1] - u * dy);
+  const along = l2 > 0 ? ((m[0] - a[0]) * dx + (m[1] - a[1]) * dy) / l2 : 0;
+  const u = Math.max(0, Math.min(1, along));
+  return { along, distanceMm: Math.hypot(m[0] - a[0] - u * dx, m[1] - a[1] - u * dy) };
 }

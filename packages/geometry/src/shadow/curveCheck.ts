@@ -1,3 +1,4 @@
+import { projectOnSegment } from '../calendar/refineByChord.ts';
 import type { Vec3 } from '../parts/mesh.ts';
 import type { SunDay } from '../sun/sunTrack.ts';
 import type { Vec2 } from '../types.ts';
@@ -89,16 +90,10 @@ export function distanceToPaths(X: Vec2, paths: readonly (readonly Vec2[])[]): n
   let beyondEnd = false;
   for (const path of paths) {
     for (let i = 0; i + 1 < path.length; i++) {
-      const [a, b] = [path[i], path[i + 1]];
-      const dx = b[0] - a[0];
-      const dy = b[1] - a[1];
-      const l2 = dx * dx + dy * dy;
-      const raw = l2 > 0 ? ((X[0] - a[0]) * dx + (X[1] - a[1]) * dy) / l2 : 0;
-      const u = Math.max(0, Math.min(1, raw));
-      const d = Math.hypot(X[0] - a[0] - u * dx, X[1] - a[1] - u * dy);
-      if (d < best) {
-        best = d;
-        beyondEnd = (i === 0 && raw < 0) || (i + 2 === path.length && raw > 1);
+      const { along, distanceMm } = projectOnSegment(path[i], X, path[i + 1]);
+      if (distanceMm < best) {
+        best = distanceMm;
+        beyondEnd = (i === 0 && along < 0) || (i + 2 === path.length && along > 1);
       }
     }
   }
