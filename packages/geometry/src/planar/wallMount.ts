@@ -124,8 +124,9 @@ export function wallMount(layout: PlanarLayout): WallMount | null {
         }
       : {
           use: 'dial plate through the mount to the wall',
-          item: `pan-head wood or anchor screw, stainless, ${screw.nominalMm} mm, through plate and mount into a wall plug (timber: straight in)`,
-          size: screw.name,
+          item: `pan-head wood or anchor screw, stainless, through plate and mount into a wall plug (timber: straight in)`,
+          // a wood or anchor screw is sized by its diameter, not a metric thread
+          size: `Ø ${screw.nominalMm.toFixed(1)}`,
           lengthMm: preferredLength(2 * t + ANCHOR_EMBED_MM),
           count: fixings.length,
           countersink: 'none',
