@@ -36,8 +36,8 @@ const CONFIG_INPUTS = [fileURLToPath(import.meta.url), fileURLToPath(new URL('./
 
 /** The dist format; a change here rebuilds every dist. */
 const FORMAT = 1;
-/** Packages left outside the bundle: they read files beside their own code. */
-const NOT_BUNDLED = new Set(['pdfkit', '@resvg/resvg-js', 'manifold-3d']);
+/** Packages left outside the bundle: they read files beside their own code (pdfkitAtItsOwnPath handles the PDF writer's). */
+const NOT_BUNDLED = new Set(['@resvg/resvg-js', 'manifold-3d']);
 
 /**
  * Build dist/ from the sources and point dist/current.json at it.
@@ -65,7 +65,7 @@ export async function buildDist() {
     // Bundled CommonJS packages require() Node's built-ins: give ESM chunks a require.
     banner: { js: "import { createRequire as __umbrafabRequire } from 'node:module';\nconst require = __umbrafabRequire(import.meta.url);" },
     logLevel: 'error',
-    plugins: [thirdPartyByRealPath(externals), packageIndexAsStars()],
+    plugins: [pdfkitAtItsOwnPath(), thirdPartyByRealPath(externals), packageIndexAsStars()],
   };
   try {
     const r = await esbuild.build({
@@ -88,7 +88,7 @@ export async function buildDist() {
     // Inputs to watch: every bundled project file; for a bundled third-party
     // file, only its package's package.json (it changes with the version, on
     // install), which keeps the bin's freshness check to a few hundred stats.
-    const bundled = Object.keys(r.metafile.inputs).map((p) => resolve(CLI, p));
+    const bundled = Object.keys(r.metafile.inputs).filter((p) => !p.startsWith(`${LEFT_OUT}:`)).map((p) => resolve(CLI, p));
     const inputs = [
       ...bundled.map((f) => packageManifestOf(f) ?? f),
       ...listFiles(PAGE_DIR),
@@ -96,11 +96,14 @@ export async function buildDist() {
       ...CONFIG_INPUTS,
       ...externals,
     ];
-    // Which project sources each output file holds (for tests that check what a command loads).
+    // Which project sources and bundled third-party packages (their folder in pnpm's store, once each)
+    // each output file holds, for tests that check what a command loads.
     const chunks = {};
     for (const [out, o] of Object.entries(r.metafile.outputs)) {
       if (!out.endsWith('.mjs')) continue;
-      chunks[out.split('/').pop()] = Object.keys(o.inputs).filter((p) => !p.includes('node_modules')).map((p) => relative(CLI, resolve(CLI, p)).split(sep).join('/'));
+      const files = Object.keys(o.inputs).filter((p) => !p.startsWith(`${LEFT_OUT}:`));
+      const packages = new Set(files.filter((p) => p.includes('node_modules')).map((p) => dirname(packageManifestOf(resolve(CLI, p)) ?? resolve(CLI, p))));
+      chunks[out.split('/').pop()] = [...files.filter((p) => !p.includes('node_modules')).map((p) => resolve(CLI, p)), ...[...packages].sort()].map((p) => relative(CLI, p).split(sep).join('/'));
     }
     writeFileSync(join(tmp, 'chunks.json'), JSON.stringify(chunks, null, 1) + '\n');
     const hash = createHash('sha256');
@@ -191,6 +194,44 @@ function thirdPartyByRealPath(externals) {
         externals.add(r.path);
         const fromOut = relative(join(DIST, 'x'), r.path).split(sep).join('/');
         return { path: fromOut.startsWith('.') ? fromOut : `./${fromOut}`, external: true };
+      });
+    },
+  };
+}
+
+/** pdfkit's ES module build, the file the bundle takes in. */
+/** esbuild's namespace of the modules the bundle replaces (no file on disk: not a build input). */
+const LEFT_OUT = 'umbrafab-left-out';
+const PDFKIT_MODULE = /[\\/]pdfkit[\\/]js[\\/]pdfkit\.node\.mjs$/;
+
+/**
+ * The PDF writer bundled, less its font engine. pdfkit imports fontkit at
+ * load for the font files it can embed; the template writes only the PDF
+ * standard fonts (Helvetica, from their metrics, no font file), so fontkit
+ * and the Unicode tables and decompressors it loads (more than half of
+ * pdfkit's load time) are replaced by a module whose `create` says so
+ * (a bug, if it is ever reached). pdfkit finds its standard-font metrics and
+ * colour profile from its own file's URL: in the bundle `import.meta.url`
+ * names that file, at its real path relative to the output folder (as the
+ * NOT_BUNDLED packages are imported), so they load from the installed
+ * package as before. A pdfkit whose file no longer reads its URL twice
+ * fails the build here, not a template at run time.
+ */
+function pdfkitAtItsOwnPath() {
+  return {
+    name: 'pdfkit-at-its-own-path',
+    setup(build) {
+      build.onResolve({ filter: /^fontkit$/ }, (args) => (PDFKIT_MODULE.test(args.importer) ? { path: 'fontkit', namespace: LEFT_OUT } : undefined));
+      build.onLoad({ filter: /.*/, namespace: LEFT_OUT }, () => ({
+        contents: "export function create() { throw new Error('umbrafab bundles pdfkit without fontkit: a PDF may use only the standard fonts (see pdfkitAtItsOwnPath in packages/cli/scripts/build.mjs)'); }",
+        loader: 'js',
+      }));
+      build.onLoad({ filter: PDFKIT_MODULE }, (args) => {
+        const text = readFileSync(args.path, 'utf8');
+        const uses = text.split('import.meta.url').length - 1;
+        if (uses !== 2) return { errors: [{ text: `${args.path}: expected import.meta.url twice (the standard fonts' require and the colour profile), found ${uses}` }] };
+        const fromOut = relative(join(DIST, 'x'), args.path).split(sep).join('/');
+        return { contents: text.replaceAll('import.meta.url', `new URL(${JSON.stringify(fromOut)}, import.meta.url)`), loader: 'js', resolveDir: dirname(args.path) };
       });
     },
   };
