@@ -12,19 +12,21 @@ export const buildCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
-    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }, { countMarks, markCountText }, { engraveOnWorker }] = await Promise.all([
+    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }, { countMarks, markCountText }, { engraveOnWorker }, { engraveProgramsFor }] = await Promise.all([
       import('../buildFiles.ts'),
       import('../readSpec.ts'),
       import('../writeFilesAtomic.ts'),
       import('@umbrafab/geometry'),
       import('../engraveOnWorker.ts'),
+      import('@umbrafab/fabricate'),
     ]);
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
     assertOutFolder(outDir);
     const spec = readSpecFile(args.spec);
-    // The engraving worker once the spec is good (a refused spec starts no thread): it loads its
-    // code (and manifold-3d for a filled laser program) while this thread lays out the dial.
-    const engraveWorker = engraveOnWorker();
+    // The engraving worker once the spec is good and asks for a program (a refused spec or one with
+    // no engraving starts no thread): it loads its code (and manifold-3d for a filled laser program)
+    // while this thread lays out the dial.
+    const engraveWorker = engraveProgramsFor(spec.engrave.programs, spec.process.method).length > 0 ? engraveOnWorker() : undefined;
     engraveWorker?.prepare(spec);
     // Stopped once the build is done (its work is in) or failed (not needed).
     const result = await buildAnyFiles(spec, engraveWorker).finally(() => engraveWorker?.close());
