@@ -12,14 +12,7 @@ export const buildCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace files that already exist in the output folder' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick.
-    const [{ buildAnyFiles }, { readSpecFile }, { writeFilesAtomic }, { countMarks, markCountText }, { engraveOnWorker }, { engraveProgramsFor }] = await Promise.all([
-      import('../buildFiles.ts'),
-      import('../readSpec.ts'),
-      import('../writeFilesAtomic.ts'),
-      import('@umbrafab/geometry'),
-      import('../engraveOnWorker.ts'),
-      import('@umbrafab/fabricate'),
-    ]);
+    const { buildAnyFiles, countMarks, engraveOnWorker, engraveProgramsFor, markCountText, readSpecFile, writeFilesAtomic } = await import('./buildDeps.ts');
     const outDir: string = args.out ?? join('out', specBaseName(args.spec));
     assertOutFolder(outDir);
     const spec = readSpecFile(args.spec);
