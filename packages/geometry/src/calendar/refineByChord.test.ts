@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Vec2 } from '../types.ts';
-import { chordSag, refineByChord } from './refineByChord.ts';
+import { chordSag, curveEnd, refineByChord } from './refineByChord.ts';
 
 /** Largest distance of the curve, sampled densely, from the drawn polyline through the refined samples. */
 function worstDistance(curve: (u: number) => Vec2, u0: number, u1: number, drawn: readonly Vec2[]): number {
@@ -45,5 +45,35 @@ describe('refineByChord', () => {
   it('the example: a parabola over [0, 1] at 0.01 mm', () => {
     // By hand: the sag of y = u² over a step L is (L²/4)/√(1 + slope²): steps 0.125 over [0, 0.5], 0.25 over [0.5, 1].
     expect(refineByChord([0, 1], (u) => ({ point: [u, u * u] as const }), { toleranceMm: 0.01, maxHalvings: 12 }).length).toBe(7);
+  });
+
+  it('with endWidth, runs a curve to where it stops within a step (both sides), and refines up to that end', () => {
+    // A circle drawn for u in [0.37, 1.23] only, sampled every 0.5: without endWidth it stops at 0.5 and 1.
+    const at = (u: number) => (u >= 0.37 && u <= 1.23 ? { point: circle(u), u } : null);
+    const plain = refineByChord([0, 0.5, 1, 1.5], at, { toleranceMm: 0.0005, maxHalvings: 12 }).filter((s) => s !== null);
+    expect(Math.min(...plain.map((s) => s.u))).toBe(0.5);
+    expect(Math.max(...plain.map((s) => s.u))).toBe(1);
+    const out = refineByChord([0, 0.5, 1, 1.5], at, { toleranceMm: 0.0005, maxHalvings: 12, endWidth: 1e-9 });
+    expect(out[0]).toBeNull();
+    expect(out[out.length - 1]).toBeNull();
+    const drawn = out.filter((s) => s !== null);
+    const us = drawn.map((s) => s.u);
+    expect(us).toEqual([...us].sort((a, b) => a - b));
+    expect(0.37 - us[0]).toBeLessThanOrEqual(0);
+    expect(us[0] - 0.37).toBeLessThan(1e-9);
+    expect(1.23 - us[us.length - 1]).toBeLessThan(1e-9);
+    expect(worstDistance(circle, us[0], us[us.length - 1], drawn.map((s) => s.point))).toBeLessThanOrEqual(0.0005);
+  });
+
+  it('curveEnd: bisects toward the undrawn end to the given width, from either side', () => {
+    const at = (u: number) => (u < 0.3 ? u : null);
+    const forward = curveEnd(0, at(0), 1, at(1), at, 1e-6);
+    expect(forward.u).toBeLessThan(0.3);
+    expect(0.3 - forward.u).toBeLessThanOrEqual(1e-6);
+    const at2 = (u: number) => (u > 0.3 ? u : null);
+    const back = curveEnd(0, at2(0), 1, at2(1), at2, 1e-6);
+    expect(back.u).toBeGreaterThan(0.3);
+    expect(back.u - 0.3).toBeLessThanOrEqual(1e-6);
+    expect(() => curveEnd(0, 1, 1, 2, () => 1, 1e-6)).toThrow(/exactly one end/);
   });
 });

@@ -20,6 +20,13 @@ export interface RefineByChordOptions<S extends CurveSample> {
   readonly maxHalvings: number;
   /** whether two samples belong to one drawn run (e.g. cast by the same style edge); default: always */
   readonly sameRun?: (a: S, b: S) => boolean;
+  /**
+   * set: a first step from a drawn to an undrawn parameter (or back) is
+   * bisected to the curve's end, down to this width of the parameter, and
+   * the curve drawn up to that end (`curveEnd`); unset: the curve stops at
+   * its last drawn first parameter
+   */
+  readonly endWidth?: number;
 }
 
 /**
@@ -27,7 +34,9 @@ export interface RefineByChordOptions<S extends CurveSample> {
  * to be drawn as chords: the curve at every first parameter, and each step
  * halved, recursively, while the curve's point at the step's middle lies
  * more than `toleranceMm` from the chord between the step's ends (at most
- * `maxHalvings` times). A step is not refined where either end is null
+ * `maxHalvings` times). With `endWidth`, a first step with one end undrawn
+ * gains the curve's last drawn point before it (`curveEnd`), refined like
+ * the rest. A step is not refined where either end is null
  * (the curve is not drawn there) or the ends, or the middle, fall in
  * different runs (`sameRun`): the curve breaks there anyway. Returns the
  * samples in parameter order, nulls kept, for the caller to split in runs.
@@ -55,11 +64,39 @@ export function refineByChord<S extends CurveSample>(params: readonly number[], 
   out.push(prev);
   for (let i = 1; i < params.length; i++) {
     const next = at(params[i]);
-    refine(params[i - 1], prev, params[i], next, 0);
+    if (options.endWidth !== undefined && !prev !== !next) {
+      const end = curveEnd(params[i - 1], prev, params[i], next, at, options.endWidth);
+      if (prev) {
+        refine(params[i - 1], prev, end.u, end.sample, 0);
+        out.push(end.sample);
+      } else {
+        out.push(end.sample);
+        refine(end.u, end.sample, params[i], next, 0);
+      }
+    } else refine(params[i - 1], prev, params[i], next, 0);
     out.push(next);
     prev = next;
   }
   return out;
+}
+
+/**
+ * The end of a curve within a step whose one end is drawn (`a` or `b`
+ * non-null) and the other not: the drawn end kept, the step halved toward
+ * the undrawn one while it is wider than `width`. Returns the last drawn
+ * parameter found and its sample, within `width` of where the curve stops.
+ */
+export function curveEnd<S>(ua: number, a: S | null, ub: number, b: S | null, at: (u: number) => S | null, width: number): { readonly u: number; readonly sample: S } {
+  if ((a === null) === (b === null)) throw new Error('curveEnd: exactly one end of the step must be drawn');
+  let drawn = a !== null ? { u: ua, sample: a } : { u: ub, sample: b! };
+  let undrawn = a !== null ? ub : ua;
+  while (Math.abs(undrawn - drawn.u) > width) {
+    const u = (drawn.u + undrawn) / 2;
+    const m = at(u);
+    if (m !== null) drawn = { u, sample: m };
+    else undrawn = u;
+  }
+  return drawn;
 }
 
 /** Distance of m from the segment a–b, mm. */

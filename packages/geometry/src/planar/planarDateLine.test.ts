@@ -6,6 +6,7 @@ import { nodusShadowOf, planarSiteDateLine, shadowRuns, type NodusTrace } from '
 import type { PlanarFace } from './planarTypes.ts';
 import type { PlanarGnomon } from './styleEdgeAnchor.ts';
 import { sunDirectionEnu } from './sunDirectionEnu.ts';
+import { observerMeridianAu, topocentricSun } from '../sun/topocentricSun.ts';
 import { planarFace } from './planarFace.ts';
 import { planarMeanTimeCurve } from './planarMeanTimeCurve.ts';
 
@@ -99,5 +100,39 @@ describe('date lines of a nodus on any face', () => {
       expect(n).toBeGreaterThan(100);
       expect(worst).toBeLessThan(0.00051);
     }
+  });
+
+  it('runs to sunset: the line ends within 0.0005 mm of the nodus shadow at the sunset hour angle of Meeus eq. 15.1 (a declining wall, an equatorial lower face)', () => {
+    // Reference: J. Meeus, Astronomical Algorithms (2nd ed.), ch. 15, eq. 15.1, cos H₀ = (sin h₀ − sin φ sin δ)/(cos φ cos δ),
+    // with h₀ = +π, the Sun's horizontal parallax 8.794″/r (ch. 40): the face counts the Sun's centre on the
+    // geometric horizon as seen from the site (no refraction), i.e. the geocentric Sun π above it. Before the
+    // end was bisected the lines stopped at the last 0.25° sample before sunset, 0.2 to 1.8 mm short on this grid.
+    const PARALLAX_RAD = (8.794 / 3600) * DEG;
+    const grid = Array.from({ length: 721 }, (_, i) => (-90 + i / 4) * DEG);
+    const cases = [
+      { face: planarFace({ type: 'vertical', latitudeRad: 47.4 * DEG, declinationRad: 24.5 * DEG }), g: { thicknessMm: 4, heightMm: 90 }, decDeg: -23.44, r: 0.9833, signs: [1] },
+      { face: planarFace({ type: 'vertical', latitudeRad: 47.4 * DEG, declinationRad: 24.5 * DEG }), g: { thicknessMm: 4, heightMm: 90 }, decDeg: 0, r: 0.996, signs: [1] },
+      { face: planarFace({ type: 'equatorial', latitudeRad: 40.6 * DEG, side: 'lower' }), g: { thicknessMm: 6, heightMm: 50 }, decDeg: -23.44, r: 0.9833, signs: [-1, 1] },
+    ];
+    let worst = 0;
+    for (const { face, g, decDeg, r, signs } of cases) {
+      const phi = face.orientation.latitudeRad;
+      const dec = decDeg * DEG;
+      const h0 = PARALLAX_RAD / r;
+      const H0 = Math.acos((Math.sin(h0) - Math.sin(phi) * Math.sin(dec)) / (Math.cos(phi) * Math.cos(dec)));
+      const runs = planarSiteDateLine(face, g, { declinationRad: dec, distanceAu: r, hourAngles: grid });
+      const ends = runs.flatMap((run) => [run.points[0], run.points[run.points.length - 1]]);
+      for (const sign of signs) {
+        // The shadow a hair (1e-7 rad, under 1e-4 mm here) inside the lit side of the reference sunset.
+        const H = sign * (H0 - 1e-7);
+        const seen = topocentricSun(H, dec, r, phi, observerMeridianAu(phi / DEG, 0));
+        const X = nodusShadowOf(face, g, { sun: seen.enu, hourAngleRad: seen.hourAngleRad });
+        expect(X).not.toBeNull();
+        const gap = Math.min(...ends.map((p) => Math.hypot(p[0] - X!.point[0], p[1] - X!.point[1])));
+        console.log(`${face.orientation.type} δ ${decDeg}°: sunset H₀ ${((sign * H0) / DEG).toFixed(5)}°, drawn end ${gap.toExponential(2)} mm from its shadow`);
+        worst = Math.max(worst, gap);
+      }
+    }
+    expect(worst).toBeLessThan(0.0005);
   });
 });

@@ -30,6 +30,13 @@ export interface PlanarSiteDateLineOptions {
 
 /** Halvings of a first step at most. */
 const MAX_HALVINGS = 12;
+/**
+ * How close to where the face stops showing it (sunset, sunrise, or the Sun
+ * leaving the face's plane) a date line is drawn, radians of hour angle:
+ * 1e-10 rad, 2e-8°, under 1e-7 mm of shadow for a nodus within 1 m of the face
+ * at a finite end (a tenth of a micron against the 0.0005 mm chord tolerance).
+ */
+const END_WIDTH_RAD = 1e-10;
 
 /**
  * The date line (a conic) of declination δ as the site sees it: the nodus
@@ -39,8 +46,11 @@ const MAX_HALVINGS = 12;
  * Earth's centre to the site (`topocentricSun`: the diurnal parallax, up to
  * 8.8″, a few µm on the face), each step between the given hour angles
  * halved while the line strays more than `chordToleranceMm` from its chord
- * (`refineByChord`); split into runs wherever the casting edge changes or
- * the Sun leaves the face (`shadowRuns`).
+ * (`refineByChord`), and each step over which the Sun sets, rises, or
+ * leaves or reaches the face bisected to that end (`curveEnd`, to
+ * `END_WIDTH_RAD`), so the line runs to the last hour angle the face shows
+ * it; split into runs wherever the casting edge changes or the Sun leaves
+ * the face (`shadowRuns`).
  *
  * @example planarSiteDateLine(face, { thicknessMm: 0, heightMm: 90 }, { declinationRad: 0.409, distanceAu: 1.016, hourAngles: [-1, 0, 1] })
  */
@@ -52,7 +62,7 @@ export function planarSiteDateLine(face: PlanarFace, gnomon: PlanarGnomon, optio
     return nodusShadowOf(face, gnomon, { sun: seen.enu, hourAngleRad: seen.hourAngleRad }, options.alongStyleMm);
   };
   const toleranceMm = options.chordToleranceMm ?? CURVE_CHORD_TOLERANCE_MM;
-  return shadowRuns(refineByChord(options.hourAngles, at, { toleranceMm, maxHalvings: MAX_HALVINGS, sameRun: (a, b) => a.edge === b.edge }));
+  return shadowRuns(refineByChord(options.hourAngles, at, { toleranceMm, maxHalvings: MAX_HALVINGS, endWidth: END_WIDTH_RAD, sameRun: (a, b) => a.edge === b.edge }));
 }
 
 /** One Sun position of a date line or mean-time curve. */
