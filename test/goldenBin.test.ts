@@ -61,6 +61,22 @@ describe('the bin builds every planar fixture with its pictures, from a folder o
   });
 });
 
+describe('a face engraved with both programs (the laser program on the worker, the router program in the build thread: engraveBeside.ts)', () => {
+  it('garden-horizontal with engrave.programs both: the same bytes as the in-process build', async () => {
+    const spec = parse(readFileSync(join(ROOT, 'fixtures/planar/garden-horizontal.yaml'), 'utf8')) as { engrave?: Record<string, unknown> };
+    const file = join(work, 'garden-both.yaml');
+    writeFileSync(file, stringify({ ...spec, engrave: { ...spec.engrave, programs: 'both' } }));
+    const out = join(work, 'garden-both');
+    const r = spawnSync(process.execPath, [BIN, 'build', file, '--out', out], { cwd: ROOT, encoding: 'utf8' });
+    expect(r.status, r.stderr).toBe(0);
+    const names = readdirSync(out);
+    expect(names).toEqual(expect.arrayContaining(['engrave.ngc', 'engrave-laser.gcode', 'report.json']));
+    const inProcess = join(work, 'garden-both-src');
+    expect((await runCli(['build', file, '--out', inProcess])).code).toBe(0);
+    expect(names.filter((n) => !readFileSync(join(out, n)).equals(readFileSync(join(inProcess, n))))).toEqual([]);
+  });
+});
+
 describe('a bad engraving input found on the worker thread', () => {
   it('is the same SpecError as in one thread: exit 1, the same message, no files', async () => {
     // The router fixture with a 0.5 mm V-bit for its 1 mm hour marks: refused by the engraving's tool check, which runs on the worker.

@@ -28,6 +28,7 @@ import { planarPictureFiles } from './outputs/planarPictures.ts';
 import type { PlanarReport, WallMountSection } from './outputs/planarReport.ts';
 import { planarPreviewSvgOptions } from './planarViews.ts';
 import type { EngraveWorker } from './engraveOnWorker.ts';
+import { engraveBeside } from './engraveBeside.ts';
 import type { OutputFile } from './writeFilesAtomic.ts';
 
 /** What a planar build produces, in memory (the same shape as the polar `BuildResult`). */
@@ -55,7 +56,7 @@ export async function buildPlanarFiles(spec: DialSpec, generator: string, engrav
   if (!engraves) engraveWorker?.close();
   // A plate engraved on both faces: one program set per side, the turn between them named in each header (side 1 on the worker, side 2 here).
   const sides = twoFaceEngraving(drawing);
-  const onWorker = engraves ? engraveWorker?.engrave(spec, drawing, engraveFromSpec, sides?.upper) : undefined;
+  const onWorker = !engraves || !engraveWorker ? undefined : sides ? engraveWorker.engrave(spec, drawing, engraveFromSpec, sides.upper) : engraveBeside(engraveWorker, spec, drawing, engraveFromSpec);
   onWorker?.catch(() => undefined);
   const files: OutputFile[] = [];
   const part = planarGnomonSolid(layout);

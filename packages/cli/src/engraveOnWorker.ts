@@ -2,13 +2,13 @@ import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { DialSpec, PlateDrawing, SpecError } from '@umbrafab/geometry';
-import type { EngraveFace, SpecEngraving } from '@umbrafab/fabricate';
+import type { EngraveFace, EngraveProgram, SpecEngraving } from '@umbrafab/fabricate';
 
 /** What a build needs of its engraving: the program files and report.json's `engraving` section (engraveFromSpec's result). */
 export type Engraving = Pick<SpecEngraving, 'files' | 'report'>;
 
-/** One spec's engraving from its plate drawing (engraveFromSpec), for one side of a plate engraved on both faces when `face` is given. */
-export type Engrave = (spec: DialSpec, drawing: PlateDrawing, face?: EngraveFace) => Promise<Engraving>;
+/** One spec's engraving from its plate drawing (engraveFromSpec), for one side of a plate engraved on both faces when `face` is given, of `only` those programs when given. */
+export type Engrave = (spec: DialSpec, drawing: PlateDrawing, face?: EngraveFace, only?: readonly EngraveProgram[]) => Promise<Engraving>;
 
 /**
  * A worker thread that engraves one build: `prepare` tells it the spec as
@@ -19,7 +19,7 @@ export type Engrave = (spec: DialSpec, drawing: PlateDrawing, face?: EngraveFace
  */
 export interface EngraveWorker {
   readonly prepare: (spec: DialSpec) => void;
-  readonly engrave: (spec: DialSpec, drawing: PlateDrawing, inThread: Engrave, face?: EngraveFace) => Promise<Engraving>;
+  readonly engrave: (spec: DialSpec, drawing: PlateDrawing, inThread: Engrave, face?: EngraveFace, only?: readonly EngraveProgram[]) => Promise<Engraving>;
   readonly close: () => void;
 }
 
@@ -71,11 +71,11 @@ export function engraveOnWorker(): EngraveWorker | undefined {
   // Listening from the start: an 'error' with no listener would throw in this thread.
   w.on('error', lost);
   w.on('exit', lost);
-  const engrave: EngraveWorker['engrave'] = (spec, drawing, inThread, face) => {
+  const engrave: EngraveWorker['engrave'] = (spec, drawing, inThread, face, only) => {
     if (used) throw new Error('engraveOnWorker: the worker serves one build');
     used = true;
     // The worker could not load or died: engrave here (same code, same bytes); closed by the build: nothing is wanted.
-    const here = (): Promise<Engraving> => (closed ? Promise.reject(new Error('engraveOnWorker: closed before the engraving was done')) : inThread(spec, drawing, face));
+    const here = (): Promise<Engraving> => (closed ? Promise.reject(new Error('engraveOnWorker: closed before the engraving was done')) : inThread(spec, drawing, face, only));
     if (gone) return here();
     return new Promise<Engraving>((resolve, reject) => {
       let done = false;
@@ -88,7 +88,7 @@ export function engraveOnWorker(): EngraveWorker | undefined {
       };
       onGone = () => finish(() => here().then(resolve, reject));
       w.once('message', (m: Engraving | { error: WorkerError }) => finish(() => ('error' in m ? reject(rebuiltError(m.error)) : resolve(m))));
-      w.postMessage({ spec, drawing, face });
+      w.postMessage({ spec, drawing, face, only });
     });
   };
   const close = () => {

@@ -3,23 +3,24 @@
 // the main thread, so they run on the second core while the main thread
 // writes the other outputs. Bundled as dist/<hash>/engraveWorker.mjs.
 // Messages in: {prepare: spec} as soon as the spec is read, then {spec,
-// drawing, face?} (face: one side of a plate engraved on both faces); out:
+// drawing, face?, only?} (face: one side of a plate engraved on both faces;
+// only: just those programs); out:
 // {files, report} or {error}.
 import { parentPort } from 'node:worker_threads';
 import { isSpecError, manifoldEngine, type DialSpec, type PlateDrawing } from '@umbrafab/geometry';
-import { engraveFromSpec, engraveProgramsFor, type EngraveFace } from '@umbrafab/fabricate';
+import { engraveFromSpec, engraveProgramsFor, type EngraveFace, type EngraveProgram } from '@umbrafab/fabricate';
 import type { WorkerError } from './engraveOnWorker.ts';
 
-parentPort?.on('message', async (m: { prepare: DialSpec } | { spec: DialSpec; drawing: PlateDrawing; face?: EngraveFace }) => {
+parentPort?.on('message', async (m: { prepare: DialSpec } | { spec: DialSpec; drawing: PlateDrawing; face?: EngraveFace; only?: readonly EngraveProgram[] }) => {
   if ('prepare' in m) {
     // A filled laser program needs the mesh kernel (laserFill.ts): load it while the main thread lays out the dial.
     const spec = m.prepare;
     if (spec.engrave.laserFill === 'fill' && engraveProgramsFor(spec.engrave.programs, spec.process.method).includes('laser')) void manifoldEngine().catch(() => undefined);
     return;
   }
-  const { spec, drawing, face } = m;
+  const { spec, drawing, face, only } = m;
   try {
-    const r = await engraveFromSpec(spec, drawing, face);
+    const r = await engraveFromSpec(spec, drawing, face, only);
     parentPort?.postMessage({ files: r.files, report: r.report });
   } catch (e) {
     const err = e instanceof Error ? e : new Error(String(e));

@@ -12,9 +12,9 @@ export { toReportJson } from './report/toReportJson.ts';
 
 export { resolveEngraveSettings, MATERIAL_NAMES, MATERIAL_PRESETS } from './engrave/materialPresets.ts';
 export { vbitDepthMm } from './engrave/vbitDepth.ts';
-export { engraveProgramsFor } from './engrave/engravePrograms.ts';
+export { engraveProgramsFor, type EngraveProgram } from './engrave/engravePrograms.ts';
 export { engraveSettingsFromSpec } from './engrave/engraveSettingsFromSpec.ts';
-export { engravingPlanKey, planEngraving, writeEngraving, engraveFromSpec, engraveFileName, type EngraveFace, type EngravingReport, type SpecEngraving } from './engrave/engraveFromSpec.ts';
+export { engravingPlanKey, planEngraving, writeEngraving, engraveFromSpec, engraveFileName, joinEngravings, type EngraveFace, type EngravingFiles, type EngravingReport, type SpecEngraving } from './engrave/engraveFromSpec.ts';
 export { twoFaceEngraving, type TwoFaceEngraving } from './engrave/twoFaceEngraving.ts';
 export { clipToPlate } from './engrave/clipToPlate.ts';
 export { cutFromParts, cutFromSpec, writesCutProgram, type CutProgram, type CuttingReport } from './engrave/cutFromSpec.ts';

@@ -202,12 +202,14 @@ export function engravingPlanKey(spec: DialSpec): string {
 /**
  * Plan the engraving programs a spec asks for (engrave.programs, see
  * engraveProgramsFor) from its plate drawing: checks, toolpaths, fill,
- * figures; writeEngraving adds the header and writes the text.
+ * figures; writeEngraving adds the header and writes the text. With `only`,
+ * just those of them (the others planned elsewhere, joinEngravings puts the
+ * parts together).
  *
  * @throws SpecError as engraveFromSpec
  */
-export async function planEngraving(spec: DialSpec, drawing: PlateDrawing): Promise<EngravingPlan> {
-  const programs = engraveProgramsFor(spec.engrave.programs, spec.process.method);
+export async function planEngraving(spec: DialSpec, drawing: PlateDrawing, only?: readonly EngraveProgram[]): Promise<EngravingPlan> {
+  const programs = engraveProgramsFor(spec.engrave.programs, spec.process.method).filter((p) => !only || only.includes(p));
   if (programs.length === 0) return { report: { programs } };
   const settings = engraveSettingsFromSpec(spec);
   const job = engraveJobFromDrawing(drawing, { thicknessMm: spec.plate.thickness, material: spec.plate.material }, []);
@@ -298,6 +300,29 @@ export function writeEngraving(plan: EngravingPlan, spec: DialSpec, face?: Engra
  *   allows; feeds of zero never get here (the schema rejects them)
  * @example (await engraveFromSpec(spec, plateDrawing(layoutDial(spec)))).files.map((f) => f.name)
  */
-export async function engraveFromSpec(spec: DialSpec, drawing: PlateDrawing, face?: EngraveFace): Promise<SpecEngraving> {
-  return writeEngraving(await planEngraving(spec, drawing), spec, face);
+export async function engraveFromSpec(spec: DialSpec, drawing: PlateDrawing, face?: EngraveFace, only?: readonly EngraveProgram[]): Promise<SpecEngraving> {
+  return writeEngraving(await planEngraving(spec, drawing, only), spec, face);
+}
+
+/** What a build keeps of an engraving: its files and report.json's section. */
+export type EngravingFiles = Pick<SpecEngraving, 'files' | 'report'>;
+
+/**
+ * One engraving from parts planned apart (engraveFromSpec's `only`, one
+ * program each, e.g. on two threads): the files in `programs` order and the
+ * report engraveFromSpec gives for all of them at once. The figures every
+ * program shares (preset, lengths) come from the same job in every part.
+ */
+export function joinEngravings(parts: readonly EngravingFiles[], programs: readonly EngraveProgram[]): EngravingFiles {
+  const partOf = (program: EngraveProgram): EngravingFiles => {
+    const found = parts.filter((p) => p.report.programs.includes(program));
+    if (found.length !== 1) throw new Error(`joinEngravings: program ${program} is in ${found.length} parts, not one`);
+    return found[0];
+  };
+  if (programs.length === 0 || parts.some((p) => p.report.programs.length !== 1)) throw new Error('joinEngravings: needs one part of one program for each program');
+  const r = partOf(programs[0]).report;
+  return {
+    files: programs.flatMap((p) => partOf(p).files),
+    report: { ...r, programs, ngc: programs.includes('ngc') ? partOf('ngc').report.ngc : undefined, laser: programs.includes('laser') ? partOf('laser').report.laser : undefined },
+  };
 }
