@@ -93,7 +93,7 @@ describe('umbrafab check catches broken plates', () => {
     writeFileSync(file, edit.text);
     const r = await runCli(['check', DEMO, '--plate', file]);
     expect(r.code).toBe(1);
-    expect(r.err).toMatch(/mark 10:00 west is 0\.50\d mm off the simulated shadow on \d{4}-\d{2}-\d{2}/);
+    expect(r.err).toMatch(/mark 10:00 west is 0\.50\d\d mm off the simulated shadow on \d{4}-\d{2}-\d{2}/);
     expect(r.out).toMatch(/FAIL: mark 10:00 west: shadow -0\.50\d mm/);
     // only that mark fails
     expect(r.out.match(/FAIL:/g)?.length).toBe(1);

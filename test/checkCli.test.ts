@@ -43,7 +43,7 @@ describe('umbrafab check (CLI)', () => {
     writeFileSync(spec, readFileSync(DEMO, 'utf8') + 'check:\n  tolerance: 0.5\n  tiltError: 2\n  sampling:\n    everyDays: 7\n');
     const r = await runCli(['check', spec]);
     expect(r.code).toBe(1);
-    expect(r.err).toMatch(/^umbrafab check: mark \d\d:\d\d (west|east) is \d+\.\d{3} mm off the simulated shadow on 2027-\d\d-\d\d \(tolerance 0.5 mm\)/);
+    expect(r.err).toMatch(/^umbrafab check: mark \d\d:\d\d (west|east) is \d+\.\d{4} mm off the simulated shadow on 2027-\d\d-\d\d \(tolerance 0.5 mm\)/);
   });
 
   it('bad input: a missing --plate file and an unknown check field are exit 1 with the field named', async () => {

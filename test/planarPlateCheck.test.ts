@@ -34,7 +34,7 @@ describe('umbrafab check --plate on every planar face type (marks read back from
       const r = await runCli(['check', spec, '--plate', file]);
       console.log(`${fixture}: moved line ${target.label} ${target.edge} by 0.5 mm across -> ${r.err.trim()}`);
       expect(r.code).toBe(1);
-      expect(r.err).toContain(`line ${target.label} ${target.edge} is`);
+      expect(r.err).toContain(`mark ${target.label} ${target.edge} is`);
       expect(r.err).toMatch(/mm off the simulated shadow on \d{4}-\d{2}-\d{2}/);
     });
   }

@@ -54,6 +54,7 @@ export { fitPixelBudget, MAX_PICTURE_PIXELS } from './pictures/fitPixelBudget.ts
 export { toCheckJson } from './check/toCheckJson.ts';
 export { toCheckSvg } from './check/toCheckSvg.ts';
 export { toPlanarCheckSvg } from './check/toPlanarCheckSvg.ts';
+export { checkFailureLine } from './check/checkSummaryText.ts';
 export { checkTableText } from './check/checkTableText.ts';
 export { planarCheckText } from './check/planarCheckText.ts';
 

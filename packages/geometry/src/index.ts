@@ -76,7 +76,7 @@ export { planarFaceVector, planarShadowOnFace } from './shadow/planarShadowOnFac
 export { marksFromPlate, type PlateLine } from './shadow/marksFromPlate.ts';
 export { checkDial, isFaceLit, type MarkCheck, type CheckResult } from './shadow/checkDial.ts';
 export { checkPlanar, type PlanarCheckResult } from './shadow/checkPlanar.ts';
-export { type CheckSummary, type MarkSummary } from './shadow/checkSummary.ts';
+export { type CheckSummary, type MarkFailure, type MarkSummary } from './shadow/checkSummary.ts';
 export { type CurveCheck, type DrawnCurve } from './shadow/curveCheck.ts';
 export { drawnCurvesFromLayout } from './shadow/polarCurveCheck.ts';
 export { curvesFromPlate, type PlateCurves } from './shadow/curvesFromPlate.ts';

@@ -16,7 +16,7 @@ export const checkCommand: CommandModule = {
       .option('force', { type: 'boolean', default: false, describe: 'replace check.json / check.svg if they exist' }),
   run: async (args, io) => {
     // Loaded only when the command runs, so `--help`, `--version` and `init` stay quick; the DXF reader only with --plate.
-    const { checkDial, checkPlanar, checkTableText, countMarks, curvesFromPlate, drawnCurvesFromLayout, faceOrientationOf, layoutDial, markCountText, layoutPlanar, lowerFacePlateLines, marksFromPlate, parseSpec, planarCheckText, planarMarksFromPlate, readRawSpec, toCheckJson, toCheckSvg, toPlanarCheckSvg, writeFilesAtomic } = await import('./checkDeps.ts');
+    const { checkDial, checkFailureLine, checkPlanar, checkTableText, countMarks, curvesFromPlate, drawnCurvesFromLayout, faceOrientationOf, layoutDial, markCountText, layoutPlanar, lowerFacePlateLines, marksFromPlate, parseSpec, planarCheckText, planarMarksFromPlate, readRawSpec, toCheckJson, toCheckSvg, toPlanarCheckSvg, writeFilesAtomic } = await import('./checkDeps.ts');
     if (args.out !== undefined) assertOutFolder(String(args.out));
     // The spec as written, normalised once (with --year in place of calendar.year): the same path as build.
     const raw = readRawSpec(args.spec) as Record<string, unknown>;
@@ -59,10 +59,7 @@ export const checkCommand: CommandModule = {
       }
       const failed = results.find((r) => !r.pass);
       if (failed) {
-        const f = failed.failures[0];
-        const c = failed.curves.find((k) => !k.pass);
-        const where = failed.side && results.length > 1 ? ` on the ${failed.side} face` : '';
-        io.err(f ? `umbrafab check: line ${f.label} ${f.edge}${where} is ${Math.abs(f.errorMm).toFixed(4)} mm off the simulated shadow on ${f.date} (tolerance ${failed.toleranceMm} mm)` : `umbrafab check: ${c ? `curve ${c.label}${where} is ${c.worstMm.toFixed(4)} mm off the nodus shadow on ${c.worstDate ?? '-'}` : `a curve${where} lies beyond its tolerance`} (tolerance ${failed.curveToleranceMm} mm)`);
+        io.err(checkFailureLine(failed, (f) => f.edge, failed.side && results.length > 1 ? ` on the ${failed.side} face` : ''));
         return 1;
       }
       return 0;
@@ -93,12 +90,7 @@ export const checkCommand: CommandModule = {
       io.out(`umbrafab: wrote check.json, check.svg to ${join(dir)}`);
     }
     if (!result.pass) {
-      const f = result.failures[0];
-      const badCurves = result.curves.filter((c) => !c.pass);
-      const curveText = badCurves.length ? `${badCurves.length} date line(s) or curve(s) fail, first ${badCurves[0].label}: ${badCurves[0].worstMm.toFixed(4)} mm off the nodus shadow on ${badCurves[0].worstDate ?? '-'}` : '';
-      io.err(f
-        ? `umbrafab check: mark ${f.label} ${f.style} is ${Math.abs(f.errorMm).toFixed(3)} mm off the simulated shadow on ${f.date} (tolerance ${result.toleranceMm} mm); ${result.failures.length} mark(s) fail${curveText ? `; ${curveText}` : ''}`
-        : `umbrafab check: ${curveText} (tolerance ${result.curveToleranceMm} mm)`);
+      io.err(checkFailureLine(result, (f) => f.style));
       return 1;
     }
     return 0;

@@ -1,4 +1,4 @@
-import type { CheckSummary, CurveCheck } from '@umbrafab/geometry';
+import type { CheckSummary, CurveCheck, MarkFailure } from '@umbrafab/geometry';
 
 /** Fixed-decimals text of a number, "-0.000" shown as "0.000". */
 export function fx(v: number, d: number): string {
@@ -59,4 +59,23 @@ export function curveSectionLines(r: CheckSummary, source?: 'layout' | 'plate'):
       .filter((k) => !k.pass)
       .map((c) => `FAIL: curve ${c.label}: nodus shadow ${fx(c.worstMm, 4)} mm (${fx(c.worstS, 1)} s) off the drawn curve on ${c.worstDate ?? '-'}; beyond ${fx(r.curveToleranceMm, 3)} mm`),
   };
+}
+
+/**
+ * The one line `umbrafab check` writes to stderr when a check fails, polar
+ * or planar alike: the first mark beyond the tolerance (its label, the style
+ * edge that casts it, `where` it is, e.g. " on the lower face", its error in
+ * mm to 4 decimals, a tenth of the 0.001 mm the checks hold a mark to, and
+ * its day), how many marks fail, and how many date lines or curves fail with
+ * the first of them; without failing marks, the curves alone with the curve
+ * tolerance.
+ *
+ * @example checkFailureLine(result, (f) => f.style) // "umbrafab check: mark 10:00 west is 0.5012 mm off the simulated shadow on 2027-06-21 (tolerance 0.001 mm); 1 mark(s) fail"
+ */
+export function checkFailureLine<F extends MarkFailure>(r: CheckSummary & { readonly failures: readonly F[] }, casterOf: (f: F) => string, where = ''): string {
+  const f = r.failures[0];
+  const bad = r.curves.filter((c) => !c.pass);
+  const curves = bad.length ? `${bad.length} date line(s) or curve(s) fail, first ${bad[0].label}${where}: ${fx(bad[0].worstMm, 4)} mm off the nodus shadow on ${bad[0].worstDate ?? '-'}` : '';
+  if (!f) return `umbrafab check: ${curves || `a date line or curve${where} lies beyond its tolerance`} (tolerance ${r.curveToleranceMm} mm)`;
+  return `umbrafab check: mark ${f.label} ${casterOf(f)}${where} is ${fx(Math.abs(f.errorMm), 4)} mm off the simulated shadow on ${f.date} (tolerance ${r.toleranceMm} mm); ${r.failures.length} mark(s) fail${curves ? `; ${curves}` : ''}`;
 }

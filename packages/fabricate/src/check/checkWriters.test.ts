@@ -1,5 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { checkDial, checkPlanar, layoutDial, layoutPlanar, parseSpec } from '@umbrafab/geometry';
+import { checkFailureLine } from './checkSummaryText.ts';
 import { checkTableText } from './checkTableText.ts';
 import { planarCheckText } from './planarCheckText.ts';
 import { toCheckJson } from './toCheckJson.ts';
@@ -67,5 +68,24 @@ describe('check writers', () => {
     const text = planarCheckText(tight);
     for (const c of bad) expect(text).toContain(`FAIL: curve ${c.label}: nodus shadow `);
     expect(text.match(/^FAIL: curve /gm)?.length).toBe(bad.length);
+  });
+
+  test("umbrafab check's failure line (checkFailureLine): one wording and one precision for the polar and the planar check", () => {
+    // The same shape either way: "mark <label> <edge>", the error to 4 decimals (a tenth of the 0.001 mm a mark is held to), the day, the count.
+    const shape = /^umbrafab check: mark \d\d:\d\d \w+( on the lower face)? is \d+\.\d{4} mm off the simulated shadow on 2027-\d\d-\d\d \(tolerance [\d.]+ mm\); \d+ mark\(s\) fail$/;
+    const polar = checkFailureLine(tilted, (f) => f.style);
+    const p0 = tilted.failures[0];
+    expect(polar).toMatch(shape);
+    expect(polar).toContain(`mark ${p0.label} ${p0.style} is ${Math.abs(p0.errorMm).toFixed(4)} mm off the simulated shadow on ${p0.date} (tolerance ${tilted.toleranceMm} mm); ${tilted.failures.length} mark(s) fail`);
+    // A planar face with one hour line moved 0.5 mm sideways (as an edited plate.dxf would have it).
+    const wall = layoutPlanar(parseSpec({ site: { latitude: 47.4, longitude: 8.5, timezone: 'Europe/Zurich' }, face: { type: 'vertical', wallDeclination: 24.5 }, gnomon: { height: 90, thickness: 4 }, hours: { from: '09:00', to: '15:00', step: 60 } }));
+    const k = wall.marks.findIndex((m) => m.label === '10:00');
+    const marks = wall.marks.map((m, i) => (i === k ? { ...m, a: [m.a[0] + 0.5, m.a[1]] as const, b: [m.b[0] + 0.5, m.b[1]] as const } : m));
+    const moved = checkPlanar(wall, { everyDays: 30, marks });
+    const q0 = moved.failures[0];
+    expect(q0.label).toBe('10:00');
+    const planar = checkFailureLine(moved, (f) => f.edge, ' on the lower face');
+    expect(planar).toMatch(shape);
+    expect(planar).toContain(`mark 10:00 ${q0.edge} on the lower face is ${Math.abs(q0.errorMm).toFixed(4)} mm off the simulated shadow on ${q0.date} (tolerance ${moved.toleranceMm} mm); 1 mark(s) fail`);
   });
 });
