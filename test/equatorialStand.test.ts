@@ -6,6 +6,7 @@ import { describe, expect, it } from 'vitest';
 import {
   equatorialStand,
   layoutPlanar,
+  METRIC_SIZES,
   parseSpec,
   pieceRows,
   placePoint,
@@ -62,6 +63,8 @@ const cases = [
   { name: 'lower face, 33.9° S, router, 6 mm plywood', raw: { ...fixture('equatorial-lower'), site: south, process: { method: 'router' }, plate: { thickness: 6, material: 'plywood' } } },
   { name: 'upper face, 40.6° N, printed', raw: { ...fixture('equatorial'), process: { method: 'print' } } },
   { name: 'lower face, 55° N, printed', raw: { ...fixture('equatorial-lower'), site: { latitude: 55, longitude: -3, timezone: 'Europe/London', place: 'North' }, process: { method: 'print' } } },
+  // Two holes at mid-length: a seat rail runs under them across the plate, behind the lower face (checked below: rails behind the plate's back, no shadow).
+  { name: 'lower face, 40.6° N, laser, holes.count 2', raw: { ...fixture('equatorial-lower'), holes: { count: 2 } } },
 ];
 
 const dot = (a: Vec3, b: Vec3) => a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
@@ -297,4 +300,74 @@ describe.each(cases)('equatorial stand: $name', ({ name, raw }) => {
       expect(norm(cross(sub(onRail, onPlate), n)), `fixing ${f.index} on one axis square to the face`).toBeLessThan(1e-6);
     }
   }, 120_000);
+});
+
+/**
+ * The mounting screws' heads and washers clear the engraving of the face they
+ * lie on, one face or both, holes.count 2 or 4: from plate.dxf as ezdxf reads
+ * it, shapely's distance from each mounting hole's centre to the engraved
+ * centre-lines of each face (LINE_SCORE, TEXT_ENGRAVE, their _LOWER layers),
+ * less half the widest engraved stroke, is at least the plain washer's radius
+ * (ISO 7089 outer diameter, the project's METRIC_SIZES, for the screw of
+ * report.json) + 1 mm; and with two mid-length holes one seat rail spans
+ * their row (the mid rail), which the stand cases above hold behind the
+ * plate's back, off the engraved face. (The layout keeps the engraving's box
+ * a washer radius + 1 mm from each hole centre, `plateMarginMm`; in these
+ * cases the numerals and title set the plate's size and the clearance is
+ * wider than that bound.)
+ */
+const CLEARANCE_PY = `
+import json, sys, ezdxf
+from shapely.geometry import LineString, Point
+from shapely.ops import unary_union
+doc = ezdxf.readfile(sys.argv[1])
+holes = json.loads(sys.argv[2])
+out = {}
+for suffix in ('', '_LOWER'):
+    lines = [LineString([(p[0], p[1]) for p in e.get_points('xy')]) for e in doc.modelspace() if e.dxftype() == 'LWPOLYLINE' and e.dxf.layer in ('LINE_SCORE' + suffix, 'TEXT_ENGRAVE' + suffix)]
+    if lines:
+        eng = unary_union(lines)
+        out[suffix or 'face'] = {'entities': len(lines), 'distances': [eng.distance(Point(x, y)) for x, y in holes]}
+print(json.dumps(out))
+`;
+
+const fixingCases = [
+  { name: 'upper face, holes.count 2', raw: { ...fixture('equatorial'), holes: { count: 2 } }, faces: 1 },
+  { name: 'lower face, holes.count 2', raw: { ...fixture('equatorial-lower'), holes: { count: 2 } }, faces: 1 },
+  { name: 'lower face, holes.count 2, M8 holes 6 mm in, plate.margin 0', raw: { ...fixture('equatorial-lower'), holes: { count: 2, diameter: 9, inset: 6 }, plate: { margin: 0 } }, faces: 1 },
+  { name: 'lower face, holes.count 4', raw: fixture('equatorial-lower'), faces: 1 },
+  { name: 'both faces, holes.count 4', raw: fixture('equatorial-both'), faces: 2 },
+];
+
+describe.each(fixingCases)('equatorial plate fixings: $name', ({ name, raw, faces }) => {
+  it('each washer (radius + 1 mm) clears every engraved line of the face it lies on; two holes have their mid rail', async () => {
+    const spec = parseSpec({ ...raw, pictures: { write: false } });
+    const result = await buildAnyFiles(spec);
+    const layout = layoutPlanar(spec);
+    const report = result.report as unknown as { stand: { fasteners: { item: string; size: string }[] } };
+    const washer = report.stand.fasteners.find((f) => f.item.startsWith('plain washer ISO 7089'))!;
+    const washerOdMm = METRIC_SIZES.find((m) => m.name === washer.size)!.washerOdMm;
+    const { substyleX, faceOriginY } = layout.plate;
+    const mounting = layout.plate.holes.filter((h) => !(Math.abs(h.cx - substyleX) < 1e-9 && Math.abs(h.cy - faceOriginY) < 1e-9));
+    expect(mounting.length).toBe(spec.holes.count);
+    const widest = Math.max(...[layout, ...(layout.lowerFace ? [layout.lowerFace] : [])].flatMap((f) => [...f.marks.map((m) => m.widthMm), ...[...f.numerals, ...f.title].map((t) => t.strokeWidthMm)]));
+    const dxf = join(dir, `fixings-${name.replace(/[^a-z0-9]+/gi, '-')}-plate.dxf`);
+    writeFileSync(dxf, result.files.find((f) => f.name === 'plate.dxf')!.bytes);
+    const got = JSON.parse(execFileSync('/usr/bin/python3', ['-c', CLEARANCE_PY, dxf, JSON.stringify(mounting.map((h) => [h.cx, h.cy]))], { encoding: 'utf8' })) as Record<string, { entities: number; distances: number[] }>;
+    expect(Object.keys(got).length).toBe(faces);
+    const need = washerOdMm / 2 + 1;
+    for (const [layers, g] of Object.entries(got)) {
+      // The unsuffixed layers hold the face of face.side (the upper one with both), _LOWER the lower face of both.
+      const face = layers === '_LOWER' ? 'lower' : spec.face!.side === 'both' ? 'upper' : spec.face!.side;
+      expect(g.entities).toBeGreaterThan(40);
+      const least = Math.min(...g.distances) - widest / 2;
+      console.log(`${name}, ${face} face: ${washer.size} washer Ø ${washerOdMm} mm, hole centre to the nearest engraved line ${least.toFixed(2)} mm (at least ${need.toFixed(2)})`);
+      expect(least).toBeGreaterThanOrEqual(need);
+    }
+    if (spec.holes.count === 2) {
+      const rails = equatorialStand(layout).dims.rails;
+      const row = mounting[0].cy;
+      expect(rails.some((r) => r.lowerEdgeMm < row - mounting[0].radiusMm && r.lowerEdgeMm + r.widthMm > row + mounting[0].radiusMm)).toBe(true);
+    }
+  }, 60_000);
 });
