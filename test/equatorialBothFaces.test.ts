@@ -186,6 +186,6 @@ describe('equatorial plate engraved on both faces (face.side both)', () => {
     const bad = await runCli(['check', SPEC, '--plate', file]);
     console.log(`equatorial both faces: lower line ${target.label} moved 0.5 mm -> ${bad.err.trim()}`);
     expect(bad.code).toBe(1);
-    expect(bad.err).toContain(`line ${target.label} plusF on the lower face is`);
+    expect(bad.err).toContain(`mark ${target.label} plusF on the lower face is`);
   }, 120_000);
 });
