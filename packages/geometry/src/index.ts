@@ -6,6 +6,7 @@
 export type { Vec2, Path, RoundedRect, Circle, Hemisphere, Mark, MarkKind } from './types.ts';
 export { isSpecError, formatValue, SpecError } from './errors.ts';
 export { DEG, assertFinite, assertInteger, assertNonNegative, assertPositive, assertRange } from './guards.ts';
+export { chordSag } from './calendar/refineByChord.ts';
 
 export { METHODS, type ProcessMethod, specSchema, type DialSpec } from './spec/schema.ts';
 export { parseSpec } from './spec/parseSpec.ts';
@@ -27,7 +28,7 @@ export { reliefToolRadius, plateSheetPart, finSheetPart, sheetParts, slotReliefs
 export { nestSheet } from './sheet/nestSheet.ts';
 export { arcSegments } from './sheet/arcPoints.ts';
 
-export { drawingStrokes, strokeOutlines, strokePolygons, type Stroke, type StrokeOutlines } from './outline/strokeOutlines.ts';
+export { drawingStrokes, strokeOutlines, strokePolygons, strokeUnion, type Stroke, type StrokeOutlines } from './outline/strokeOutlines.ts';
 
 export { CUT_LAYER_NAMES, type CutLayerKey } from './plate/cutLayerNames.ts';
 

@@ -1,4 +1,4 @@
-import { manifoldEngine, strokeOutlines, type Circle, type RoundedRect, type Stroke } from '@umbrafab/geometry';
+import { chordSag, manifoldEngine, shoelaceArea, strokeUnion, type Circle, type RoundedRect, type Stroke } from '@umbrafab/geometry';
 import type { EngraveJob, EngraveOperation, Vec2 } from './engraveInput.ts';
 import { roundSegments } from './toolCentrePaths.ts';
 
@@ -70,6 +70,57 @@ function rectPoly(r: RoundedRect): Poly {
   return [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];
 }
 
+/** A core thinner than twice this (mm) is a sliver of the offsets, not left unburned. */
+const SLIVER_MM = 1e-4;
+
+/** How many of a region's longest edges hasPointDeeperThan tries a point beside. */
+const DEEP_TRIES = 8;
+
+/**
+ * Whether some point of a region (its rings as the engine returns them:
+ * the region to the left of every edge) lies farther than `depth` from
+ * every edge. Then the region moved in by depth/3 with mitred joins (limit
+ * 2) is not empty: that offset moves no point of the outline more than
+ * twice the distance, so it never sweeps over the point. Tries the points
+ * 4/3·depth inside the middles of the longest edges; false when none of
+ * them shows it (the region may still be deep enough).
+ */
+function hasPointDeeperThan(rings: readonly (readonly [number, number][])[], depth: number): boolean {
+  const edges: { ring: readonly [number, number][]; i: number; len: number }[] = [];
+  for (const ring of rings) {
+    for (let i = 0; i < ring.length; i++) {
+      const [ax, ay] = ring[i];
+      const [bx, by] = ring[(i + 1) % ring.length];
+      edges.push({ ring, i, len: Math.hypot(bx - ax, by - ay) });
+    }
+  }
+  edges.sort((a, b) => b.len - a.len);
+  return edges.slice(0, DEEP_TRIES).some(({ ring, i, len }) => {
+    if (!(len > 0)) return false;
+    const [ax, ay] = ring[i];
+    const [bx, by] = ring[(i + 1) % ring.length];
+    const step = (4 / 3) * depth;
+    const x = (ax + bx) / 2 - ((by - ay) / len) * step;
+    const y = (ay + by) / 2 + ((bx - ax) / len) * step;
+    return windingNumber(rings, x, y) > 0 && rings.every((r) => r.every((p, j) => chordSag(p, [x, y], r[(j + 1) % r.length]) > depth));
+  });
+}
+
+/** The winding number of a set of rings about (x, y). */
+function windingNumber(rings: readonly (readonly [number, number][])[], x: number, y: number): number {
+  let w = 0;
+  for (const r of rings) {
+    for (let j = 0; j < r.length; j++) {
+      const [ax, ay] = r[j];
+      const [bx, by] = r[(j + 1) % r.length];
+      const side = (bx - ax) * (y - ay) - (x - ax) * (by - ay);
+      if (ay <= y && by > y && side > 0) w += 1;
+      else if (ay > y && by <= y && side < 0) w -= 1;
+    }
+  }
+  return w;
+}
+
 /**
  * The laser passes of a job (see the file comment). Deterministic: the same
  * job gives the same passes in the same order.
@@ -91,7 +142,8 @@ export async function laserFillPasses(job: EngraveJob, o: LaserFillOptions): Pro
     } else wide.push({ points: p.points, closed: p.closed, widthMm: p.widthMm, caps: p.operation === 'text' ? 'round' : 'butt' });
   }
   if (wide.length === 0) return { passes, scored, regions: 0, rings: 0, filledAreaMm2: 0, beamMm: o.beamMm, intervalMm: o.intervalMm };
-  const union = await strokeOutlines(wide, o.chordToleranceMm);
+  const union = await strokeUnion(wide, o.chordToleranceMm);
+  if (!union) return { passes, scored, regions: 0, rings: 0, filledAreaMm2: 0, beamMm: o.beamMm, intervalMm: o.intervalMm };
   const { CrossSection } = await manifoldEngine();
   const owned: { delete(): void }[] = [];
   const keep = <T extends { delete(): void }>(x: T): T => {
@@ -99,40 +151,44 @@ export async function laserFillPasses(job: EngraveJob, o: LaserFillOptions): Pro
     return x;
   };
   try {
-    const contours: Poly[] = union.regions.flatMap((r) => [r.outer, ...r.holes].map((ring) => ring.map((p): [number, number] => [p[0], p[1]])));
     const cuts: Poly[] = [...o.holes.map((h) => circlePoly(h, o.chordToleranceMm)), ...o.slots.map(rectPoly)];
-    let region = keep(new CrossSection(contours, 'Positive'));
+    let region = keep(union);
     if (cuts.length > 0) region = keep(region.subtract(keep(new CrossSection(cuts, 'Positive'))));
     const filledAreaMm2 = region.area();
     const segments = roundSegments(o.beamMm, o.chordToleranceMm);
     const half = o.beamMm / 2;
     // Concentric levels O_k = region moved in by beamMm/2 + k·intervalMm, until empty.
     const levels: InstanceType<typeof CrossSection>[] = [];
+    const levelRings: [number, number][][][] = [];
     for (let k = 0; k < 100000; k += 1) {
       const level = keep(region.offset(-(half + k * o.intervalMm), JOIN, 2, segments));
       if (level.isEmpty()) break;
       levels.push(level);
+      levelRings.push(level.toPolygons());
     }
-    // Regions: those of the first level (the region moved in by half a beam; none when that is empty).
-    const pieces = levels.length > 0 ? levels[0].decompose() : [];
-    const regions = pieces.length;
-    pieces.forEach((piece) => piece.delete());
+    // Regions: those of the first level (the region moved in by half a beam; none when that
+    // is empty), one per outer ring (counter-clockwise; holes run clockwise).
+    const regions = levels.length > 0 ? levelRings[0].filter((r) => shoelaceArea(r) > 0).length : 0;
     let rings = 0;
-    const ringPasses = (section: InstanceType<typeof CrossSection>, label: string): void => {
-      for (const poly of section.toPolygons()) {
+    const ringPasses = (polys: readonly [number, number][][], label: string): void => {
+      for (const poly of polys) {
         if (poly.length < 3) continue;
         passes.push({ points: poly.map((p): Vec2 => [p[0], p[1]]), closed: true, operation: 'fill', label });
         rings += 1;
       }
     };
     levels.forEach((level, k) => {
-      ringPasses(level, `fill ring ${k + 1}`);
+      ringPasses(levelRings[k], `fill ring ${k + 1}`);
       // The part of this level deeper than half a beam that the next ring's beam does not reach.
       const next = levels[k + 1];
       const deep = keep(level.offset(-half, JOIN, 2, segments));
       const core = next ? keep(deep.subtract(keep(next.offset(half, JOIN, 2, segments)))) : deep;
-      const slivers = keep(core.offset(-1e-4, JOIN, 2, segments));
-      if (!slivers.isEmpty()) ringPasses(core, `fill core after ring ${k + 1}`);
+      // Traced unless it is only slivers (nothing left once moved in by SLIVER_MM); the offset
+      // is asked only when no point of the core shows it plainly holds more.
+      const corePolys = core.toPolygons();
+      if (hasPointDeeperThan(corePolys, 3 * SLIVER_MM) || !keep(core.offset(-SLIVER_MM, JOIN, 2, segments)).isEmpty()) {
+        ringPasses(corePolys, `fill core after ring ${k + 1}`);
+      }
     });
     return { passes, scored, regions, rings, filledAreaMm2, beamMm: o.beamMm, intervalMm: o.intervalMm };
   } finally {

@@ -1,4 +1,4 @@
-import type { ManifoldToplevel } from 'manifold-3d';
+import type { CrossSection, ManifoldToplevel } from 'manifold-3d';
 import { manifoldEngine } from '../parts/manifoldEngine.ts';
 import type { DrawnLine, DrawnText } from '../plate/plateDrawing.ts';
 import { arcSegments, CHORD_TOLERANCE_MM } from '../sheet/arcPoints.ts';
@@ -57,10 +57,8 @@ export function drawingStrokes(lines: readonly DrawnLine[], text: readonly Drawn
  * @example (await strokeOutlines(drawingStrokes(d.lines, d.text))).rings
  */
 export async function strokeOutlines(strokes: readonly Stroke[], chordToleranceMm = CHORD_TOLERANCE_MM): Promise<StrokeOutlines> {
-  const { CrossSection } = await manifoldEngine();
-  const pieces = strokePolygons(strokes, chordToleranceMm, CrossSection);
-  if (pieces.length === 0) return { regions: [], rings: 0, areaMm2: 0, chordToleranceMm };
-  const union = new CrossSection(pieces, 'Positive');
+  const union = await strokeUnion(strokes, chordToleranceMm);
+  if (!union) return { regions: [], rings: 0, areaMm2: 0, chordToleranceMm };
   try {
     const parts = union.decompose();
     const regions: OutlineRegion[] = [];
@@ -87,6 +85,18 @@ export async function strokeOutlines(strokes: readonly Stroke[], chordToleranceM
   } finally {
     union.delete();
   }
+}
+
+/**
+ * The union of the strokes (as strokeOutlines) left in the polygon engine,
+ * for a caller that goes on with more offsets and booleans (a laser fill):
+ * it skips reading the rings out and handing them back in. Null when no
+ * stroke covers any area; otherwise the caller deletes it.
+ */
+export async function strokeUnion(strokes: readonly Stroke[], chordToleranceMm = CHORD_TOLERANCE_MM): Promise<CrossSection | null> {
+  const { CrossSection } = await manifoldEngine();
+  const pieces = strokePolygons(strokes, chordToleranceMm, CrossSection);
+  return pieces.length === 0 ? null : new CrossSection(pieces, 'Positive');
 }
 
 /**
