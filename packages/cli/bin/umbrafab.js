@@ -6,6 +6,15 @@
 import { pathToFileURL } from 'node:url';
 import { distEntry } from '../scripts/distEntry.mjs';
 
+// A reader that stops early (`umbrafab check spec.yaml | head -3`) closes the pipe: the rest of the
+// output has nowhere to go and is dropped, and the command still finishes and sets its exit code
+// (a build has written its files whole before it prints). Any other stream error is a real one.
+for (const stream of [process.stdout, process.stderr]) {
+  stream.on('error', (e) => {
+    if (e.code !== 'EPIPE' && e.code !== 'ERR_STREAM_DESTROYED') throw e;
+  });
+}
+
 let main;
 try {
   ({ main } = await import(pathToFileURL(await distEntry()).href));
