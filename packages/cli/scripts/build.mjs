@@ -199,9 +199,9 @@ function thirdPartyByRealPath(externals) {
   };
 }
 
-/** pdfkit's ES module build, the file the bundle takes in. */
 /** esbuild's namespace of the modules the bundle replaces (no file on disk: not a build input). */
 const LEFT_OUT = 'umbrafab-left-out';
+/** pdfkit's ES module build, the file the bundle takes in. */
 const PDFKIT_MODULE = /[\\/]pdfkit[\\/]js[\\/]pdfkit\.node\.mjs$/;
 
 /**
